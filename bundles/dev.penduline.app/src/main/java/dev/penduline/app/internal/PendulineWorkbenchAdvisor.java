@@ -1,0 +1,50 @@
+package dev.penduline.app.internal;
+
+import org.eclipse.core.resources.ResourcesPlugin;
+import org.eclipse.core.runtime.CoreException;
+import org.eclipse.core.runtime.ILog;
+import org.eclipse.core.runtime.NullProgressMonitor;
+import org.eclipse.ui.application.IWorkbenchConfigurer;
+import org.eclipse.ui.application.IWorkbenchWindowConfigurer;
+import org.eclipse.ui.application.WorkbenchAdvisor;
+import org.eclipse.ui.application.WorkbenchWindowAdvisor;
+import org.eclipse.ui.ide.IDE;
+
+import dev.penduline.ui.PendulineViews;
+
+/**
+ * Opens the Penduline perspective and keeps the workspace saved. Public (to the test bundle
+ * only) so that the workbench smoke test can run the real workbench with it.
+ */
+public class PendulineWorkbenchAdvisor extends WorkbenchAdvisor {
+
+    /** The window title of the main window. */
+    public static final String WINDOW_TITLE = PendulineWindowAdvisor.TITLE;
+
+    @Override
+    public void initialize(IWorkbenchConfigurer configurer) {
+        super.initialize(configurer);
+        configurer.setSaveAndRestore(true);
+        // Adapters that let the platform's views show workspace resources (labels, properties).
+        IDE.registerAdapters();
+    }
+
+    @Override
+    public String getInitialWindowPerspectiveId() {
+        return PendulineViews.PERSPECTIVE;
+    }
+
+    @Override
+    public WorkbenchWindowAdvisor createWorkbenchWindowAdvisor(IWorkbenchWindowConfigurer configurer) {
+        return new PendulineWindowAdvisor(configurer);
+    }
+
+    @Override
+    public void postShutdown() {
+        try {
+            ResourcesPlugin.getWorkspace().save(true, new NullProgressMonitor());
+        } catch (CoreException e) {
+            ILog.of(getClass()).log(e.getStatus());
+        }
+    }
+}

@@ -1,0 +1,40 @@
+package dev.penduline.cli;
+
+import java.io.PrintWriter;
+import java.util.List;
+
+/** One subcommand of the command line. */
+public interface Command {
+
+    /**
+     * The word that selects this command, e.g. {@code inertia}.
+     *
+     * @return the command's name
+     */
+    String name();
+
+    /**
+     * One line saying what the command does, shown by {@code help}.
+     *
+     * @return the summary
+     */
+    String summary();
+
+    /**
+     * The usage text shown by {@code help NAME}.
+     *
+     * @return the usage, several lines
+     */
+    String usage();
+
+    /**
+     * Runs the command.
+     *
+     * @param args the arguments after the command's name
+     * @param out  where results go
+     * @param err  where warnings go
+     * @return the exit code
+     * @throws UsageException when the arguments or an input file are wrong
+     */
+    ExitCode run(List<String> args, PrintWriter out, PrintWriter err) throws UsageException;
+}

@@ -1,0 +1,114 @@
+package dev.penduline.cli;
+
+import java.io.PrintWriter;
+import java.util.ArrayList;
+import java.util.Arrays;
+import java.util.LinkedHashMap;
+import java.util.List;
+import java.util.Map;
+
+/** Dispatches {@code penduline COMMAND ...} to its {@link Command}; prints help and versions. */
+public final class PendulineCommandLine {
+
+    private static final String PROGRAM = "penduline";
+
+    private final Map<String, Command> commands = new LinkedHashMap<>();
+
+    /** Creates the command line with every built-in command. */
+    public PendulineCommandLine() {
+        this(List.of());
+    }
+
+    /**
+     * Creates the command line with the given commands (for tests and later additions).
+     *
+     * @param extra the commands, in the order {@code help} lists them
+     */
+    public PendulineCommandLine(List<Command> extra) {
+        for (Command c : extra) {
+            commands.put(c.name(), c);
+        }
+    }
+
+    /**
+     * Runs one invocation.
+     *
+     * @param args the program's arguments
+     * @param out  where results go
+     * @param err  where errors and warnings go
+     * @return the exit code
+     */
+    public ExitCode run(String[] args, PrintWriter out, PrintWriter err) {
+        if (args.length == 0) {
+            printHelp(out);
+            return ExitCode.USAGE_OR_INPUT;
+        }
+        String first = args[0];
+        switch (first) {
+            case "--version", "-V", "version" -> {
+                out.println(PROGRAM + " " + Version.current());
+                return ExitCode.OK;
+            }
+            case "help", "--help", "-h" -> {
+                return help(Arrays.copyOfRange(args, 1, args.length), out, err);
+            }
+            default -> {
+                Command command = commands.get(first);
+                if (command == null) {
+                    err.println(PROGRAM + ": unknown command '" + first + "'. Commands: " + commandNames()
+                            + ". Run '" + PROGRAM + " help' for what each does.");
+                    return ExitCode.USAGE_OR_INPUT;
+                }
+                try {
+                    return command.run(new ArrayList<>(List.of(args).subList(1, args.length)), out, err);
+                } catch (UsageException e) {
+                    err.println(PROGRAM + " " + command.name() + ": " + e.getMessage());
+                    return ExitCode.USAGE_OR_INPUT;
+                }
+            }
+        }
+    }
+
+    private ExitCode help(String[] rest, PrintWriter out, PrintWriter err) {
+        if (rest.length == 0) {
+            printHelp(out);
+            return ExitCode.OK;
+        }
+        Command command = commands.get(rest[0]);
+        if (command == null) {
+            err.println(PROGRAM + " help: unknown command '" + rest[0] + "'. Commands: " + commandNames() + ".");
+            return ExitCode.USAGE_OR_INPUT;
+        }
+        out.println(command.usage());
+        return ExitCode.OK;
+    }
+
+    private void printHelp(PrintWriter out) {
+        out.println("Penduline " + Version.current()
+                + " - pivoted mechanisms: inertia, swing tests, friction identification.");
+        out.println();
+        out.println("Usage: " + PROGRAM + " COMMAND [OPTIONS]");
+        out.println();
+        out.println("Commands:");
+        List<String[]> rows = new ArrayList<>();
+        for (Command c : commands.values()) {
+            rows.add(new String[] {c.name(), c.summary()});
+        }
+        rows.add(new String[] {"gui", "open the Penduline workbench (handled by the ./penduline script)"});
+        rows.add(new String[] {"help [COMMAND]", "list the commands, or show one command's options"});
+        rows.add(new String[] {"--version", "print the version"});
+        int width = rows.stream().mapToInt(r -> r[0].length()).max().orElse(0);
+        for (String[] r : rows) {
+            out.printf("  %-" + width + "s  %s%n", r[0], r[1]);
+        }
+        out.println();
+        out.println("Exit codes: 0 ok, 1 a computation failed, 2 a usage or input error.");
+    }
+
+    private String commandNames() {
+        List<String> names = new ArrayList<>(commands.keySet());
+        names.add("gui");
+        names.add("help");
+        return String.join(", ", names);
+    }
+}

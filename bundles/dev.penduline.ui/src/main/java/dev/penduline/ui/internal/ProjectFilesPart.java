@@ -1,0 +1,74 @@
+package dev.penduline.ui.internal;
+
+import jakarta.annotation.PostConstruct;
+import jakarta.annotation.PreDestroy;
+
+import org.eclipse.core.resources.IResourceChangeEvent;
+import org.eclipse.core.resources.IResourceChangeListener;
+import org.eclipse.core.resources.IWorkspace;
+import org.eclipse.core.resources.ResourcesPlugin;
+import org.eclipse.e4.ui.workbench.modeling.ESelectionService;
+import org.eclipse.jface.viewers.IStructuredSelection;
+import org.eclipse.jface.viewers.TreeViewer;
+import org.eclipse.swt.SWT;
+import org.eclipse.swt.widgets.Composite;
+import org.eclipse.ui.model.WorkbenchContentProvider;
+import org.eclipse.ui.model.WorkbenchLabelProvider;
+
+import jakarta.inject.Inject;
+
+/**
+ * The workspace as a tree: one project per mechanism, with its mechanism file, parts lists and
+ * swing records. Content and labels come from the platform's workbench adapters; the selection
+ * feeds the Properties view.
+ */
+public final class ProjectFilesPart {
+
+    private final ESelectionService selection;
+    private TreeViewer viewer;
+    private IResourceChangeListener refresher;
+
+    /**
+     * Created by the workbench.
+     *
+     * @param selection the part's selection service
+     */
+    @Inject
+    public ProjectFilesPart(ESelectionService selection) {
+        this.selection = selection;
+    }
+
+    /**
+     * Builds the tree.
+     *
+     * @param parent the part's composite
+     */
+    @PostConstruct
+    public void create(Composite parent) {
+        viewer = new TreeViewer(parent, SWT.MULTI | SWT.H_SCROLL | SWT.V_SCROLL);
+        viewer.setContentProvider(new WorkbenchContentProvider());
+        viewer.setLabelProvider(WorkbenchLabelProvider.getDecoratingWorkbenchLabelProvider());
+        IWorkspace workspace = ResourcesPlugin.getWorkspace();
+        viewer.setInput(workspace.getRoot());
+        viewer.addSelectionChangedListener(e -> selection.setSelection(
+                e.getSelection() instanceof IStructuredSelection s && s.size() == 1 ? s.getFirstElement() : e.getSelection()));
+        refresher = event -> {
+            if (event.getType() == IResourceChangeEvent.POST_CHANGE && !viewer.getControl().isDisposed()) {
+                viewer.getControl().getDisplay().asyncExec(() -> {
+                    if (!viewer.getControl().isDisposed()) {
+                        viewer.refresh();
+                    }
+                });
+            }
+        };
+        workspace.addResourceChangeListener(refresher, IResourceChangeEvent.POST_CHANGE);
+    }
+
+    /** Stops listening to the workspace. */
+    @PreDestroy
+    public void dispose() {
+        if (refresher != null) {
+            ResourcesPlugin.getWorkspace().removeResourceChangeListener(refresher);
+        }
+    }
+}

@@ -1,0 +1,32 @@
+#!/usr/bin/env bash
+# The one test command (README "Run the tests"): installs what the build and its tests need
+# when missing (Xvfb, xauth and GTK 3 from Debian; Maven 3.9 into .tools/), then builds
+# everything and runs all tests: the plain JUnit tests of the headless bundles and the OSGi and
+# workbench tests under a virtual display. Extra arguments go to Maven (e.g. -o, -pl ...).
+set -euo pipefail
+root="$(cd "$(dirname "${BASH_SOURCE[0]}")/../.." && pwd)"
+cd "$root"
+
+need=()
+command -v xvfb-run >/dev/null 2>&1 || need+=(xvfb)
+command -v xauth >/dev/null 2>&1 || need+=(xauth)
+dpkg -s libgtk-3-0 >/dev/null 2>&1 || dpkg -s libgtk-3-0t64 >/dev/null 2>&1 || need+=(libgtk-3-0)
+command -v mvn >/dev/null 2>&1 || need+=(maven)
+if [ ${#need[@]} -gt 0 ]; then
+  if [ "$(id -u)" -ne 0 ]; then
+    echo "test.sh: missing ${need[*]}; run as root or install them: apt-get install ${need[*]}" >&2
+    exit 2
+  fi
+  echo "test.sh: installing ${need[*]} from Debian" >&2
+  apt-get update -qq
+  DEBIAN_FRONTEND=noninteractive apt-get install -y -qq "${need[@]}" >/dev/null
+fi
+
+export JAVA_HOME="$("$root/releng/scripts/find-jdk.sh")"
+mvn="$("$root/releng/scripts/bootstrap-maven.sh")"
+opts=(-B)
+if [ "${CI:-}" = "true" ]; then
+  opts+=(-ntp)
+fi
+echo "test.sh: JDK $JAVA_HOME, $("$mvn" -v | head -n 1)" >&2
+exec xvfb-run -a -s "-screen 0 1400x900x24" "$mvn" "${opts[@]}" clean verify "$@"
