@@ -17,6 +17,11 @@ if ! command -v mvn >/dev/null 2>&1; then
 fi
 mkdir -p "$tools"
 echo "penduline: bootstrapping Maven $MAVEN_VERSION into .tools/ (one-time download)" >&2
+# Run the system Maven outside the checkout: it would otherwise load .mvn/extensions.xml
+# (tycho-build), which Maven 3.8 cannot run ("No implementation for ... was bound").
+scratch="$(mktemp -d)"
+trap 'rm -rf "$scratch"' EXIT
+cd "$scratch"
 mvn -q -B dependency:copy \
   -Dartifact="org.apache.maven:apache-maven:$MAVEN_VERSION:tar.gz:bin" \
   -DoutputDirectory="$tools" -Dmdep.overWriteReleases=true >&2
