@@ -7,6 +7,8 @@ import java.util.LinkedHashMap;
 import java.util.List;
 import java.util.Map;
 
+import dev.penduline.cli.commands.InertiaCommand;
+
 /** Dispatches {@code penduline COMMAND ...} to its {@link Command}; prints help and versions. */
 public final class PendulineCommandLine {
 
@@ -16,7 +18,7 @@ public final class PendulineCommandLine {
 
     /** Creates the command line with every built-in command. */
     public PendulineCommandLine() {
-        this(List.of());
+        this(List.of(new InertiaCommand()));
     }
 
     /**

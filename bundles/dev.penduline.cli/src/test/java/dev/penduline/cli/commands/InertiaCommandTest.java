@@ -1,0 +1,76 @@
+package dev.penduline.cli.commands;
+
+import static org.junit.jupiter.api.Assertions.assertEquals;
+import static org.junit.jupiter.api.Assertions.assertTrue;
+
+import java.io.IOException;
+import java.io.PrintWriter;
+import java.io.StringWriter;
+import java.nio.file.Files;
+import java.nio.file.Path;
+import java.util.regex.Matcher;
+import java.util.regex.Pattern;
+
+import org.junit.jupiter.api.Test;
+import org.junit.jupiter.api.io.TempDir;
+
+import dev.penduline.cli.ExitCode;
+import dev.penduline.cli.PendulineCommandLine;
+
+class InertiaCommandTest {
+
+    @TempDir
+    Path dir;
+
+    private final StringWriter out = new StringWriter();
+    private final StringWriter err = new StringWriter();
+
+    private ExitCode run(String... args) {
+        return new PendulineCommandLine().run(args, new PrintWriter(out, true), new PrintWriter(err, true));
+    }
+
+    private static double number(String json, String key) {
+        Matcher m = Pattern.compile("\"" + key + "\": ([-0-9.eE]+)").matcher(json);
+        assertTrue(m.find(), key + " missing in " + json);
+        return Double.parseDouble(m.group(1));
+    }
+
+    @Test
+    void slenderRodHungFromItsEndGivesTheHandbookInertia() throws IOException {
+        // Slender rod about its end: J0 = m L²/3 (Meriam & Kraige, Dynamics, Table D/4);
+        // m = 3 kg, L = 1.2 m: J0 = 1.44 kg·m², Lc = 0.6 m, Leq = 2L/3 = 0.8 m.
+        Path csv = Files.writeString(dir.resolve("arm.csv"),
+                "name,shape,mass_kg,x_m,y_m,z_m,length_m,axis\narm,rod,3,0,-0.6,0,1.2,y\n");
+        assertEquals(ExitCode.OK, run("inertia", csv.toString(), "--json"), err.toString());
+        String json = out.toString();
+        assertEquals(3.0, number(json, "mass_kg"), 1e-12);
+        assertEquals(1.44, number(json, "pivot_inertia_kg_m2"), 1e-12);
+        assertEquals(0.6, number(json, "centroid_distance_m"), 1e-12);
+        assertEquals(0.8, number(json, "equivalent_length_m"), 1e-12);
+        assertEquals(1.0, number(json, "share"), 1e-12);
+    }
+
+    @Test
+    void readableReportEndsWithTheCaution() throws IOException {
+        Path csv = Files.writeString(dir.resolve("bob.csv"), "name,shape,mass_kg,x_m,y_m,z_m\nbob,point,2,0,-1,0\n");
+        assertEquals(ExitCode.OK, run("inertia", csv.toString()));
+        assertTrue(out.toString().contains("inertia about the pivot J0      2 kg·m²"), out.toString());
+        assertTrue(out.toString().contains("Caution"), out.toString());
+    }
+
+    @Test
+    void aBadCellIsAnInputErrorNamingFileLineAndColumn() throws IOException {
+        Path csv = Files.writeString(dir.resolve("bad.csv"), "name,shape,mass_kg,x_m,y_m,z_m\nbob,point,abc,0,-1,0\n");
+        assertEquals(ExitCode.USAGE_OR_INPUT, run("inertia", csv.toString()));
+        assertTrue(err.toString().contains("bad.csv:2") && err.toString().contains("mass_kg"), err.toString());
+    }
+
+    @Test
+    void aMissingFileAndAMissingArgumentAreUsageErrors() {
+        assertEquals(ExitCode.USAGE_OR_INPUT, run("inertia", dir.resolve("none.csv").toString()));
+        assertTrue(err.toString().contains("no such file"), err.toString());
+        assertEquals(ExitCode.USAGE_OR_INPUT, run("inertia"));
+        assertEquals(ExitCode.USAGE_OR_INPUT, run("inertia", "x.csv", "--frobnicate"));
+        assertTrue(err.toString().contains("unknown option --frobnicate"), err.toString());
+    }
+}

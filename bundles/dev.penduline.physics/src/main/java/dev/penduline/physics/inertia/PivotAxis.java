@@ -1,0 +1,51 @@
+package dev.penduline.physics.inertia;
+
+/**
+ * The axis a mechanism turns about: a point on it and its direction, in the mechanism frame.
+ *
+ * @param point     any point on the axis (m)
+ * @param direction the axis direction; stored as a unit vector. Angles about the axis are
+ *                  positive by the right-hand rule about this direction.
+ */
+public record PivotAxis(Vector3 point, Vector3 direction) {
+
+    /** The default axis: z through the origin. */
+    public static final PivotAxis Z_THROUGH_ORIGIN = new PivotAxis(Vector3.ZERO, Vector3.PLUS_Z);
+
+    /**
+     * Checks the axis and normalises its direction.
+     *
+     * @throws IllegalArgumentException for a zero or non-finite direction or point
+     */
+    public PivotAxis {
+        if (point == null || !point.isFinite()) {
+            throw new IllegalArgumentException("pivot axis point must be a finite position, got " + point);
+        }
+        if (direction == null || !direction.isFinite() || !(direction.norm() > 0)) {
+            throw new IllegalArgumentException("pivot axis direction must be a non-zero finite vector, got " + direction);
+        }
+        direction = direction.normalized();
+    }
+
+    /**
+     * The component of {@code p − point} perpendicular to the axis: the offset of {@code p} from
+     * the axis.
+     *
+     * @param p a position in the mechanism frame (m)
+     * @return the perpendicular offset (m)
+     */
+    public Vector3 perpendicularOffset(Vector3 p) {
+        final Vector3 r = p.minus(point);
+        return r.minus(direction.times(r.dot(direction)));
+    }
+
+    /**
+     * Perpendicular distance of a point from the axis.
+     *
+     * @param p a position in the mechanism frame (m)
+     * @return the distance (m)
+     */
+    public double distanceTo(Vector3 p) {
+        return perpendicularOffset(p).norm();
+    }
+}

@@ -1,0 +1,176 @@
+package dev.penduline.records.parts;
+
+import java.util.EnumSet;
+import java.util.List;
+import java.util.Locale;
+import java.util.OptionalDouble;
+import java.util.Set;
+
+import dev.penduline.physics.inertia.Axis;
+import dev.penduline.physics.inertia.Box;
+import dev.penduline.physics.inertia.Cylinder;
+import dev.penduline.physics.inertia.InertiaTensor;
+import dev.penduline.physics.inertia.Orientation;
+import dev.penduline.physics.inertia.Part;
+import dev.penduline.physics.inertia.PartShape;
+import dev.penduline.physics.inertia.PartTolerance;
+import dev.penduline.physics.inertia.PointMass;
+import dev.penduline.physics.inertia.SlenderRod;
+import dev.penduline.physics.inertia.Sphere;
+import dev.penduline.physics.inertia.TensorCheck;
+import dev.penduline.physics.inertia.ThinRing;
+import dev.penduline.physics.inertia.Vector3;
+import dev.penduline.records.RecordFormatException;
+
+/** Turns one data line of a parts list into a {@link Part}. */
+final class PartLine {
+
+    private static final List<String> SHAPES = List.of("point", "rod", "box", "cylinder", "sphere", "ring", "tensor");
+    private static final Set<PartsColumn> GEOMETRY = EnumSet.of(PartsColumn.LENGTH, PartsColumn.WIDTH,
+            PartsColumn.HEIGHT, PartsColumn.RADIUS, PartsColumn.INNER_RADIUS, PartsColumn.AXIS, PartsColumn.IXX,
+            PartsColumn.IYY, PartsColumn.IZZ, PartsColumn.IXY, PartsColumn.IXZ, PartsColumn.IYZ);
+    private static final List<PartsColumn> TENSOR = List.of(PartsColumn.IXX, PartsColumn.IYY, PartsColumn.IZZ,
+            PartsColumn.IXY, PartsColumn.IXZ, PartsColumn.IYZ);
+
+    private PartLine() {
+    }
+
+    static Part toPart(PartsRow row, List<String> warnings) throws RecordFormatException {
+        if (row.hasExtraCells()) {
+            throw new RecordFormatException(row.file(), row.line(), null,
+                    "the line has more fields than the header; quote fields that contain commas");
+        }
+        final String name = row.text(PartsColumn.NAME)
+                .orElseThrow(() -> row.error(PartsColumn.NAME, "empty: every part needs a name"));
+        final String kind = row.text(PartsColumn.SHAPE).map(s -> s.toLowerCase(Locale.ROOT))
+                .orElseThrow(() -> row.error(PartsColumn.SHAPE, "empty: use one of " + String.join(", ", SHAPES)));
+        final String why = "by a " + kind;
+        final Set<PartsColumn> used = EnumSet.noneOf(PartsColumn.class);
+        final PartShape shape = switch (kind) {
+            case "point" -> new PointMass();
+            case "rod" -> new SlenderRod(length(row, why, used), axis(row, why, used));
+            case "box" -> box(row, why, used);
+            case "cylinder" -> cylinder(row, why, used);
+            case "sphere" -> new Sphere(positive(row, PartsColumn.RADIUS, why, used));
+            case "ring" -> new ThinRing(positive(row, PartsColumn.RADIUS, why, used), axis(row, why, used));
+            case "tensor" -> null;
+            default -> throw row.error(PartsColumn.SHAPE, "'" + kind + "' is not a shape: use one of "
+                    + String.join(", ", SHAPES));
+        };
+        for (PartsColumn c : GEOMETRY) {
+            if (!used.contains(c) && row.isFilled(c) && !(shape == null && TENSOR.contains(c))) {
+                warnings.add(row.file() + ":" + row.line() + ": column '" + row.headerName(c)
+                        + "' is not used by a " + kind + " and is ignored");
+            }
+        }
+        final Vector3 centroid = new Vector3(coordinate(row, PartsColumn.X), coordinate(row, PartsColumn.Y),
+                coordinate(row, PartsColumn.Z));
+        final double mass = mass(row, shape, kind);
+        final Part base = shape == null
+                ? Part.ofTensor(name, mass, centroid, tensor(row))
+                : new Part(name, shape, mass, centroid, Orientation.IDENTITY, false, 1, PartTolerance.NONE);
+        return base.withCutout(cutout(row)).withQuantity(quantity(row))
+                .withTolerance(new PartTolerance(row.nonNegative(PartsColumn.MASS_TOL), row.nonNegative(PartsColumn.DIM_TOL)));
+    }
+
+    private static double coordinate(PartsRow row, PartsColumn c) throws RecordFormatException {
+        return row.required(c, "for the part's centroid");
+    }
+
+    private static double positive(PartsRow row, PartsColumn c, String why, Set<PartsColumn> used)
+            throws RecordFormatException {
+        used.add(c);
+        return row.requiredPositive(c, why);
+    }
+
+    private static double length(PartsRow row, String why, Set<PartsColumn> used) throws RecordFormatException {
+        return positive(row, PartsColumn.LENGTH, why, used);
+    }
+
+    private static Axis axis(PartsRow row, String why, Set<PartsColumn> used) throws RecordFormatException {
+        used.add(PartsColumn.AXIS);
+        final String t = row.text(PartsColumn.AXIS)
+                .orElseThrow(() -> row.error(PartsColumn.AXIS, "empty, but it is needed " + why + " (x, y or z)"));
+        try {
+            return Axis.parse(t);
+        } catch (IllegalArgumentException e) {
+            throw row.error(PartsColumn.AXIS, e.getMessage());
+        }
+    }
+
+    private static Box box(PartsRow row, String why, Set<PartsColumn> used) throws RecordFormatException {
+        final double a = positive(row, PartsColumn.LENGTH, why, used);
+        final double b = positive(row, PartsColumn.WIDTH, why, used);
+        final double c = positive(row, PartsColumn.HEIGHT, why, used);
+        return new Box(a, b, c);
+    }
+
+    private static Cylinder cylinder(PartsRow row, String why, Set<PartsColumn> used) throws RecordFormatException {
+        final double r = positive(row, PartsColumn.RADIUS, why, used);
+        used.add(PartsColumn.INNER_RADIUS);
+        final double ri = row.nonNegative(PartsColumn.INNER_RADIUS);
+        if (ri >= r) {
+            throw row.error(PartsColumn.INNER_RADIUS, "inner radius '" + row.text(PartsColumn.INNER_RADIUS).orElse("")
+                    + "' must be less than the radius '" + row.text(PartsColumn.RADIUS).orElse("") + "'");
+        }
+        return new Cylinder(r, ri, length(row, why, used), axis(row, why, used));
+    }
+
+    private static InertiaTensor tensor(PartsRow row) throws RecordFormatException {
+        final double[] v = new double[TENSOR.size()];
+        for (int i = 0; i < v.length; i++) {
+            v[i] = row.required(TENSOR.get(i), "by a tensor");
+        }
+        final InertiaTensor t = new InertiaTensor(v[0], v[1], v[2], v[3], v[4], v[5]);
+        final List<String> problems = TensorCheck.violations(t);
+        if (!problems.isEmpty()) {
+            throw new RecordFormatException(row.file(), row.line(), null,
+                    "the inertia tensor is not physical: " + String.join("; ", problems));
+        }
+        return t;
+    }
+
+    private static double mass(PartsRow row, PartShape shape, String kind) throws RecordFormatException {
+        final OptionalDouble mass = row.number(PartsColumn.MASS);
+        final OptionalDouble density = row.number(PartsColumn.DENSITY);
+        if (mass.isPresent() && density.isPresent()) {
+            throw row.error(PartsColumn.MASS, "give either the mass or the density ('"
+                    + row.headerName(PartsColumn.DENSITY) + "'), not both");
+        }
+        if (mass.isPresent()) {
+            row.requirePositive(PartsColumn.MASS, mass.getAsDouble());
+            return mass.getAsDouble();
+        }
+        if (density.isEmpty()) {
+            throw row.error(PartsColumn.MASS, "empty: give the part's mass (or its density)");
+        }
+        row.requirePositive(PartsColumn.DENSITY, density.getAsDouble());
+        if (shape == null || shape.volume().isEmpty()) {
+            throw row.error(PartsColumn.DENSITY, "a " + kind + " has no volume, so its mass cannot come from a"
+                    + " density; give '" + row.headerName(PartsColumn.MASS) + "' instead");
+        }
+        return density.getAsDouble() * shape.volume().getAsDouble();
+    }
+
+    private static boolean cutout(PartsRow row) throws RecordFormatException {
+        final String t = row.text(PartsColumn.CUTOUT).orElse("false");
+        return switch (t.toLowerCase(Locale.ROOT)) {
+            case "true" -> true;
+            case "false" -> false;
+            default -> throw row.error(PartsColumn.CUTOUT, "'" + t + "' is not true or false");
+        };
+    }
+
+    private static int quantity(PartsRow row) throws RecordFormatException {
+        final String t = row.text(PartsColumn.QUANTITY).orElse("1");
+        try {
+            final int q = Integer.parseInt(t);
+            if (q >= 1) {
+                return q;
+            }
+        } catch (NumberFormatException e) {
+            // reported below with the file, line and column
+        }
+        throw row.error(PartsColumn.QUANTITY, "'" + t + "' is not a whole number of at least 1");
+    }
+}

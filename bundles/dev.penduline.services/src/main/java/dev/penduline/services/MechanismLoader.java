@@ -1,0 +1,136 @@
+package dev.penduline.services;
+
+import java.io.IOException;
+import java.nio.file.NoSuchFileException;
+import java.nio.file.Path;
+import java.util.ArrayList;
+import java.util.List;
+import java.util.Locale;
+import java.util.Optional;
+
+import dev.penduline.physics.MechanismProperties;
+import dev.penduline.physics.inertia.InertiaSummary;
+import dev.penduline.physics.inertia.Part;
+import dev.penduline.physics.inertia.PivotInertia;
+import dev.penduline.records.RecordFormatException;
+import dev.penduline.records.parts.PartsList;
+import dev.penduline.records.parts.PartsListReader;
+
+/**
+ * Loads a mechanism from a parts-list CSV or from lumped properties, and computes its inertia
+ * about the pivot. The one place where the command line and the workbench do this.
+ */
+public final class MechanismLoader {
+
+    private final PivotInertia engine;
+
+    /** A loader with the default frame: pivot on the z-axis, gravity along −y, standard g. */
+    public MechanismLoader() {
+        this(PivotInertia.DEFAULT);
+    }
+
+    /**
+     * A loader with another frame or gravity.
+     *
+     * @param engine the inertia engine (axis, gravity direction, local g)
+     */
+    public MechanismLoader(PivotInertia engine) {
+        this.engine = engine;
+    }
+
+    /**
+     * Returns a loader for another local gravity.
+     *
+     * @param g local gravitational acceleration (m/s²)
+     * @return the loader
+     */
+    public MechanismLoader withGravity(double g) {
+        return new MechanismLoader(engine.withGravity(g));
+    }
+
+    /**
+     * Loads a mechanism from a file, chosen by its extension: {@code .csv} is a parts list.
+     *
+     * @param file the file
+     * @return the mechanism with its inertia breakdown
+     * @throws InputException when the file is missing, unreadable, malformed or inconsistent
+     */
+    public MechanismSource load(Path file) throws InputException {
+        String name = file.getFileName() == null ? file.toString() : file.getFileName().toString();
+        String lower = name.toLowerCase(Locale.ROOT);
+        if (lower.endsWith(".csv") || lower.endsWith(".txt") || lower.endsWith(".tsv")) {
+            return loadPartsList(file);
+        }
+        throw new InputException(file + ": unknown kind of mechanism file; give a parts list (.csv)");
+    }
+
+    /**
+     * Loads a parts-list CSV and computes the inertia.
+     *
+     * @param file the parts list
+     * @return the mechanism with its inertia breakdown
+     * @throws InputException when the file is missing, unreadable, malformed or inconsistent
+     */
+    public MechanismSource loadPartsList(Path file) throws InputException {
+        PartsList list;
+        try {
+            list = new PartsListReader().read(file);
+        } catch (NoSuchFileException e) {
+            throw new InputException(file + ": no such file", e);
+        } catch (IOException e) {
+            throw new InputException(file + ": cannot be read (" + e.getMessage() + ")", e);
+        } catch (RecordFormatException e) {
+            throw new InputException(e.getMessage(), e);
+        }
+        return summarise(file.toString(), list.parts(), list.warnings());
+    }
+
+    /**
+     * Computes the inertia of parts already in memory (from a mechanism file, say).
+     *
+     * @param label    where the parts came from
+     * @param parts    the parts
+     * @param warnings warnings gathered while reading them
+     * @return the mechanism with its inertia breakdown
+     * @throws InputException when the parts are physically inconsistent
+     */
+    public MechanismSource summarise(String label, List<Part> parts,
+            List<String> warnings) throws InputException {
+        List<String> problems = engine.problems(parts);
+        InertiaSummary summary;
+        try {
+            summary = engine.compute(parts);
+        } catch (IllegalArgumentException e) {
+            throw new InputException(label + ": " + e.getMessage(), e);
+        }
+        MechanismProperties properties;
+        try {
+            properties = summary.toMechanismProperties();
+        } catch (IllegalArgumentException e) {
+            throw new InputException(label + ": " + e.getMessage(), e);
+        }
+        List<String> all = new ArrayList<>(warnings);
+        all.addAll(problems);
+        return new MechanismSource(label, properties, Optional.of(summary), all);
+    }
+
+    /**
+     * A mechanism given by its lumped properties, without parts.
+     *
+     * @param mass             total mass (kg)
+     * @param centroidDistance pivot-to-centroid distance (m)
+     * @param pivotInertia     inertia about the pivot (kg·m²)
+     * @param gravity          local gravity (m/s²)
+     * @return the mechanism
+     * @throws InputException when the values are inconsistent (e.g. J0 &lt; m·Lc²)
+     */
+    public static MechanismSource lumped(double mass, double centroidDistance, double pivotInertia, double gravity)
+            throws InputException {
+        try {
+            MechanismProperties p = new MechanismProperties(mass, centroidDistance, pivotInertia, 0, gravity, 0);
+            return new MechanismSource("lumped properties", p, Optional.empty(), List.of());
+        } catch (IllegalArgumentException e) {
+            throw new InputException("mechanism options: " + e.getMessage(), e);
+        }
+    }
+}
