@@ -29,4 +29,6 @@ if [ "${CI:-}" = "true" ]; then
   opts+=(-ntp)
 fi
 echo "test.sh: JDK $JAVA_HOME, $("$mvn" -v | head -n 1)" >&2
+# Generated EMF code must be what the genmodel generates (never hand-edited).
+"$root/releng/scripts/regenerate-model.sh" --check
 exec xvfb-run -a -s "-screen 0 1400x900x24" "$mvn" "${opts[@]}" clean verify "$@"

@@ -7,6 +7,7 @@ import java.util.LinkedHashMap;
 import java.util.List;
 import java.util.Map;
 
+import dev.penduline.cli.commands.ImportPartsCommand;
 import dev.penduline.cli.commands.InertiaCommand;
 
 /** Dispatches {@code penduline COMMAND ...} to its {@link Command}; prints help and versions. */
@@ -18,7 +19,7 @@ public final class PendulineCommandLine {
 
     /** Creates the command line with every built-in command. */
     public PendulineCommandLine() {
-        this(List.of(new InertiaCommand()));
+        this(List.of(new InertiaCommand(), new ImportPartsCommand()));
     }
 
     /**

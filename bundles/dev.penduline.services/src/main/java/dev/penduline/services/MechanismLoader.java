@@ -8,6 +8,12 @@ import java.util.List;
 import java.util.Locale;
 import java.util.Optional;
 
+import dev.penduline.model.Mechanism;
+import dev.penduline.model.adapt.MechanismAdapter;
+import dev.penduline.model.persistence.MechanismFileException;
+import dev.penduline.model.persistence.MechanismFiles;
+import dev.penduline.model.persistence.MechanismFormat;
+import dev.penduline.model.validation.MechanismValidation;
 import dev.penduline.physics.MechanismProperties;
 import dev.penduline.physics.inertia.InertiaSummary;
 import dev.penduline.physics.inertia.Part;
@@ -17,12 +23,13 @@ import dev.penduline.records.parts.PartsList;
 import dev.penduline.records.parts.PartsListReader;
 
 /**
- * Loads a mechanism from a parts-list CSV or from lumped properties, and computes its inertia
+ * Loads a mechanism from a mechanism file, a parts-list CSV or lumped properties, and computes its inertia
  * about the pivot. The one place where the command line and the workbench do this.
  */
 public final class MechanismLoader {
 
     private final PivotInertia engine;
+    private final boolean gravityOverride;
 
     /** A loader with the default frame: pivot on the z-axis, gravity along −y, standard g. */
     public MechanismLoader() {
@@ -35,7 +42,12 @@ public final class MechanismLoader {
      * @param engine the inertia engine (axis, gravity direction, local g)
      */
     public MechanismLoader(PivotInertia engine) {
+        this(engine, false);
+    }
+
+    private MechanismLoader(PivotInertia engine, boolean gravityOverride) {
         this.engine = engine;
+        this.gravityOverride = gravityOverride;
     }
 
     /**
@@ -45,11 +57,12 @@ public final class MechanismLoader {
      * @return the loader
      */
     public MechanismLoader withGravity(double g) {
-        return new MechanismLoader(engine.withGravity(g));
+        return new MechanismLoader(engine.withGravity(g), true);
     }
 
     /**
-     * Loads a mechanism from a file, chosen by its extension: {@code .csv} is a parts list.
+     * Loads a mechanism from a file, chosen by its extension: {@code .csv} is a parts list,
+     * {@code .penduline} a mechanism file.
      *
      * @param file the file
      * @return the mechanism with its inertia breakdown
@@ -61,7 +74,60 @@ public final class MechanismLoader {
         if (lower.endsWith(".csv") || lower.endsWith(".txt") || lower.endsWith(".tsv")) {
             return loadPartsList(file);
         }
-        throw new InputException(file + ": unknown kind of mechanism file; give a parts list (.csv)");
+        if (lower.endsWith("." + MechanismFormat.FILE_EXTENSION)) {
+            return loadMechanismFile(file);
+        }
+        throw new InputException(file + ": unknown kind of mechanism file; give a mechanism file (."
+                + MechanismFormat.FILE_EXTENSION + ") or a parts list (.csv)");
+    }
+
+    /**
+     * Loads a mechanism file, validates it (every problem at once) and computes its inertia.
+     * The engine's frame comes from the file (pivot axis, gravity direction, tilt, local g)
+     * unless this loader was given another gravity.
+     *
+     * @param file the mechanism file
+     * @return the mechanism with its inertia breakdown
+     * @throws InputException when the file is missing, malformed or fails validation
+     */
+    public MechanismSource loadMechanismFile(Path file) throws InputException {
+        Mechanism mechanism = readMechanism(file);
+        List<String> errors = MechanismValidation.errors(mechanism);
+        if (!errors.isEmpty()) {
+            throw new InputException(file + ": " + errors.size() + " problem(s) to fix:\n  "
+                    + String.join("\n  ", errors));
+        }
+        List<String> warnings = new ArrayList<>(MechanismValidation.problems(mechanism));
+        warnings.removeAll(errors);
+        PivotInertia frame;
+        List<Part> parts;
+        try {
+            frame = MechanismAdapter.pivotInertia(mechanism);
+            if (gravityOverride) {
+                frame = frame.withGravity(engine.gravity());
+            }
+            parts = MechanismAdapter.parts(mechanism);
+        } catch (IllegalArgumentException e) {
+            throw new InputException(file + ": " + e.getMessage(), e);
+        }
+        String label = mechanism.getName() == null || mechanism.getName().isBlank() ? file.toString()
+                : mechanism.getName() + " (" + file + ")";
+        return new MechanismLoader(frame).summarise(label, parts, warnings);
+    }
+
+    /**
+     * Reads a mechanism file without computing anything.
+     *
+     * @param file the mechanism file
+     * @return the mechanism
+     * @throws InputException with file, line and column when it cannot be read
+     */
+    public static Mechanism readMechanism(Path file) throws InputException {
+        try {
+            return MechanismFiles.load(file);
+        } catch (MechanismFileException e) {
+            throw new InputException(e.getMessage(), e);
+        }
     }
 
     /**

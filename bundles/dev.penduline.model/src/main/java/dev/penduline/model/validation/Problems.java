@@ -1,0 +1,47 @@
+package dev.penduline.model.validation;
+
+import org.eclipse.emf.common.util.BasicDiagnostic;
+import org.eclipse.emf.common.util.Diagnostic;
+import org.eclipse.emf.common.util.DiagnosticChain;
+import org.eclipse.emf.ecore.EObject;
+import org.eclipse.emf.ecore.EStructuralFeature;
+
+/** Collects the diagnostics of one element's rules; works with or without a chain. */
+final class Problems {
+
+    private final DiagnosticChain chain;
+    private boolean clean = true;
+
+    Problems(DiagnosticChain chain) {
+        this.chain = chain;
+    }
+
+    void error(MechanismRule rule, EObject object, EStructuralFeature feature, String message) {
+        add(Diagnostic.ERROR, rule, object, feature, message);
+    }
+
+    void warning(MechanismRule rule, EObject object, EStructuralFeature feature, String message) {
+        add(Diagnostic.WARNING, rule, object, feature, message);
+    }
+
+    /** True while no error or warning was added. */
+    boolean clean() {
+        return clean;
+    }
+
+    private void add(int severity, MechanismRule rule, EObject object, EStructuralFeature feature, String message) {
+        clean = false;
+        if (chain != null) {
+            final Object[] data = feature == null ? new Object[] {object} : new Object[] {object, feature};
+            chain.add(new BasicDiagnostic(severity, MechanismRule.SOURCE, rule.code(), message, data));
+        }
+    }
+
+    static boolean positive(double v) {
+        return v > 0 && Double.isFinite(v);
+    }
+
+    static boolean blank(String s) {
+        return s == null || s.isBlank();
+    }
+}

@@ -1,0 +1,178 @@
+package dev.penduline.services;
+
+import java.io.IOException;
+import java.math.BigDecimal;
+import java.math.MathContext;
+import java.nio.file.Files;
+import java.nio.file.NoSuchFileException;
+import java.nio.file.Path;
+import java.util.List;
+
+import dev.penduline.model.Mechanism;
+import dev.penduline.model.ShapeAxis;
+import dev.penduline.model.ShapeKind;
+import dev.penduline.model.TensorReference;
+import dev.penduline.model.naming.NamedElements;
+import dev.penduline.model.persistence.MechanismFileException;
+import dev.penduline.model.persistence.MechanismFiles;
+import dev.penduline.physics.inertia.Axis;
+import dev.penduline.physics.inertia.Box;
+import dev.penduline.physics.inertia.Cylinder;
+import dev.penduline.physics.inertia.GivenTensor;
+import dev.penduline.physics.inertia.InertiaTensor;
+import dev.penduline.physics.inertia.Part;
+import dev.penduline.physics.inertia.PointMass;
+import dev.penduline.physics.inertia.SlenderRod;
+import dev.penduline.physics.inertia.Sphere;
+import dev.penduline.physics.inertia.ThinRing;
+import dev.penduline.records.RecordFormatException;
+import dev.penduline.records.parts.PartsList;
+import dev.penduline.records.parts.PartsListReader;
+
+/**
+ * Turns a parts list (a BOM or CAD export read by the parts-list reader) into a mechanism file,
+ * so that the project carries its parts, versioned next to the CAD. Masses are stored as the
+ * list gave them or as density × volume; dimensions, positions and tensors in SI.
+ */
+public final class PartsImport {
+
+    private static final MathContext TWELVE_DIGITS = new MathContext(12);
+
+    private PartsImport() {
+    }
+
+    /**
+     * Creates a mechanism holding the parts of a list.
+     *
+     * @param name  the mechanism's name
+     * @param parts the parts as read
+     * @return the new mechanism (not saved)
+     */
+    public static Mechanism toMechanism(String name, PartsList parts) {
+        Mechanism m = NamedElements.mechanism(name);
+        m.setDescription("Imported from " + Path.of(parts.source()).getFileName());
+        for (Part p : parts.parts()) {
+            add(m, p);
+        }
+        return m;
+    }
+
+    /**
+     * Writes a new mechanism file from a parts list; refuses to overwrite an existing file.
+     *
+     * @param name   the mechanism's name
+     * @param parts  the parts as read
+     * @param target the mechanism file to create
+     * @throws InputException when the target exists or cannot be written
+     */
+    public static void write(String name, PartsList parts, Path target) throws InputException {
+        if (Files.exists(target)) {
+            throw new InputException(target + ": already exists; choose another name or remove it first");
+        }
+        try {
+            MechanismFiles.save(toMechanism(name, parts), target);
+        } catch (MechanismFileException e) {
+            throw new InputException(e.getMessage(), e);
+        }
+    }
+
+    /**
+     * Reads a parts-list CSV and writes it as a new mechanism file.
+     *
+     * @param partsList the parts-list CSV
+     * @param target    the mechanism file to create (must not exist)
+     * @param name      the mechanism's name
+     * @return the warnings of reading the list (ignored columns and the like)
+     * @throws InputException when the list is bad, or the target exists or cannot be written
+     */
+    public static List<String> importFile(Path partsList, Path target, String name) throws InputException {
+        PartsList parts;
+        try {
+            parts = new PartsListReader().read(partsList);
+        } catch (NoSuchFileException e) {
+            throw new InputException(partsList + ": no such file", e);
+        } catch (IOException e) {
+            throw new InputException(partsList + ": cannot be read (" + e.getMessage() + ")", e);
+        } catch (RecordFormatException e) {
+            throw new InputException(e.getMessage(), e);
+        }
+        write(name, parts, target);
+        return parts.warnings();
+    }
+
+    private static void add(Mechanism m, Part p) {
+        dev.penduline.model.Part q = NamedElements.addPart(m, p.name());
+        q.setMass(tidy(p.mass()));
+        q.setCentroidX(tidy(p.centroid().x()));
+        q.setCentroidY(tidy(p.centroid().y()));
+        q.setCentroidZ(tidy(p.centroid().z()));
+        q.setCutout(p.cutout());
+        q.setQuantity(p.quantity());
+        q.setMassTolerance(tidy(p.tolerance().mass()));
+        q.setDimensionTolerance(tidy(p.tolerance().dimension()));
+        if (!p.orientation().isIdentity() && !(p.shape() instanceof GivenTensor)) {
+            throw new IllegalArgumentException("part '" + p.name()
+                    + "': a rotated standard shape cannot come from a parts list");
+        }
+        switch (p.shape()) {
+            case PointMass s -> q.setShape(ShapeKind.POINT_MASS);
+            case SlenderRod s -> {
+                q.setShape(ShapeKind.SLENDER_ROD);
+                q.setLength(tidy(s.length()));
+                q.setShapeAxis(axis(s.axis()));
+            }
+            case Box s -> {
+                q.setShape(ShapeKind.BOX);
+                q.setLength(tidy(s.lengthX()));
+                q.setWidth(tidy(s.widthY()));
+                q.setHeight(tidy(s.heightZ()));
+            }
+            case Cylinder s -> {
+                q.setShape(s.innerRadius() > 0 ? ShapeKind.HOLLOW_CYLINDER : ShapeKind.CYLINDER);
+                q.setRadius(tidy(s.radius()));
+                q.setInnerRadius(tidy(s.innerRadius()));
+                q.setLength(tidy(s.length()));
+                q.setShapeAxis(axis(s.axis()));
+            }
+            case Sphere s -> {
+                q.setShape(ShapeKind.SPHERE);
+                q.setRadius(tidy(s.radius()));
+            }
+            case ThinRing s -> {
+                q.setShape(ShapeKind.THIN_RING);
+                q.setRadius(tidy(s.radius()));
+                q.setShapeAxis(axis(s.axis()));
+            }
+            case GivenTensor s -> {
+                // The parts list gives the tensor about the centroid in the mechanism frame;
+                // the part's own tensor is scaled to its mass (GivenTensor scales with mass).
+                InertiaTensor t = p.centroidalInertia();
+                double scale = 1.0 / (p.cutout() ? -p.quantity() : p.quantity());
+                q.setShape(ShapeKind.MASS_PROPERTIES);
+                q.setTensorReference(TensorReference.CENTROID);
+                q.setIxx(tidy(t.xx() * scale));
+                q.setIyy(tidy(t.yy() * scale));
+                q.setIzz(tidy(t.zz() * scale));
+                q.setIxy(tidy(t.xy() * scale));
+                q.setIxz(tidy(t.xz() * scale));
+                q.setIyz(tidy(t.yz() * scale));
+            }
+        }
+    }
+
+    /**
+     * Rounds to 12 significant digits, far below any measurement's precision, so that unit
+     * conversion leftovers (0.0065000000000000001 from 6.5 mm) do not reach the file.
+     */
+    private static double tidy(double v) {
+        return v == 0 || !Double.isFinite(v) ? v : new BigDecimal(v).round(TWELVE_DIGITS).doubleValue();
+    }
+
+    private static ShapeAxis axis(Axis a) {
+        return switch (a) {
+            case X -> ShapeAxis.X;
+            case Y -> ShapeAxis.Y;
+            case Z -> ShapeAxis.Z;
+        };
+    }
+}
