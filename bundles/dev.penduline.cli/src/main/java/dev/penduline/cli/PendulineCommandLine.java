@@ -9,6 +9,7 @@ import java.util.Map;
 
 import dev.penduline.cli.commands.ImportPartsCommand;
 import dev.penduline.cli.commands.InertiaCommand;
+import dev.penduline.cli.commands.SimulateCommand;
 
 /** Dispatches {@code penduline COMMAND ...} to its {@link Command}; prints help and versions. */
 public final class PendulineCommandLine {
@@ -19,7 +20,7 @@ public final class PendulineCommandLine {
 
     /** Creates the command line with every built-in command. */
     public PendulineCommandLine() {
-        this(List.of(new InertiaCommand(), new ImportPartsCommand()));
+        this(List.of(new InertiaCommand(), new SimulateCommand(), new ImportPartsCommand()));
     }
 
     /**

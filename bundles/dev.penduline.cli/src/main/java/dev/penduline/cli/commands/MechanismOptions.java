@@ -1,0 +1,88 @@
+package dev.penduline.cli.commands;
+
+import java.nio.file.Path;
+import java.util.HashSet;
+import java.util.List;
+import java.util.Set;
+
+import dev.penduline.cli.Arguments;
+import dev.penduline.cli.UsageException;
+import dev.penduline.physics.MechanismProperties;
+import dev.penduline.services.InputException;
+import dev.penduline.services.MechanismLoader;
+import dev.penduline.services.MechanismSource;
+
+/**
+ * The ways a command is told which mechanism it is about: a mechanism file, a parts list, or
+ * the lumped properties {@code --mass --centroid-distance --pivot-inertia} (with
+ * {@code --gravity} in every case).
+ */
+final class MechanismOptions {
+
+    /** Options that take a value. */
+    static final Set<String> VALUE_OPTIONS = Set.of("mass", "centroid-distance", "pivot-inertia", "gravity");
+
+    /** Usage lines for the options. */
+    static final String USAGE = """
+              FILE | --mass KG --centroid-distance M --pivot-inertia KG_M2
+                               the mechanism: a mechanism file (.penduline), a parts list (.csv),
+                               or its lumped properties
+              --gravity M_S2   local gravity (default 9.80665 m/s², or the mechanism file's)""";
+
+    private MechanismOptions() {
+    }
+
+    /**
+     * The mechanism options together with a command's own value options.
+     *
+     * @param own the command's options
+     * @return an unmodifiable set of both
+     */
+    static Set<String> with(String... own) {
+        Set<String> all = new HashSet<>(VALUE_OPTIONS);
+        all.addAll(List.of(own));
+        return Set.copyOf(all);
+    }
+
+    /**
+     * Whether lumped properties were given.
+     *
+     * @param a the arguments
+     * @return true when any of --mass, --centroid-distance, --pivot-inertia is present
+     */
+    static boolean lumpedGiven(Arguments a) {
+        return a.has("mass") || a.has("centroid-distance") || a.has("pivot-inertia");
+    }
+
+    /**
+     * Resolves the mechanism.
+     *
+     * @param a    the arguments
+     * @param file the mechanism or parts file, or null when lumped properties are expected
+     * @return the mechanism
+     * @throws UsageException when neither or both ways are given, or the input is bad
+     */
+    static MechanismSource resolve(Arguments a, String file) throws UsageException {
+        try {
+            if (lumpedGiven(a)) {
+                if (file != null) {
+                    throw new UsageException("give either a mechanism file or --mass/--centroid-distance/"
+                            + "--pivot-inertia, not both");
+                }
+                return MechanismLoader.lumped(a.requiredNumber("mass"), a.requiredNumber("centroid-distance"),
+                        a.requiredNumber("pivot-inertia"), a.number("gravity", MechanismProperties.STANDARD_GRAVITY));
+            }
+            if (file == null) {
+                throw new UsageException("which mechanism? Give a mechanism file (.penduline), a parts list (.csv), "
+                        + "or --mass, --centroid-distance and --pivot-inertia");
+            }
+            MechanismLoader loader = new MechanismLoader();
+            if (a.has("gravity")) {
+                loader = loader.withGravity(a.number("gravity", Double.NaN));
+            }
+            return loader.load(Path.of(file));
+        } catch (InputException e) {
+            throw new UsageException(e.getMessage());
+        }
+    }
+}

@@ -1,0 +1,179 @@
+package dev.penduline.cli.commands;
+
+import java.io.PrintWriter;
+import java.nio.file.Path;
+import java.util.List;
+import java.util.Locale;
+import java.util.Set;
+
+import dev.penduline.cli.Arguments;
+import dev.penduline.cli.Command;
+import dev.penduline.cli.ExitCode;
+import dev.penduline.cli.UsageException;
+import dev.penduline.cli.json.JsonWriter;
+import dev.penduline.physics.motion.FrictionTorques;
+import dev.penduline.physics.motion.SwingEnergy;
+import dev.penduline.physics.motion.SwingRun;
+import dev.penduline.physics.motion.TurningPoint;
+import dev.penduline.physics.units.Unit;
+import dev.penduline.services.AtomicFiles;
+import dev.penduline.services.InputException;
+import dev.penduline.services.MechanismSource;
+import dev.penduline.services.SwingPrediction;
+
+/** {@code penduline simulate}: the free swing of a mechanism with chosen friction torques. */
+public final class SimulateCommand implements Command {
+
+    private static final Set<String> OPTIONS = MechanismOptions.with("theta0-deg", "omega0-deg-s", "viscous",
+            "coulomb", "stiction", "drag", "duration", "rate", "out");
+
+    @Override
+    public String name() {
+        return "simulate";
+    }
+
+    @Override
+    public String summary() {
+        return "simulate a free swing with viscous, Coulomb, stiction and drag torques";
+    }
+
+    @Override
+    public String usage() {
+        return """
+                Usage: penduline simulate (FILE | --mass KG --centroid-distance M --pivot-inertia KG_M2)
+                                          --theta0-deg DEG [options]
+
+                Integrates the nonlinear swing (event-driven at every reversal, with the stick test
+                of static friction) and prints the periods, turning points, stop and rest angle and
+                the energy each friction term dissipated. Angles are from the hanging equilibrium.
+
+                """ + MechanismOptions.USAGE + """
+
+                  --theta0-deg DEG      release angle (required)
+                  --omega0-deg-s DEG_S  initial angular velocity (default 0: released from rest)
+                  --viscous B           viscous torque coefficient, N·m·s/rad (default 0)
+                  --coulomb TC          dry (Coulomb) friction torque, N·m (default 0)
+                  --stiction TS         static friction torque, N·m, at least TC (default: TC)
+                  --drag C              quadratic (air) drag coefficient, N·m·s²/rad² (default 0)
+                  --duration S          simulated time (default 20 s)
+                  --rate HZ             output samples per second (default 1000)
+                  --out FILE.csv        write time_s,angle_deg,velocity_deg_s
+                  --json                print a JSON object instead of the summary""";
+    }
+
+    @Override
+    public ExitCode run(List<String> args, PrintWriter out, PrintWriter err) throws UsageException {
+        Arguments a = Arguments.parse(args, OPTIONS, Set.of("json"));
+        if (a.positional().size() > 1) {
+            throw new UsageException("at most one mechanism file; got " + a.positional());
+        }
+        MechanismSource mechanism = MechanismOptions.resolve(a, a.positional().isEmpty() ? null : a.positional().get(0));
+        for (String w : mechanism.warnings()) {
+            err.println("warning: " + w);
+        }
+        double theta0 = Unit.DEGREE.toSi(a.requiredNumber("theta0-deg"));
+        double omega0 = Unit.DEG_PER_S.toSi(a.number("omega0-deg-s", 0));
+        FrictionTorques friction;
+        try {
+            friction = new FrictionTorques(a.number("viscous", 0), a.number("coulomb", 0), a.number("stiction", 0),
+                    a.number("drag", 0));
+        } catch (IllegalArgumentException e) {
+            throw new UsageException(e.getMessage());
+        }
+        SwingRun run;
+        try {
+            run = SwingPrediction.simulate(mechanism, friction, theta0, omega0, a.number("duration", 20),
+                    a.number("rate", 1000));
+            if (a.has("out")) {
+                writeCsv(Path.of(a.value("out")), run);
+            }
+        } catch (InputException e) {
+            throw new UsageException(e.getMessage());
+        }
+        if (a.flag("json")) {
+            writeJson(run, new JsonWriter(out));
+        } else {
+            writeSummary(mechanism, friction, theta0, run, out);
+            if (a.has("out")) {
+                out.println("Wrote " + run.size() + " samples to " + a.value("out"));
+            }
+        }
+        return ExitCode.OK;
+    }
+
+    private static void writeCsv(Path file, SwingRun run) throws InputException {
+        double[] t = run.times();
+        double[] th = run.angles();
+        double[] w = run.velocities();
+        AtomicFiles.write(file, o -> {
+            o.write("time_s,angle_deg,velocity_deg_s\n");
+            StringBuilder line = new StringBuilder(64);
+            for (int i = 0; i < t.length; i++) {
+                line.setLength(0);
+                line.append(t[i]).append(',').append(Unit.DEGREE.fromSi(th[i])).append(',')
+                        .append(Unit.DEG_PER_S.fromSi(w[i])).append('\n');
+                o.write(line.toString());
+            }
+        });
+    }
+
+    private static void writeJson(SwingRun run, JsonWriter j) {
+        SwingEnergy e = run.energy();
+        j.beginObject();
+        j.field("periods_s", run.periods());
+        j.field("half_swing_durations_s", run.halfSwingDurations());
+        j.name("turning_points").beginArray();
+        for (TurningPoint p : run.turningPoints()) {
+            j.beginObject().field("time_s", p.time()).field("angle_deg", Unit.DEGREE.fromSi(p.angle())).endObject();
+        }
+        j.endArray();
+        j.field("stopped", run.stopped())
+                .field("stop_time_s", run.stopTime())
+                .field("rest_angle_deg", Unit.DEGREE.fromSi(run.restAngle()))
+                .field("samples", run.size());
+        j.name("energy_dissipated_J").beginObject()
+                .field("viscous", e.viscous()).field("coulomb", e.coulomb()).field("drag", e.drag()).endObject();
+        j.name("energy_J").beginObject()
+                .field("initial", e.initial()).field("kinetic_final", e.kinetic()).field("potential_final", e.potential())
+                .field("applied", e.applied()).field("imbalance", e.imbalance()).endObject();
+        j.field("smoothed", run.smoothed());
+        j.endObject().finish();
+    }
+
+    private static void writeSummary(MechanismSource m, FrictionTorques f, double theta0, SwingRun run,
+            PrintWriter out) {
+        out.println("Swing of " + m.label());
+        out.printf(Locale.ROOT, "  released at %s° (small-angle period %s s)%n",
+                Numbers.significant(Unit.DEGREE.fromSi(theta0)), Numbers.significant(m.properties().smallAnglePeriod()));
+        out.printf(Locale.ROOT, "  friction: viscous %s N·m·s/rad, Coulomb %s N·m, stiction %s N·m, drag %s N·m·s²/rad²%n",
+                Numbers.significant(f.viscous()), Numbers.significant(f.coulomb()),
+                Numbers.significant(f.staticTorque()), Numbers.significant(f.drag()));
+        out.println();
+        double[] periods = run.periods();
+        List<TurningPoint> tps = run.turningPoints();
+        out.printf("  %d turning points, %d full-cycle periods%n", tps.size(), periods.length);
+        int shown = Math.min(periods.length, 5);
+        for (int i = 0; i < shown; i++) {
+            out.printf(Locale.ROOT, "    cycle %d: period %s s%n", i + 1, Numbers.significant(periods[i]));
+        }
+        if (periods.length > shown) {
+            out.printf(Locale.ROOT, "    ... last cycle: period %s s%n", Numbers.significant(periods[periods.length - 1]));
+        }
+        if (run.stopped()) {
+            out.printf(Locale.ROOT, "  came to rest at %s s, %s° from the hanging equilibrium%n",
+                    Numbers.significant(run.stopTime()), Numbers.significant(Unit.DEGREE.fromSi(run.restAngle())));
+        } else {
+            double last = run.angles()[run.size() - 1];
+            out.printf(Locale.ROOT, "  still moving at the end (%s°)%n", Numbers.significant(Unit.DEGREE.fromSi(last)));
+        }
+        SwingEnergy e = run.energy();
+        out.printf(Locale.ROOT, "  energy: released with %s J; dissipated viscous %s J, Coulomb %s J, drag %s J%n",
+                Numbers.significant(e.initial()), Numbers.significant(e.viscous()), Numbers.significant(e.coulomb()),
+                Numbers.significant(e.drag()));
+        if (run.smoothed()) {
+            out.println("  note: the friction sign was smoothed (not the exact dry-friction model)");
+        }
+        out.println();
+        out.println(Caution.TEXT);
+    }
+}
