@@ -10,6 +10,7 @@ import java.util.ArrayList;
 import java.util.List;
 
 import dev.penduline.physics.inertia.Part;
+import dev.penduline.records.DelimitedLine;
 import dev.penduline.records.RecordFormatException;
 
 /**
@@ -100,7 +101,7 @@ public final class PartsListReader {
             if (line.isBlank() || line.stripLeading().startsWith("#")) {
                 continue;
             }
-            final List<String> cells = CsvLine.split(line, fileName, lineNumber);
+            final List<String> cells = DelimitedLine.split(line, ',', fileName, lineNumber);
             if (header == null) {
                 header = PartsHeader.parse(cells, fileName, lineNumber);
                 warnings.addAll(header.warnings());

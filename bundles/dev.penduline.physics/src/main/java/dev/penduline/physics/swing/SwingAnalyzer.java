@@ -1,0 +1,260 @@
+package dev.penduline.physics.swing;
+
+import java.util.ArrayList;
+import java.util.Arrays;
+import java.util.List;
+import java.util.Locale;
+import java.util.Optional;
+
+import org.hipparchus.special.elliptic.legendre.LegendreEllipticIntegral;
+
+import dev.penduline.physics.MechanismProperties;
+import dev.penduline.physics.motion.EllipticSwing;
+
+/**
+ * Turns a free-release record (times and angles in SI) into a prepared swing and its decay
+ * analysis: release, zero offset, turning points, periods against the large-amplitude
+ * prediction, envelopes, the decrement regression, a verdict on the dominant loss and first
+ * friction estimates. Immutable; {@code withX} return copies.
+ */
+public final class SwingAnalyzer {
+
+    private final MechanismProperties mechanism;
+    private final ReleaseDetector detector;
+    private final double dominance;
+
+    /** An analyzer without a mechanism (no period prediction, no friction estimates). */
+    public SwingAnalyzer() {
+        this(null, new ReleaseDetector(), 0.6);
+    }
+
+    private SwingAnalyzer(MechanismProperties mechanism, ReleaseDetector detector, double dominance) {
+        this.mechanism = mechanism;
+        this.detector = detector;
+        this.dominance = dominance;
+    }
+
+    /**
+     * Returns a copy that knows the mechanism.
+     *
+     * @param properties mass properties of the body, or null when unknown
+     * @return the copy
+     */
+    public SwingAnalyzer withMechanism(MechanismProperties properties) {
+        return new SwingAnalyzer(properties, detector, dominance);
+    }
+
+    /**
+     * Returns a copy with another release detector.
+     *
+     * @param releaseDetector the detector
+     * @return the copy
+     */
+    public SwingAnalyzer withReleaseDetector(ReleaseDetector releaseDetector) {
+        return new SwingAnalyzer(mechanism, releaseDetector, dominance);
+    }
+
+    /**
+     * Returns a copy with another share a loss needs to be called dominant.
+     *
+     * @param share fraction of the mean decrement (dimensionless), in (0.34, 1]
+     * @return the copy
+     */
+    public SwingAnalyzer withDominance(double share) {
+        if (!(share > 0.34 && share <= 1)) {
+            throw new IllegalArgumentException("share must be in (0.34, 1], got " + share);
+        }
+        return new SwingAnalyzer(mechanism, detector, share);
+    }
+
+    /**
+     * Finds the release, trims, finds the turning points and the equilibrium and smooths the
+     * velocity.
+     *
+     * @param t     sample times (s), finite and strictly increasing; not modified
+     * @param theta angles in the sensor's frame (rad), finite; not modified
+     * @return the prepared swing
+     * @throws IllegalArgumentException naming the first bad sample, or when the record does not
+     *                                  swing
+     */
+    public PreparedSwing prepare(double[] t, double[] theta) {
+        check(t, theta);
+        final Release release = detector.detect(t, theta);
+        final double[] tt = Arrays.copyOfRange(t, release.index(), t.length);
+        final double[] th = Arrays.copyOfRange(theta, release.index(), theta.length);
+        if (tt.length < 10) {
+            throw new IllegalArgumentException("only " + tt.length + " samples after the release at "
+                    + release.time() + " s: too short to analyse");
+        }
+        final SwingOutline outline = TurningPointFinder.find(tt, th, release);
+        final ZeroOffset offset = ZeroOffsetEstimator.estimate(outline.points(), outline.settledLevel(),
+                release.noise());
+        final List<MeasuredTurningPoint> points = new ArrayList<>();
+        for (MeasuredTurningPoint p : outline.points()) {
+            points.add(p.withAmplitudeFrom(offset.value()));
+        }
+        final double step = RobustStatistics.medianStep(tt);
+        final double period = Double.isFinite(outline.period()) ? outline.period() : tt[tt.length - 1] - tt[0];
+        SavitzkyGolay filter = SavitzkyGolay.forSwing(step, period);
+        final int maxHalf = (tt.length - 1) / 2;
+        if (filter.halfWidth() > maxHalf) {
+            filter = new SavitzkyGolay(maxHalf, Math.min(3, 2 * maxHalf));
+        }
+        return new PreparedSwing(tt, th, filter.derivative(tt, th), release, offset, points, filter, outline);
+    }
+
+    /**
+     * Prepares and analyses a record.
+     *
+     * @param t     sample times (s), finite and strictly increasing
+     * @param theta angles in the sensor's frame (rad)
+     * @return the analysis
+     */
+    public SwingAnalysis analyse(double[] t, double[] theta) {
+        return analyse(prepare(t, theta));
+    }
+
+    /**
+     * Analyses the decay of a prepared swing.
+     *
+     * @param swing the prepared swing
+     * @return the analysis
+     */
+    public SwingAnalysis analyse(PreparedSwing swing) {
+        final List<String> warnings = new ArrayList<>();
+        final Release release = swing.release();
+        if (!release.fromRest()) {
+            warnings.add("no still segment before the motion: the release time and θ0 are those of the first sample");
+        }
+        if (swing.offset().method() != ZeroOffset.Method.SWING_SYMMETRY) {
+            warnings.add("zero offset " + swing.offset().note());
+        }
+        final List<MeasuredTurningPoint> all = swing.turningPoints();
+        final List<MeasuredTurningPoint> usable = new ArrayList<>();
+        for (MeasuredTurningPoint p : all) {
+            if (p.amplitude() < 2 * swing.noiseBand()) {
+                break;
+            }
+            usable.add(p);
+        }
+        if (usable.size() < all.size()) {
+            warnings.add((all.size() - usable.size()) + " late turning point(s) within twice the noise band ("
+                    + fmt(2 * swing.noiseBand()) + " rad) were left out of the decrement analysis");
+        }
+        final List<HalfSwing> halves = new ArrayList<>();
+        for (int i = 0; i + 1 < usable.size(); i++) {
+            halves.add(HalfSwing.between(i, usable.get(i), usable.get(i + 1)));
+        }
+        final List<SwingCycle> cycles = cycles(usable);
+        final PeriodCheck periodCheck = periodCheck(cycles, warnings);
+        final double[] amplitudes = usable.stream().mapToDouble(MeasuredTurningPoint::amplitude).toArray();
+        final List<DecayEnvelope> envelopes = EnvelopeFitter.fit(amplitudes);
+        final double[] mean = halves.stream().mapToDouble(HalfSwing::meanAmplitude).toArray();
+        final double[] decrement = halves.stream().mapToDouble(HalfSwing::equivalentDecrement).toArray();
+        final DecrementRegression regression = DecrementFitter.fit(mean, decrement);
+        if (halves.size() < 4) {
+            warnings.add("only " + halves.size() + " half-swings: the decrement regression is weak");
+        }
+        final LossVerdict verdict = VerdictRules.judge(regression, mean, envelopes, dominance);
+        Optional<FrictionEstimates> estimates = Optional.empty();
+        if (mechanism != null && regression != null && mechanism.gravityStiffness() > 0) {
+            estimates = Optional.of(FrictionEstimates.from(regression, mechanism.gravityStiffness(),
+                    mechanism.naturalFrequency()));
+        }
+        final double theta0 = (release.fromRest() ? release.stillLevel() : all.get(0).angle()) - swing.offset().value();
+        return new SwingAnalysis(release, swing.offset(), theta0, all, halves, cycles, periodCheck, envelopes,
+                Optional.ofNullable(regression), verdict, estimates, stop(swing), warnings);
+    }
+
+    private List<SwingCycle> cycles(List<MeasuredTurningPoint> points) {
+        final List<SwingCycle> cycles = new ArrayList<>();
+        for (int i = 0; i + 2 < points.size(); i++) {
+            final MeasuredTurningPoint a = points.get(i);
+            final MeasuredTurningPoint b = points.get(i + 1);
+            final MeasuredTurningPoint c = points.get(i + 2);
+            if (c.kind() == MeasuredTurningPoint.Kind.STOP) {
+                break;
+            }
+            final double amplitude = 0.25 * (a.amplitude() + 2 * b.amplitude() + c.amplitude());
+            final double period = c.time() - a.time();
+            double predicted = Double.NaN;
+            if (mechanism != null && mechanism.gravityStiffness() > 0 && amplitude < Math.PI) {
+                predicted = new EllipticSwing(mechanism, mechanism.equilibriumAngle() + amplitude).period();
+            }
+            cycles.add(new SwingCycle(i, a.time(), period, amplitude, a.amplitude() - c.amplitude(), predicted,
+                    period / predicted - 1));
+        }
+        return cycles;
+    }
+
+    private PeriodCheck periodCheck(List<SwingCycle> cycles, List<String> warnings) {
+        if (cycles.isEmpty()) {
+            return new PeriodCheck(Double.NaN, Double.NaN, Double.NaN, Double.NaN);
+        }
+        final double[] small = new double[cycles.size()];
+        final double[] relative = new double[cycles.size()];
+        for (int i = 0; i < small.length; i++) {
+            final SwingCycle c = cycles.get(i);
+            final double k = Math.sin(0.5 * c.amplitude());
+            // T / T0 = 2 K(m) / π with m = k² (Abramowitz & Stegun 17.3; Hipparchus takes m)
+            small[i] = c.period() / (2 * LegendreEllipticIntegral.bigK(k * k) / Math.PI);
+            relative[i] = c.relativeDifference();
+        }
+        final double measured = RobustStatistics.medianInPlace(small);
+        if (mechanism == null || !(mechanism.gravityStiffness() > 0)) {
+            return new PeriodCheck(measured, Double.NaN, Double.NaN, Double.NaN);
+        }
+        final double median = RobustStatistics.medianInPlace(relative);
+        final double implied = mechanism.pivotInertia() * (1 + median) * (1 + median);
+        if (Math.abs(median) > 0.02) {
+            warnings.add(String.format(Locale.ROOT, "the measured period is %+.1f %% from the mechanism's prediction:"
+                    + " check the inertia J0 (the period implies %.4g kg·m² against %.4g) or the centroid distance",
+                    100 * median, implied, mechanism.pivotInertia()));
+        }
+        return new PeriodCheck(measured, mechanism.smallAnglePeriod(), median, implied);
+    }
+
+    private StopInfo stop(PreparedSwing swing) {
+        if (swing.settledFrom() < 0) {
+            return new StopInfo(false, Double.NaN, Double.NaN, Double.NaN, Double.NaN,
+                    "the body is still moving at the end of the record");
+        }
+        final double time = swing.times()[swing.settledFrom()];
+        final double rest = swing.settledLevel();
+        final double x = rest - swing.offset().value();
+        final double sigma = Double.isFinite(swing.offset().uncertainty())
+                ? Math.hypot(swing.offset().uncertainty(), swing.release().noise()) : Double.NaN;
+        if (mechanism == null) {
+            return new StopInfo(true, time, rest, x, Double.NaN, "settled at " + fmt(x)
+                    + " rad from the equilibrium; give the mechanism for a stiction bound");
+        }
+        if (!(Math.abs(x) > 2 * sigma)) {
+            return new StopInfo(true, time, rest, x, 0, "settled within the uncertainty of the equilibrium ("
+                    + fmt(sigma) + " rad): no evidence of stiction");
+        }
+        final double bound = mechanism.gravityStiffness() * Math.abs(Math.sin(x));
+        return new StopInfo(true, time, rest, x, bound, "held " + fmt(x) + " rad from the equilibrium, so the"
+                + " static friction torque is at least K|sin x| = " + fmt(bound) + " N·m");
+    }
+
+    private static void check(double[] t, double[] theta) {
+        if (t.length != theta.length) {
+            throw new IllegalArgumentException("times and angles differ in length: " + t.length + " and "
+                    + theta.length);
+        }
+        for (int i = 0; i < t.length; i++) {
+            if (!Double.isFinite(t[i]) || !Double.isFinite(theta[i])) {
+                throw new IllegalArgumentException("sample " + i + " is not finite: t = " + t[i] + " s, θ = "
+                        + theta[i] + " rad");
+            }
+            if (i > 0 && !(t[i] > t[i - 1])) {
+                throw new IllegalArgumentException("times must increase: sample " + i + " at " + t[i]
+                        + " s follows " + t[i - 1] + " s");
+            }
+        }
+    }
+
+    private static String fmt(double v) {
+        return String.format(Locale.ROOT, "%.4g", v);
+    }
+}
