@@ -7,6 +7,9 @@ import java.util.LinkedHashMap;
 import java.util.List;
 import java.util.Map;
 
+import dev.penduline.cli.commands.AddSessionCommand;
+import dev.penduline.cli.commands.AnalyzeCommand;
+import dev.penduline.cli.commands.DemoRecordCommand;
 import dev.penduline.cli.commands.ImportPartsCommand;
 import dev.penduline.cli.commands.InertiaCommand;
 import dev.penduline.cli.commands.SimulateCommand;
@@ -20,7 +23,8 @@ public final class PendulineCommandLine {
 
     /** Creates the command line with every built-in command. */
     public PendulineCommandLine() {
-        this(List.of(new InertiaCommand(), new SimulateCommand(), new ImportPartsCommand()));
+        this(List.of(new InertiaCommand(), new SimulateCommand(), new AnalyzeCommand(), new ImportPartsCommand(),
+                new AddSessionCommand(), new DemoRecordCommand()));
     }
 
     /**

@@ -10,6 +10,7 @@ import java.nio.file.Files;
 import java.nio.file.Path;
 import java.nio.file.StandardCopyOption;
 import java.nio.file.StandardOpenOption;
+import java.nio.file.attribute.PosixFilePermissions;
 
 /**
  * Writes text files the safe way: into a temporary file beside the target, flushed to disk,
@@ -33,6 +34,20 @@ public final class AtomicFiles {
     }
 
     /**
+     * Gives a new file the usual rw-r--r-- permissions (temporary files start private).
+     *
+     * @param file the file
+     * @throws IOException when the permissions cannot be set
+     */
+    static void makeReadable(Path file) throws IOException {
+        try {
+            Files.setPosixFilePermissions(file, PosixFilePermissions.fromString("rw-r--r--"));
+        } catch (UnsupportedOperationException e) {
+            // not a POSIX file system: the platform's defaults apply
+        }
+    }
+
+    /**
      * Writes a UTF-8 text file atomically.
      *
      * @param target  the file to create or replace
@@ -48,6 +63,11 @@ public final class AtomicFiles {
             temp = Files.createTempFile(dir, "." + absolute.getFileName(), ".tmp");
             try (BufferedWriter out = Files.newBufferedWriter(temp, StandardCharsets.UTF_8)) {
                 content.writeTo(out);
+            }
+            if (Files.exists(absolute)) {
+                Files.setPosixFilePermissions(temp, Files.getPosixFilePermissions(absolute));
+            } else {
+                makeReadable(temp);
             }
             try (FileChannel channel = FileChannel.open(temp, StandardOpenOption.WRITE)) {
                 channel.force(true);

@@ -3,6 +3,7 @@ package dev.penduline.cli.commands;
 import java.nio.file.Path;
 import java.util.HashSet;
 import java.util.List;
+import java.util.Optional;
 import java.util.Set;
 
 import dev.penduline.cli.Arguments;
@@ -42,6 +43,20 @@ final class MechanismOptions {
         Set<String> all = new HashSet<>(VALUE_OPTIONS);
         all.addAll(List.of(own));
         return Set.copyOf(all);
+    }
+
+    /**
+     * Resolves an optional mechanism given by {@code --mechanism FILE} or lumped properties.
+     *
+     * @param a the arguments (with "mechanism" among the value options)
+     * @return the mechanism, or empty when none was given
+     * @throws UsageException when the input is bad
+     */
+    static Optional<MechanismSource> optional(Arguments a) throws UsageException {
+        if (!a.has("mechanism") && !lumpedGiven(a)) {
+            return Optional.empty();
+        }
+        return Optional.of(resolve(a, a.value("mechanism")));
     }
 
     /**

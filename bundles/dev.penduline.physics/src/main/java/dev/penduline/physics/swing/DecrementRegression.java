@@ -17,9 +17,10 @@ import java.util.List;
  * <li>drag: {@code ∫ c |ω|³ dt = c Ā³ ωn² ∫₀^π sin³ = (4/3) c ωn² Ā³}, so
  * {@code a2 = 4 c ωn² / (3K)}.</li>
  * </ul>
- * Non-negativity: every subset of the three terms is fitted, those with a negative coefficient
- * are discarded, and the subset with the least residual is kept (for three terms this is the
- * exact non-negative least-squares solution); the terms left out are reported as dropped.
+ * Non-negativity and parsimony: every subset of the three terms is fitted, those with a negative
+ * coefficient are discarded, and of the rest the subset with the lowest Bayesian information
+ * criterion is kept (Schwarz 1978), so that a term stays only when the decrements need it; the
+ * terms left out are reported as dropped.
  *
  * @param a0          constant decrement (rad), the Coulomb term
  * @param a1          decrement per radian of amplitude (dimensionless), the viscous term

@@ -1,0 +1,129 @@
+package dev.penduline.cli.commands;
+
+import java.io.PrintWriter;
+import java.util.List;
+import java.util.Locale;
+import java.util.Optional;
+
+import dev.penduline.physics.swing.DecayEnvelope;
+import dev.penduline.physics.swing.FrictionEstimates;
+import dev.penduline.physics.swing.LossVerdict;
+import dev.penduline.physics.swing.PeriodCheck;
+import dev.penduline.physics.swing.StopInfo;
+import dev.penduline.physics.swing.SwingAnalysis;
+import dev.penduline.physics.swing.SwingCycle;
+import dev.penduline.physics.units.Unit;
+import dev.penduline.records.swing.SwingRecord;
+import dev.penduline.services.MechanismSource;
+
+/** The readable report of {@code penduline analyze}: the verdict first, then the evidence. */
+final class AnalysisReport {
+
+    private final SwingRecord record;
+    private final SwingAnalysis s;
+    private final Optional<MechanismSource> mechanism;
+
+    AnalysisReport(SwingRecord record, SwingAnalysis analysis, Optional<MechanismSource> mechanism) {
+        this.record = record;
+        this.s = analysis;
+        this.mechanism = mechanism;
+    }
+
+    void print(PrintWriter out) {
+        LossVerdict v = s.verdict();
+        out.println("Swing record " + record.source());
+        out.printf(Locale.ROOT, "  %d samples at %s Hz; SHA-256 %s%n", record.size(),
+                Numbers.significant(AnalyzeCommand.sampleRate(record.times())), record.sha256().substring(0, 16) + "…");
+        out.println();
+        out.printf(Locale.ROOT, "Verdict: %s (Coulomb %.0f %%, viscous %.0f %%, drag %.0f %% of the mean decrement)%n",
+                verdictText(v), 100 * v.coulombShare(), 100 * v.viscousShare(), 100 * v.dragShare());
+        for (String e : v.evidence()) {
+            out.println("  - " + e);
+        }
+        out.println();
+        out.printf(Locale.ROOT, "Release   at %s s (± %s s), from %s° off the hanging equilibrium%n",
+                Numbers.significant(s.release().time()), Numbers.significant(s.release().uncertainty()),
+                deg(s.initialAngle()));
+        out.printf(Locale.ROOT, "Offset    the sensor reads %s° (± %s°) at the hanging equilibrium (%s)%n",
+                deg(s.offset().value()), deg(s.offset().uncertainty()),
+                s.offset().method().name().toLowerCase(Locale.ROOT).replace('_', ' '));
+        StopInfo stop = s.stop();
+        if (stop.stopped()) {
+            out.printf(Locale.ROOT, "Stop      at rest from %s s, %s° from the equilibrium: stiction at least %s N·m%n",
+                    Numbers.significant(stop.time()), deg(stop.restOffset()),
+                    Numbers.significant(stop.stictionLowerBound()));
+        } else {
+            out.println("Stop      still swinging at the end of the record");
+        }
+        out.println();
+        printCycles(out);
+        out.println();
+        out.println("Decay envelopes (amplitude against cycles):");
+        for (DecayEnvelope e : s.envelopes()) {
+            out.printf(Locale.ROOT, "  %-10s r² = %.5f   %s%n", e.model().name().toLowerCase(Locale.ROOT), e.rSquared(),
+                    switch (e.model()) {
+                        case LINEAR -> "loses " + deg(e.ratePerCycle()) + "° per cycle (dry-friction signature)";
+                        case GEOMETRIC -> "log decrement " + Numbers.significant(e.ratePerCycle()) + ", damping ratio "
+                                + Numbers.significant(e.dampingRatio()) + " (viscous signature)";
+                        case RECIPROCAL -> "1/A grows " + Numbers.significant(e.ratePerCycle())
+                                + " /rad per cycle (drag signature)";
+                    });
+        }
+        s.regression().ifPresent(r -> out.printf(Locale.ROOT,
+                "Decrement per half-swing ΔA = a0 + a1·A + a2·A²: a0 = %s rad, a1 = %s, a2 = %s /rad (r² = %.4f, %d half-swings)%n",
+                Numbers.significant(r.a0()), Numbers.significant(r.a1()), Numbers.significant(r.a2()), r.rSquared(),
+                r.count()));
+        PeriodCheck p = s.periodCheck();
+        if (mechanism.isPresent() && p != null && Double.isFinite(p.predictedSmallAnglePeriod())) {
+            out.printf(Locale.ROOT, "Period    small-angle %s s measured, %s s predicted from the mechanism (%+.2f %%); "
+                    + "the record implies J0 ≈ %s kg·m²%n", Numbers.significant(p.measuredSmallAnglePeriod()),
+                    Numbers.significant(p.predictedSmallAnglePeriod()), 100 * p.medianRelativeDifference(),
+                    Numbers.significant(p.impliedPivotInertia()));
+        }
+        s.estimates().ifPresent(e -> printEstimates(e, out));
+        out.println();
+        out.println("These are first estimates from the decay envelope; 'penduline fit' identifies the terms from the "
+                + "whole trajectory.");
+        out.println(Caution.TEXT);
+    }
+
+    private void printCycles(PrintWriter out) {
+        List<SwingCycle> cycles = s.cycles();
+        out.printf("Cycles (%d):%n", cycles.size());
+        out.println("     #   start (s)   amplitude (°)   period (s)");
+        int n = cycles.size();
+        for (int i = 0; i < n; i++) {
+            if (n > 12 && i == 6) {
+                out.printf("   ... %d more ...%n", n - 10);
+                i = n - 4;
+            }
+            SwingCycle c = cycles.get(i);
+            out.printf(Locale.ROOT, "  %4d  %10s  %14s  %11s%n", c.index() + 1, Numbers.significant(c.startTime()),
+                    deg(c.amplitude()), Numbers.significant(c.period()));
+        }
+    }
+
+    private static void printEstimates(FrictionEstimates e, PrintWriter out) {
+        out.println("First estimates (energy balance per half-swing):");
+        out.printf(Locale.ROOT, "  viscous   b  = %s ± %s N·m·s/rad%n", Numbers.significant(e.viscous()),
+                Numbers.significant(e.viscousError()));
+        out.printf(Locale.ROOT, "  Coulomb   Tc = %s ± %s N·m%n", Numbers.significant(e.coulomb()),
+                Numbers.significant(e.coulombError()));
+        out.printf(Locale.ROOT, "  drag      c  = %s ± %s N·m·s²/rad²%n", Numbers.significant(e.drag()),
+                Numbers.significant(e.dragError()));
+    }
+
+    private static String verdictText(LossVerdict v) {
+        return switch (v.kind()) {
+            case COULOMB -> "dry (Coulomb) friction dominates";
+            case VISCOUS -> "viscous damping dominates";
+            case DRAG -> "air drag dominates";
+            case MIXED -> "mixed losses, led by " + v.leading().name().toLowerCase(Locale.ROOT);
+            default -> "undetermined (too few swings to tell)";
+        };
+    }
+
+    private static String deg(double rad) {
+        return Numbers.significant(Unit.DEGREE.fromSi(rad));
+    }
+}

@@ -1,0 +1,127 @@
+package dev.penduline.cli.commands;
+
+import static org.junit.jupiter.api.Assertions.assertArrayEquals;
+import static org.junit.jupiter.api.Assertions.assertEquals;
+import static org.junit.jupiter.api.Assertions.assertTrue;
+
+import java.io.PrintWriter;
+import java.io.StringWriter;
+import java.nio.file.Files;
+import java.nio.file.Path;
+import java.nio.file.attribute.FileTime;
+import java.util.regex.Matcher;
+import java.util.regex.Pattern;
+
+import org.junit.jupiter.api.BeforeEach;
+import org.junit.jupiter.api.Test;
+import org.junit.jupiter.api.io.TempDir;
+
+import dev.penduline.cli.ExitCode;
+import dev.penduline.cli.PendulineCommandLine;
+
+/**
+ * The record commands end to end on records made by {@code demo-record}, whose truth is the
+ * simulator's settings (the simulator itself is checked against closed forms in
+ * dev.penduline.physics.motion).
+ */
+class SessionCommandsTest {
+
+    @TempDir
+    Path dir;
+
+    private StringWriter out;
+    private StringWriter err;
+
+    private static final String[] ROD = {"--mass", "2", "--centroid-distance", "0.4", "--pivot-inertia", "0.48"};
+
+    @BeforeEach
+    void clear() {
+        out = new StringWriter();
+        err = new StringWriter();
+    }
+
+    private ExitCode run(String... args) {
+        return new PendulineCommandLine().run(args, new PrintWriter(out, true), new PrintWriter(err, true));
+    }
+
+    private static String[] concat(String[] a, String... b) {
+        String[] all = new String[a.length + b.length];
+        System.arraycopy(a, 0, all, 0, a.length);
+        System.arraycopy(b, 0, all, a.length, b.length);
+        return all;
+    }
+
+    private static double number(String json, String key) {
+        Matcher m = Pattern.compile("\"" + key + "\": ([-0-9.eE]+)").matcher(json);
+        assertTrue(m.find(), key + " missing in " + json);
+        return Double.parseDouble(m.group(1));
+    }
+
+    private Path demo(String name, String theta0, String... friction) {
+        Path file = dir.resolve(name);
+        String[] args = concat(concat(new String[] {"demo-record"}, ROD), "--theta0-deg", theta0, "--offset-deg",
+                "1.5", "--duration", "30", "--rate", "200", "--still-s", "1", "--out", file.toString());
+        assertEquals(ExitCode.OK, run(concat(args, friction)), err.toString());
+        return file;
+    }
+
+    @Test
+    void analyzeRecoversReleaseOffsetAndTheDryFrictionVerdict() throws Exception {
+        // Truth: released at 1 s + 0.37 sample = 1.00185 s, offset 1.5°, pure Coulomb friction.
+        Path record = demo("dry.csv", "20", "--coulomb", "0.05");
+        out = new StringWriter();
+        assertEquals(ExitCode.OK, run(concat(concat(new String[] {"analyze", record.toString(), "--counts-per-rev",
+                "4096", "--json"}, ROD))), err.toString());
+        String json = out.toString();
+        assertEquals(1.00185, number(json, "release_time_s"), 0.005);
+        assertEquals(1.5, number(json, "offset_deg"), 0.02);
+        assertEquals(20, number(json, "theta0_deg"), 0.1);
+        assertEquals(200, number(json, "sample_rate_hz"), 1e-6);
+        assertTrue(json.contains("\"dominant\": \"coulomb\""), json);
+        // Linear Coulomb decay, Den Hartog: 4 Tc/(m g Lc) per cycle = 4·0.05/(2·9.80665·0.4) rad = 1.4608°.
+        assertEquals(1.4608, number(json, "decrement_deg_per_cycle"), 0.05);
+        assertEquals(0.05, number(json.substring(json.indexOf("\"estimates\"")), "coulomb"), 0.005);
+    }
+
+    @Test
+    void addSessionCopiesTheRecordIntoTheProjectAndNeverChangesIt() throws Exception {
+        Path record = demo("release.csv", "15", "--viscous", "0.01");
+        byte[] bytes = Files.readAllBytes(record);
+        FileTime modified = Files.getLastModifiedTime(record);
+        Path project = Files.createDirectories(dir.resolve("project"));
+        Path parts = Files.writeString(project.resolve("parts.csv"),
+                "name,shape,mass_kg,x_m,y_m,z_m,length_m,axis\narm,rod,2,0,-0.4,0,0.8,y\n");
+        Path mechanism = project.resolve("arm.penduline");
+        assertEquals(ExitCode.OK, run("import-parts", parts.toString(), "--to", mechanism.toString()), err.toString());
+        assertEquals(ExitCode.OK, run("add-session", mechanism.toString(), record.toString(), "--counts-per-rev",
+                "4096", "--name", "First release"), err.toString());
+        assertArrayEquals(bytes, Files.readAllBytes(record));
+        assertEquals(modified, Files.getLastModifiedTime(record));
+        assertArrayEquals(bytes, Files.readAllBytes(project.resolve("records/release.csv")));
+        String file = Files.readString(mechanism);
+        assertTrue(file.contains("<recordPath>records/release.csv</recordPath>"), file);
+        assertTrue(file.contains("<countsPerRevolution>4096</countsPerRevolution>"), file);
+        // The stored mapping reads the record again without any option.
+        out = new StringWriter();
+        assertEquals(ExitCode.OK, run("analyze", project.resolve("records/release.csv").toString(), "--mechanism",
+                mechanism.toString(), "--json"), err.toString());
+        assertTrue(out.toString().contains("\"dominant\": \"viscous\""), out.toString());
+
+        // A different file of the same name is refused and nothing changes.
+        Path other = Files.createDirectories(dir.resolve("other"));
+        Path clash = demo("other/release.csv", "30", "--viscous", "0.01");
+        byte[] before = Files.readAllBytes(mechanism);
+        assertEquals(ExitCode.USAGE_OR_INPUT, run("add-session", mechanism.toString(), clash.toString(),
+                "--counts-per-rev", "4096"));
+        assertTrue(err.toString().contains("already in the project"), err.toString());
+        assertArrayEquals(before, Files.readAllBytes(mechanism));
+        assertTrue(Files.exists(other));
+    }
+
+    @Test
+    void aBadCellNamesFileLineAndColumn() throws Exception {
+        Path record = Files.writeString(dir.resolve("bad.csv"), "time_s,angle_deg\n0,1\n0.01,1\n0.02,x\n");
+        assertEquals(ExitCode.USAGE_OR_INPUT, run("analyze", record.toString()));
+        assertTrue(err.toString().contains("bad.csv:4") && err.toString().contains("angle_deg"), err.toString());
+    }
+}

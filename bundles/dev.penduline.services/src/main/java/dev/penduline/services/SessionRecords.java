@@ -1,0 +1,269 @@
+package dev.penduline.services;
+
+import java.io.IOException;
+import java.io.InputStream;
+import java.nio.file.Files;
+import java.nio.file.NoSuchFileException;
+import java.nio.file.Path;
+import java.nio.file.StandardCopyOption;
+import java.security.MessageDigest;
+import java.security.NoSuchAlgorithmException;
+import java.util.ArrayList;
+import java.util.HexFormat;
+import java.util.List;
+import java.util.Optional;
+
+import dev.penduline.model.AngleUnit;
+import dev.penduline.model.DecimalSeparator;
+import dev.penduline.model.Delimiter;
+import dev.penduline.model.Mechanism;
+import dev.penduline.model.TestSession;
+import dev.penduline.model.TimeUnit;
+import dev.penduline.model.naming.NamedElements;
+import dev.penduline.physics.units.Unit;
+import dev.penduline.records.RecordFormatException;
+import dev.penduline.records.swing.ColumnChoice;
+import dev.penduline.records.swing.SwingImportOptions;
+import dev.penduline.records.swing.SwingRecord;
+import dev.penduline.records.swing.SwingRecordMapping;
+import dev.penduline.records.swing.SwingRecordReader;
+
+/**
+ * Swing-test records and the test sessions of a mechanism file: reading a raw record, adding it
+ * to a project (the raw file is copied into the project's {@code records/} folder when it lives
+ * elsewhere, never modified, and referred to by a relative path with its SHA-256), and reading
+ * a session's record back with the mapping stored in the file.
+ */
+public final class SessionRecords {
+
+    /** The folder, beside the mechanism file, that holds the raw records a project carries. */
+    public static final String RECORDS_FOLDER = "records";
+
+    private SessionRecords() {
+    }
+
+    /**
+     * Reads a raw swing record.
+     *
+     * @param file    the record
+     * @param options how to read it (detected where not given)
+     * @return the record in SI units
+     * @throws InputException naming file, line and column when it cannot be read
+     */
+    public static SwingRecord read(Path file, SwingImportOptions options) throws InputException {
+        try {
+            return new SwingRecordReader().read(file, options);
+        } catch (NoSuchFileException e) {
+            throw new InputException(file + ": no such file", e);
+        } catch (IOException e) {
+            throw new InputException(file + ": cannot be read (" + e.getMessage() + ")", e);
+        } catch (RecordFormatException e) {
+            throw new InputException(e.getMessage(), e);
+        } catch (IllegalArgumentException e) {
+            throw new InputException(file + ": " + e.getMessage(), e);
+        }
+    }
+
+    /** What adding a session did. */
+    public record Added(TestSession session, SwingRecord record, boolean copied, Path storedAt) {
+    }
+
+    /**
+     * Adds a record to a mechanism file as a new test session and saves the file. A record
+     * outside the project folder is copied into {@code records/} first; an existing different
+     * file of the same name there is never overwritten.
+     *
+     * @param mechanismFile the mechanism file (its folder is the project)
+     * @param recordFile    the raw record
+     * @param options       how to read it
+     * @param name          the session's name (null: the record's file name)
+     * @param releaseAngle  the release angle if known (rad), NaN if not
+     * @param notes         notes, or null
+     * @return the new session and the record as read
+     * @throws InputException when a file cannot be read, copied or saved
+     */
+    public static Added addSession(Path mechanismFile, Path recordFile, SwingImportOptions options, String name,
+            double releaseAngle, String notes) throws InputException {
+        Mechanism mechanism = MechanismLoader.readMechanism(mechanismFile);
+        SwingRecord record = read(recordFile, options);
+        Path project = mechanismFile.toAbsolutePath().getParent();
+        Path source = recordFile.toAbsolutePath().normalize();
+        Path stored = source.startsWith(project) ? source
+                : project.resolve(RECORDS_FOLDER).resolve(source.getFileName());
+        String relative = project.relativize(stored).toString().replace('\\', '/');
+        String sessionName = name != null ? name : source.getFileName().toString().replaceFirst("\\.[^.]*$", "");
+        TestSession session = NamedElements.addSession(mechanism, sessionName, relative);
+        store(session, record.mapping());
+        session.setContentHash(record.sha256());
+        if (!Double.isNaN(releaseAngle)) {
+            session.setReleaseAngle(releaseAngle);
+        }
+        if (notes != null) {
+            session.setNotes(notes);
+        }
+        MechanismStore.check(mechanism, mechanismFile);
+        boolean copied = !stored.equals(source) && copyInto(source, stored, record.sha256());
+        try {
+            MechanismStore.save(mechanism, mechanismFile);
+        } catch (InputException e) {
+            if (copied) {
+                deleteQuietly(stored);
+            }
+            throw e;
+        }
+        return new Added(session, record, copied, stored);
+    }
+
+    /** A session's record as read back, with warnings about it (e.g. a changed raw file). */
+    public record SessionRecord(TestSession session, Path file, SwingRecord record, List<String> warnings) {
+    }
+
+    /**
+     * Reads the record of a test session with the mapping stored in the mechanism file, and
+     * warns when the raw file's content no longer matches the stored hash.
+     *
+     * @param mechanismFile the mechanism file
+     * @param session       the session
+     * @return the record
+     * @throws InputException when the record cannot be read
+     */
+    public static SessionRecord readSession(Path mechanismFile, TestSession session) throws InputException {
+        Path project = mechanismFile.toAbsolutePath().getParent();
+        Path file = project.resolve(session.getRecordPath()).normalize();
+        SwingRecord record = read(file, optionsOf(session));
+        List<String> warnings = new ArrayList<>();
+        if (session.getContentHash() != null && !session.getContentHash().equalsIgnoreCase(record.sha256())) {
+            warnings.add("session '" + session.getName() + "': " + session.getRecordPath()
+                    + " has changed since it was added (its SHA-256 differs from the one in the mechanism file)");
+        }
+        return new SessionRecord(session, file, record, warnings);
+    }
+
+    /**
+     * The stored reading options of the session of a mechanism file whose record is the given
+     * file, so that a record the project carries is read as it was when it was added.
+     *
+     * @param mechanismFile the mechanism file
+     * @param record        the record file
+     * @return the options, or empty when no session of the file refers to that record
+     * @throws InputException when the mechanism file cannot be read
+     */
+    public static Optional<SwingImportOptions> optionsFor(Path mechanismFile, Path record) throws InputException {
+        Mechanism mechanism = MechanismLoader.readMechanism(mechanismFile);
+        Path project = mechanismFile.toAbsolutePath().getParent();
+        Path wanted = record.toAbsolutePath().normalize();
+        for (TestSession s : mechanism.getSessions()) {
+            if (s.getRecordPath() != null && project.resolve(s.getRecordPath()).normalize().equals(wanted)) {
+                return Optional.of(optionsOf(s));
+            }
+        }
+        return Optional.empty();
+    }
+
+    /**
+     * The import options that read a session's record the way it was read when it was added.
+     *
+     * @param s the session
+     * @return the options
+     */
+    public static SwingImportOptions optionsOf(TestSession s) {
+        SwingImportOptions o = SwingImportOptions.defaults()
+                .withDelimiter(switch (s.getDelimiter()) {
+                    case SEMICOLON -> ';';
+                    case TAB -> '\t';
+                    default -> ',';
+                })
+                .withDecimalSeparator(s.getDecimalSeparator() == DecimalSeparator.COMMA ? ',' : '.');
+        boolean header = s.getTimeColumnName() != null && !s.getTimeColumnName().isEmpty();
+        o = o.withHeader(header);
+        o = o.withTimeColumn(header ? ColumnChoice.byName(s.getTimeColumnName())
+                : ColumnChoice.byIndex(s.isSetTimeColumnNumber() ? s.getTimeColumnNumber() : 1));
+        o = o.withAngleColumn(header && s.getAngleColumnName() != null ? ColumnChoice.byName(s.getAngleColumnName())
+                : ColumnChoice.byIndex(s.isSetAngleColumnNumber() ? s.getAngleColumnNumber() : 2));
+        o = o.withTimeUnit(switch (s.getTimeUnit()) {
+            case MILLISECOND -> Unit.MILLISECOND;
+            case MICROSECOND -> Unit.MICROSECOND;
+            default -> Unit.SECOND;
+        });
+        if (s.getAngleUnit() == AngleUnit.COUNT) {
+            o = o.withAngleUnit(Unit.ENCODER_COUNT).withCountsPerRevolution(s.getCountsPerRevolution());
+        } else {
+            o = o.withAngleUnit(s.getAngleUnit() == AngleUnit.RADIAN ? Unit.RADIAN : Unit.DEGREE);
+        }
+        return o;
+    }
+
+    private static void store(TestSession s, SwingRecordMapping m) {
+        s.setDelimiter(switch (m.delimiter()) {
+            case ';' -> Delimiter.SEMICOLON;
+            case '\t' -> Delimiter.TAB;
+            default -> Delimiter.COMMA;
+        });
+        s.setDecimalSeparator(m.decimalSeparator() == ',' ? DecimalSeparator.COMMA : DecimalSeparator.POINT);
+        if (m.header()) {
+            s.setTimeColumnName(m.timeColumn().name());
+            s.setAngleColumnName(m.angleColumn().name());
+        } else {
+            s.setTimeColumnNumber(m.timeColumn().index());
+            s.setAngleColumnNumber(m.angleColumn().index());
+        }
+        String timeSuffix = m.timeUnit().suffix();
+        s.setTimeUnit(timeSuffix.equals(Unit.MILLISECOND.suffix()) ? TimeUnit.MILLISECOND
+                : timeSuffix.equals(Unit.MICROSECOND.suffix()) ? TimeUnit.MICROSECOND : TimeUnit.SECOND);
+        String angleSuffix = m.angleUnit().suffix();
+        if (angleSuffix.equals(Unit.ENCODER_COUNT.suffix())) {
+            s.setAngleUnit(AngleUnit.COUNT);
+            s.setCountsPerRevolution((int) Math.round(m.countsPerRevolution()));
+        } else {
+            s.setAngleUnit(angleSuffix.equals(Unit.RADIAN.suffix()) ? AngleUnit.RADIAN : AngleUnit.DEGREE);
+        }
+    }
+
+    private static boolean copyInto(Path source, Path target, String sha256) throws InputException {
+        try {
+            if (Files.exists(target)) {
+                if (sha256(target).equalsIgnoreCase(sha256)) {
+                    return false;
+                }
+                throw new InputException(target + ": a different file of that name is already in the project; rename"
+                        + " the record before adding it");
+            }
+            Files.createDirectories(target.getParent());
+            Path temp = Files.createTempFile(target.getParent(), "." + target.getFileName(), ".tmp");
+            try {
+                Files.copy(source, temp, StandardCopyOption.REPLACE_EXISTING);
+                AtomicFiles.makeReadable(temp);
+                Files.move(temp, target, StandardCopyOption.ATOMIC_MOVE);
+            } finally {
+                Files.deleteIfExists(temp);
+            }
+            if (!sha256(target).equalsIgnoreCase(sha256)) {
+                throw new InputException(target + ": the copy differs from " + source + "; the record was not added");
+            }
+            return true;
+        } catch (IOException e) {
+            throw new InputException(target + ": cannot copy the record into the project (" + e.getMessage() + ")", e);
+        }
+    }
+
+    private static void deleteQuietly(Path file) {
+        try {
+            Files.deleteIfExists(file);
+        } catch (IOException ignored) {
+            // the copy is identical to the user's record; leaving it behind loses nothing
+        }
+    }
+
+    private static String sha256(Path file) throws IOException {
+        try (InputStream in = Files.newInputStream(file)) {
+            MessageDigest digest = MessageDigest.getInstance("SHA-256");
+            byte[] buffer = new byte[1 << 16];
+            for (int n = in.read(buffer); n >= 0; n = in.read(buffer)) {
+                digest.update(buffer, 0, n);
+            }
+            return HexFormat.of().formatHex(digest.digest());
+        } catch (NoSuchAlgorithmException e) {
+            throw new IllegalStateException("the JDK always provides SHA-256", e);
+        }
+    }
+}
