@@ -23,6 +23,7 @@ import org.eclipse.emf.ecore.EObject;
  *   <li>{@link dev.penduline.model.Estimate#getParameter <em>Parameter</em>}</li>
  *   <li>{@link dev.penduline.model.Estimate#getValue <em>Value</em>}</li>
  *   <li>{@link dev.penduline.model.Estimate#getStandardError <em>Standard Error</em>}</li>
+ *   <li>{@link dev.penduline.model.Estimate#getResamplingError <em>Resampling Error</em>}</li>
  * </ul>
  *
  * @see dev.penduline.model.PendulinePackage#getEstimate()
@@ -86,7 +87,7 @@ public interface Estimate extends EObject
    * <!-- begin-user-doc -->
    * <!-- end-user-doc -->
    * <!-- begin-model-doc -->
-   * Standard error of the estimate (same unit); unset when not available.
+   * Standard error of the estimate from the Jacobian at the optimum (same unit); unset when not available.
    * <!-- end-model-doc -->
    * @return the value of the '<em>Standard Error</em>' attribute.
    * @see #isSetStandardError()
@@ -133,5 +134,58 @@ public interface Estimate extends EObject
    * @generated
    */
   boolean isSetStandardError();
+
+  /**
+   * Returns the value of the '<em><b>Resampling Error</b></em>' attribute.
+   * <!-- begin-user-doc -->
+   * <!-- end-user-doc -->
+   * <!-- begin-model-doc -->
+   * Standard error from resampling (moving-block bootstrap of the residuals), same unit; unset when not computed.
+   * <!-- end-model-doc -->
+   * @return the value of the '<em>Resampling Error</em>' attribute.
+   * @see #isSetResamplingError()
+   * @see #unsetResamplingError()
+   * @see #setResamplingError(double)
+   * @see dev.penduline.model.PendulinePackage#getEstimate_ResamplingError()
+   * @model unsettable="true"
+   *        extendedMetaData="kind='element' name='resamplingError'"
+   * @generated
+   */
+  double getResamplingError();
+
+  /**
+   * Sets the value of the '{@link dev.penduline.model.Estimate#getResamplingError <em>Resampling Error</em>}' attribute.
+   * <!-- begin-user-doc -->
+   * <!-- end-user-doc -->
+   * @param value the new value of the '<em>Resampling Error</em>' attribute.
+   * @see #isSetResamplingError()
+   * @see #unsetResamplingError()
+   * @see #getResamplingError()
+   * @generated
+   */
+  void setResamplingError(double value);
+
+  /**
+   * Unsets the value of the '{@link dev.penduline.model.Estimate#getResamplingError <em>Resampling Error</em>}' attribute.
+   * <!-- begin-user-doc -->
+   * <!-- end-user-doc -->
+   * @see #isSetResamplingError()
+   * @see #getResamplingError()
+   * @see #setResamplingError(double)
+   * @generated
+   */
+  void unsetResamplingError();
+
+  /**
+   * Returns whether the value of the '{@link dev.penduline.model.Estimate#getResamplingError <em>Resampling Error</em>}' attribute is set.
+   * <!-- begin-user-doc -->
+   * <!-- end-user-doc -->
+   * @return whether the value of the '<em>Resampling Error</em>' attribute is set.
+   * @see #unsetResamplingError()
+   * @see #getResamplingError()
+   * @see #setResamplingError(double)
+   * @generated
+   */
+  boolean isSetResamplingError();
 
 } // Estimate

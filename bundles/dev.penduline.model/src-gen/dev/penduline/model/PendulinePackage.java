@@ -1044,13 +1044,22 @@ public interface PendulinePackage extends EPackage
   int ESTIMATE__STANDARD_ERROR = 2;
 
   /**
+   * The feature id for the '<em><b>Resampling Error</b></em>' attribute.
+   * <!-- begin-user-doc -->
+   * <!-- end-user-doc -->
+   * @generated
+   * @ordered
+   */
+  int ESTIMATE__RESAMPLING_ERROR = 3;
+
+  /**
    * The number of structural features of the '<em>Estimate</em>' class.
    * <!-- begin-user-doc -->
    * <!-- end-user-doc -->
    * @generated
    * @ordered
    */
-  int ESTIMATE_FEATURE_COUNT = 3;
+  int ESTIMATE_FEATURE_COUNT = 4;
 
   /**
    * The number of operations of the '<em>Estimate</em>' class.
@@ -2421,6 +2430,17 @@ public interface PendulinePackage extends EPackage
   EAttribute getEstimate_StandardError();
 
   /**
+   * Returns the meta object for the attribute '{@link dev.penduline.model.Estimate#getResamplingError <em>Resampling Error</em>}'.
+   * <!-- begin-user-doc -->
+   * <!-- end-user-doc -->
+   * @return the meta object for the attribute '<em>Resampling Error</em>'.
+   * @see dev.penduline.model.Estimate#getResamplingError()
+   * @see #getEstimate()
+   * @generated
+   */
+  EAttribute getEstimate_ResamplingError();
+
+  /**
    * Returns the meta object for class '{@link dev.penduline.model.SessionFit <em>Session Fit</em>}'.
    * <!-- begin-user-doc -->
    * <!-- end-user-doc -->
@@ -3488,6 +3508,14 @@ public interface PendulinePackage extends EPackage
      * @generated
      */
     EAttribute ESTIMATE__STANDARD_ERROR = eINSTANCE.getEstimate_StandardError();
+
+    /**
+     * The meta object literal for the '<em><b>Resampling Error</b></em>' attribute feature.
+     * <!-- begin-user-doc -->
+     * <!-- end-user-doc -->
+     * @generated
+     */
+    EAttribute ESTIMATE__RESAMPLING_ERROR = eINSTANCE.getEstimate_ResamplingError();
 
     /**
      * The meta object literal for the '{@link dev.penduline.model.impl.SessionFitImpl <em>Session Fit</em>}' class.

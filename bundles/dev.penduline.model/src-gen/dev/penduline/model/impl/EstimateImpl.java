@@ -26,6 +26,7 @@ import org.eclipse.emf.ecore.impl.MinimalEObjectImpl;
  *   <li>{@link dev.penduline.model.impl.EstimateImpl#getParameter <em>Parameter</em>}</li>
  *   <li>{@link dev.penduline.model.impl.EstimateImpl#getValue <em>Value</em>}</li>
  *   <li>{@link dev.penduline.model.impl.EstimateImpl#getStandardError <em>Standard Error</em>}</li>
+ *   <li>{@link dev.penduline.model.impl.EstimateImpl#getResamplingError <em>Resampling Error</em>}</li>
  * </ul>
  *
  * @generated
@@ -100,6 +101,35 @@ public class EstimateImpl extends MinimalEObjectImpl.Container implements Estima
    * @ordered
    */
   protected boolean standardErrorESet;
+
+  /**
+   * The default value of the '{@link #getResamplingError() <em>Resampling Error</em>}' attribute.
+   * <!-- begin-user-doc -->
+   * <!-- end-user-doc -->
+   * @see #getResamplingError()
+   * @generated
+   * @ordered
+   */
+  protected static final double RESAMPLING_ERROR_EDEFAULT = 0.0;
+
+  /**
+   * The cached value of the '{@link #getResamplingError() <em>Resampling Error</em>}' attribute.
+   * <!-- begin-user-doc -->
+   * <!-- end-user-doc -->
+   * @see #getResamplingError()
+   * @generated
+   * @ordered
+   */
+  protected double resamplingError = RESAMPLING_ERROR_EDEFAULT;
+
+  /**
+   * This is true if the Resampling Error attribute has been set.
+   * <!-- begin-user-doc -->
+   * <!-- end-user-doc -->
+   * @generated
+   * @ordered
+   */
+  protected boolean resamplingErrorESet;
 
   /**
    * <!-- begin-user-doc -->
@@ -232,6 +262,60 @@ public class EstimateImpl extends MinimalEObjectImpl.Container implements Estima
    * @generated
    */
   @Override
+  public double getResamplingError()
+  {
+    return resamplingError;
+  }
+
+  /**
+   * <!-- begin-user-doc -->
+   * <!-- end-user-doc -->
+   * @generated
+   */
+  @Override
+  public void setResamplingError(double newResamplingError)
+  {
+    double oldResamplingError = resamplingError;
+    resamplingError = newResamplingError;
+    boolean oldResamplingErrorESet = resamplingErrorESet;
+    resamplingErrorESet = true;
+    if (eNotificationRequired())
+      eNotify(new ENotificationImpl(this, Notification.SET, PendulinePackage.ESTIMATE__RESAMPLING_ERROR, oldResamplingError, resamplingError, !oldResamplingErrorESet));
+  }
+
+  /**
+   * <!-- begin-user-doc -->
+   * <!-- end-user-doc -->
+   * @generated
+   */
+  @Override
+  public void unsetResamplingError()
+  {
+    double oldResamplingError = resamplingError;
+    boolean oldResamplingErrorESet = resamplingErrorESet;
+    resamplingError = RESAMPLING_ERROR_EDEFAULT;
+    resamplingErrorESet = false;
+    if (eNotificationRequired())
+      eNotify(new ENotificationImpl(this, Notification.UNSET, PendulinePackage.ESTIMATE__RESAMPLING_ERROR, oldResamplingError, RESAMPLING_ERROR_EDEFAULT, oldResamplingErrorESet));
+  }
+
+  /**
+   * <!-- begin-user-doc -->
+   * <!-- end-user-doc -->
+   * @generated
+   */
+  @Override
+  public boolean isSetResamplingError()
+  {
+    return resamplingErrorESet;
+  }
+
+  /**
+   * <!-- begin-user-doc -->
+   * <!-- end-user-doc -->
+   * @generated
+   */
+  @Override
   public Object eGet(int featureID, boolean resolve, boolean coreType)
   {
     switch (featureID)
@@ -242,6 +326,8 @@ public class EstimateImpl extends MinimalEObjectImpl.Container implements Estima
         return getValue();
       case PendulinePackage.ESTIMATE__STANDARD_ERROR:
         return getStandardError();
+      case PendulinePackage.ESTIMATE__RESAMPLING_ERROR:
+        return getResamplingError();
     }
     return super.eGet(featureID, resolve, coreType);
   }
@@ -264,6 +350,9 @@ public class EstimateImpl extends MinimalEObjectImpl.Container implements Estima
         return;
       case PendulinePackage.ESTIMATE__STANDARD_ERROR:
         setStandardError((Double)newValue);
+        return;
+      case PendulinePackage.ESTIMATE__RESAMPLING_ERROR:
+        setResamplingError((Double)newValue);
         return;
     }
     super.eSet(featureID, newValue);
@@ -288,6 +377,9 @@ public class EstimateImpl extends MinimalEObjectImpl.Container implements Estima
       case PendulinePackage.ESTIMATE__STANDARD_ERROR:
         unsetStandardError();
         return;
+      case PendulinePackage.ESTIMATE__RESAMPLING_ERROR:
+        unsetResamplingError();
+        return;
     }
     super.eUnset(featureID);
   }
@@ -308,6 +400,8 @@ public class EstimateImpl extends MinimalEObjectImpl.Container implements Estima
         return value != VALUE_EDEFAULT;
       case PendulinePackage.ESTIMATE__STANDARD_ERROR:
         return isSetStandardError();
+      case PendulinePackage.ESTIMATE__RESAMPLING_ERROR:
+        return isSetResamplingError();
     }
     return super.eIsSet(featureID);
   }
@@ -329,6 +423,8 @@ public class EstimateImpl extends MinimalEObjectImpl.Container implements Estima
     result.append(value);
     result.append(", standardError: ");
     if (standardErrorESet) result.append(standardError); else result.append("<unset>");
+    result.append(", resamplingError: ");
+    if (resamplingErrorESet) result.append(resamplingError); else result.append("<unset>");
     result.append(')');
     return result.toString();
   }

@@ -1300,6 +1300,17 @@ public class PendulinePackageImpl extends EPackageImpl implements PendulinePacka
    * @generated
    */
   @Override
+  public EAttribute getEstimate_ResamplingError()
+  {
+    return (EAttribute)estimateEClass.getEStructuralFeatures().get(3);
+  }
+
+  /**
+   * <!-- begin-user-doc -->
+   * <!-- end-user-doc -->
+   * @generated
+   */
+  @Override
   public EClass getSessionFit()
   {
     return sessionFitEClass;
@@ -1702,6 +1713,7 @@ public class PendulinePackageImpl extends EPackageImpl implements PendulinePacka
     createEAttribute(estimateEClass, ESTIMATE__PARAMETER);
     createEAttribute(estimateEClass, ESTIMATE__VALUE);
     createEAttribute(estimateEClass, ESTIMATE__STANDARD_ERROR);
+    createEAttribute(estimateEClass, ESTIMATE__RESAMPLING_ERROR);
 
     sessionFitEClass = createEClass(SESSION_FIT);
     createEAttribute(sessionFitEClass, SESSION_FIT__SESSION_ID);
@@ -1868,6 +1880,7 @@ public class PendulinePackageImpl extends EPackageImpl implements PendulinePacka
     initEAttribute(getEstimate_Parameter(), ecorePackage.getEString(), "parameter", null, 0, 1, Estimate.class, !IS_TRANSIENT, !IS_VOLATILE, IS_CHANGEABLE, !IS_UNSETTABLE, !IS_ID, IS_UNIQUE, !IS_DERIVED, IS_ORDERED);
     initEAttribute(getEstimate_Value(), ecorePackage.getEDouble(), "value", null, 0, 1, Estimate.class, !IS_TRANSIENT, !IS_VOLATILE, IS_CHANGEABLE, !IS_UNSETTABLE, !IS_ID, IS_UNIQUE, !IS_DERIVED, IS_ORDERED);
     initEAttribute(getEstimate_StandardError(), ecorePackage.getEDouble(), "standardError", null, 0, 1, Estimate.class, !IS_TRANSIENT, !IS_VOLATILE, IS_CHANGEABLE, IS_UNSETTABLE, !IS_ID, IS_UNIQUE, !IS_DERIVED, IS_ORDERED);
+    initEAttribute(getEstimate_ResamplingError(), ecorePackage.getEDouble(), "resamplingError", null, 0, 1, Estimate.class, !IS_TRANSIENT, !IS_VOLATILE, IS_CHANGEABLE, IS_UNSETTABLE, !IS_ID, IS_UNIQUE, !IS_DERIVED, IS_ORDERED);
 
     initEClass(sessionFitEClass, SessionFit.class, "SessionFit", !IS_ABSTRACT, !IS_INTERFACE, IS_GENERATED_INSTANCE_CLASS);
     initEAttribute(getSessionFit_SessionId(), ecorePackage.getEString(), "sessionId", null, 0, 1, SessionFit.class, !IS_TRANSIENT, !IS_VOLATILE, IS_CHANGEABLE, !IS_UNSETTABLE, !IS_ID, IS_UNIQUE, !IS_DERIVED, IS_ORDERED);
@@ -2720,6 +2733,14 @@ public class PendulinePackageImpl extends EPackageImpl implements PendulinePacka
        {
          "kind", "element",
          "name", "standardError"
+       });
+    addAnnotation
+      (getEstimate_ResamplingError(),
+       source,
+       new String[]
+       {
+         "kind", "element",
+         "name", "resamplingError"
        });
     addAnnotation
       (sessionFitEClass,

@@ -10,6 +10,7 @@ import java.util.Map;
 import dev.penduline.cli.commands.AddSessionCommand;
 import dev.penduline.cli.commands.AnalyzeCommand;
 import dev.penduline.cli.commands.DemoRecordCommand;
+import dev.penduline.cli.commands.FitCommand;
 import dev.penduline.cli.commands.ImportPartsCommand;
 import dev.penduline.cli.commands.InertiaCommand;
 import dev.penduline.cli.commands.SimulateCommand;
@@ -23,7 +24,7 @@ public final class PendulineCommandLine {
 
     /** Creates the command line with every built-in command. */
     public PendulineCommandLine() {
-        this(List.of(new InertiaCommand(), new SimulateCommand(), new AnalyzeCommand(), new ImportPartsCommand(),
+        this(List.of(new FitCommand(), new InertiaCommand(), new SimulateCommand(), new AnalyzeCommand(), new ImportPartsCommand(),
                 new AddSessionCommand(), new DemoRecordCommand()));
     }
 

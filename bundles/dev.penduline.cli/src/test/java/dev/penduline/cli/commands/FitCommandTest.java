@@ -1,0 +1,117 @@
+package dev.penduline.cli.commands;
+
+import static org.junit.jupiter.api.Assertions.assertArrayEquals;
+import static org.junit.jupiter.api.Assertions.assertEquals;
+import static org.junit.jupiter.api.Assertions.assertTrue;
+
+import java.io.PrintWriter;
+import java.io.StringWriter;
+import java.nio.file.Files;
+import java.nio.file.Path;
+import java.util.regex.Matcher;
+import java.util.regex.Pattern;
+
+import org.junit.jupiter.api.BeforeEach;
+import org.junit.jupiter.api.Test;
+import org.junit.jupiter.api.io.TempDir;
+
+import dev.penduline.cli.ExitCode;
+import dev.penduline.cli.PendulineCommandLine;
+import dev.penduline.model.Mechanism;
+import dev.penduline.model.persistence.MechanismFiles;
+
+/**
+ * The fit command end to end on records made by {@code demo-record}: the truth is the
+ * simulator's settings (the simulator is checked against closed forms in
+ * dev.penduline.physics.motion; the fit engine's statistics are checked in
+ * dev.penduline.physics.identify). Short records keep the test quick.
+ */
+class FitCommandTest {
+
+    @TempDir
+    Path dir;
+
+    private StringWriter out;
+    private StringWriter err;
+
+    @BeforeEach
+    void clear() {
+        out = new StringWriter();
+        err = new StringWriter();
+    }
+
+    private ExitCode run(String... args) {
+        return new PendulineCommandLine().run(args, new PrintWriter(out, true), new PrintWriter(err, true));
+    }
+
+    private static double number(String json, String key) {
+        Matcher m = Pattern.compile("\"" + key + "\": ([-0-9.eE]+)").matcher(json);
+        assertTrue(m.find(), key + " missing in " + json);
+        return Double.parseDouble(m.group(1));
+    }
+
+    /** A project: a rod-and-bob arm (parts list imported) with two releases at different angles. */
+    private Path project() throws Exception {
+        Path parts = Files.writeString(dir.resolve("arm.csv"), """
+                name,shape,mass_kg,x_m,y_m,z_m,length_m,radius_m,axis
+                arm,rod,1,0,-0.3,0,0.6,,y
+                bob,sphere,1.5,0,-0.6,0,,0.05,
+                """);
+        Path mechanism = dir.resolve("arm.penduline");
+        assertEquals(ExitCode.OK, run("import-parts", parts.toString(), "--to", mechanism.toString()), err.toString());
+        for (String angle : new String[] {"12", "40"}) {
+            Path record = dir.resolve("release-" + angle + ".csv");
+            assertEquals(ExitCode.OK, run("demo-record", mechanism.toString(), "--theta0-deg", angle, "--viscous",
+                    "0.01", "--coulomb", "0.04", "--duration", "15", "--rate", "200", "--counts-per-rev", "0",
+                    "--noise-deg", "0.02", "--offset-deg", "-1.2", "--seed", angle, "--out", record.toString()),
+                    err.toString());
+            assertEquals(ExitCode.OK, run("add-session", mechanism.toString(), record.toString()), err.toString());
+        }
+        return mechanism;
+    }
+
+    @Test
+    void automaticFitFindsViscousPlusCoulombAndStoresTheResult() throws Exception {
+        Path mechanism = project();
+        out = new StringWriter();
+        assertEquals(ExitCode.OK, run("fit", mechanism.toString(), "--resamples", "8", "--json"), err.toString());
+        String json = out.toString();
+        assertTrue(json.contains("\"status\": \"converged\""), json);
+        assertEquals(0.01, number(json, "value"), 0.0005, "viscous b");
+        String coulomb = json.substring(json.indexOf("\"coulomb\": {"));
+        assertEquals(0.04, number(coulomb, "value"), 0.001, "Coulomb Tc");
+        assertTrue(!json.substring(0, json.indexOf("\"dominant\"")).contains("\"drag\": {"), "no drag term: " + json);
+        double calculated = number(json, "calculated_kg_m2");
+        assertEquals(calculated, number(json, "fitted_kg_m2"), 0.005 * calculated);
+        String shares = json.substring(json.indexOf("\"energy_share\""));
+        assertEquals(1.0, number(shares, "viscous") + number(shares, "coulomb") + number(shares, "drag"), 1e-9);
+        assertEquals(-1.2, number(json, "offset_deg"), 0.01);
+        assertTrue(json.contains("\"comparison\""), json);
+
+        Mechanism m = MechanismFiles.load(mechanism);
+        assertEquals(1, m.getFitResults().size());
+        assertEquals(2, m.getFitResults().get(0).getSessionIds().size());
+        assertTrue(m.getFitResults().get(0).getTermIds().contains("viscous"));
+    }
+
+    @Test
+    void aFitThatCannotConvergeSaysSoWithExitCodeOneAndStoresNothing() throws Exception {
+        Path mechanism = project();
+        byte[] before = Files.readAllBytes(mechanism);
+        out = new StringWriter();
+        assertEquals(ExitCode.COMPUTATION_FAILED, run("fit", mechanism.toString(), "--terms", "viscous,coulomb",
+                "--max-iterations", "1", "--resamples", "0"));
+        assertTrue(out.toString().contains("DID NOT CONVERGE"), out.toString());
+        assertArrayEquals(before, Files.readAllBytes(mechanism));
+    }
+
+    @Test
+    void unknownTermsAndMissingRecordsAreUsageErrors() throws Exception {
+        assertEquals(ExitCode.USAGE_OR_INPUT, run("fit", "--mass", "1", "--centroid-distance", "0.5",
+                "--pivot-inertia", "0.3", "--session", "x.csv", "--terms", "viscous,magnetic"));
+        assertTrue(err.toString().contains("'magnetic' is not one of"), err.toString());
+        assertEquals(ExitCode.USAGE_OR_INPUT, run("fit", "--mass", "1", "--centroid-distance", "0.5",
+                "--pivot-inertia", "0.3"));
+        assertTrue(err.toString().contains("which records?"), err.toString());
+    }
+}

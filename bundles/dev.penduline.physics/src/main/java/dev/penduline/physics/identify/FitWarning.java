@@ -1,0 +1,30 @@
+package dev.penduline.physics.identify;
+
+/**
+ * Something the user should know before trusting a fit.
+ *
+ * @param kind    what kind of doubt
+ * @param message a sentence for the user, naming the parameters and values
+ */
+public record FitWarning(Kind kind, String message) {
+
+    /** The kinds of doubt a fit can raise. */
+    public enum Kind {
+        /** Two parameters correlate beyond the limit: the record hardly separates them. */
+        STRONG_CORRELATION,
+        /** A parameter sits on its lower bound (zero friction, or J0 = m Lc²). */
+        ON_BOUND,
+        /** The fitted inertia differs from the calculated one by more than the limit. */
+        INERTIA_MISMATCH,
+        /** The optimiser did not converge. */
+        NOT_CONVERGED,
+        /** The Jacobian is (nearly) rank deficient: some parameter is not identifiable. */
+        NOT_IDENTIFIABLE,
+        /** Some resampling refits failed; the resampling σ rests on fewer refits. */
+        RESAMPLING_INCOMPLETE,
+        /** The sessions' stiction bands do not overlap. */
+        STICTION_UNRESOLVED,
+        /** The two uncertainty estimates disagree strongly (residuals far from white noise). */
+        UNCERTAINTY_DISAGREEMENT
+    }
+}

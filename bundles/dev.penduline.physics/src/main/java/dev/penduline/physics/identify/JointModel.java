@@ -1,0 +1,175 @@
+package dev.penduline.physics.identify;
+
+import java.util.ArrayList;
+import java.util.List;
+import java.util.function.BooleanSupplier;
+
+import org.hipparchus.linear.Array2DRowRealMatrix;
+import org.hipparchus.linear.ArrayRealVector;
+import org.hipparchus.linear.RealMatrix;
+import org.hipparchus.linear.RealVector;
+import org.hipparchus.optim.nonlinear.vector.leastsquares.MultivariateJacobianFunction;
+import org.hipparchus.util.Pair;
+
+/**
+ * The model of a joint fit: for each session, {@code θ_model(t) = offset + x(t − t_r)}, where x
+ * is the deviation of a release from rest at θ0 (held before t_r), and the Jacobian of all
+ * sessions' samples with respect to the scaled free parameters.
+ *
+ * <p>Columns: integrated sensitivities for θ0, b, Tc, c and J0 (see {@link SensitivitySwing});
+ * {@code ∂θ/∂t_r = −ω(t − t_r)} and {@code ∂θ/∂offset = 1} analytically. Not thread-safe: one
+ * instance per optimisation. It remembers the lowest-cost evaluation, so that a fit stopped by
+ * a limit or by cancellation can still report where it was.
+ */
+final class JointModel implements MultivariateJacobianFunction {
+
+    private final ParameterLayout layout;
+    private final double[] base;
+    private final List<StageSamples> data;
+    private final double stiffness;
+    private final double stiction;
+    private final double tolerance;
+    private final BooleanSupplier cancel;
+    private final List<SensitivitySwing> swings = new ArrayList<>();
+    private final List<int[]> columns = new ArrayList<>();
+    private final double[][] tau;
+    private final int rows;
+    private final double[] target;
+
+    private int evaluations;
+    private double bestCost = Double.POSITIVE_INFINITY;
+    private double[] bestFull;
+
+    JointModel(ParameterLayout layout, double[] base, List<StageSamples> data, double stiffness,
+            double stiction, double tolerance, BooleanSupplier cancel) {
+        this.layout = layout;
+        this.base = base.clone();
+        this.data = List.copyOf(data);
+        this.stiffness = stiffness;
+        this.stiction = stiction;
+        this.tolerance = tolerance;
+        this.cancel = cancel;
+        this.tau = new double[data.size()][];
+        int n = 0;
+        for (int s = 0; s < data.size(); s++) {
+            final int size = data.get(s).size();
+            n += size;
+            tau[s] = new double[size];
+            final List<ParameterKind> kinds = new ArrayList<>();
+            final List<Integer> cols = new ArrayList<>();
+            final int theta = ParameterLayout.index(s, 0);
+            if (layout.isFree(theta)) {
+                kinds.add(ParameterKind.RELEASE_ANGLE);
+                cols.add(layout.column(theta));
+            }
+            for (ParameterKind k : new ParameterKind[] {ParameterKind.VISCOUS, ParameterKind.COULOMB,
+                ParameterKind.DRAG, ParameterKind.INERTIA}) {
+                final int i = ParameterLayout.index(k);
+                if (layout.isFree(i)) {
+                    kinds.add(k);
+                    cols.add(layout.column(i));
+                }
+            }
+            swings.add(new SensitivitySwing(size, kinds.toArray(new ParameterKind[0])));
+            columns.add(cols.stream().mapToInt(Integer::intValue).toArray());
+        }
+        this.rows = n;
+        this.target = new double[n];
+        int r = 0;
+        for (StageSamples d : data) {
+            System.arraycopy(d.angles(), 0, target, r, d.size());
+            r += d.size();
+        }
+    }
+
+    /** The measured angles of every session, concatenated (rad). */
+    RealVector target() {
+        return new ArrayRealVector(target, true);
+    }
+
+    int rows() {
+        return rows;
+    }
+
+    @Override
+    public Pair<RealVector, RealMatrix> value(RealVector point) {
+        if (cancel != null && cancel.getAsBoolean()) {
+            throw new FitCancelledException();
+        }
+        final double[] full = layout.expand(point, base);
+        final double[] values = new double[rows];
+        final double[][] jacobian = new double[rows][layout.freeCount()];
+        evaluate(full, values, jacobian);
+        evaluations++;
+        double cost = 0;
+        for (int i = 0; i < rows; i++) {
+            final double r = target[i] - values[i];
+            cost += r * r;
+        }
+        if (cost < bestCost) {
+            bestCost = cost;
+            bestFull = full;
+        }
+        return new Pair<>(new ArrayRealVector(values, false), new Array2DRowRealMatrix(jacobian, false));
+    }
+
+    /** Model values and (when jacobian is not null) the Jacobian rows at a full vector. */
+    void evaluate(double[] full, double[] values, double[][] jacobian) {
+        final double b = full[ParameterLayout.index(ParameterKind.VISCOUS)];
+        final double tc = full[ParameterLayout.index(ParameterKind.COULOMB)];
+        final double c = full[ParameterLayout.index(ParameterKind.DRAG)];
+        final double j = full[ParameterLayout.index(ParameterKind.INERTIA)];
+        int row = 0;
+        for (int s = 0; s < data.size(); s++) {
+            final double theta0 = full[ParameterLayout.index(s, 0)];
+            final double release = full[ParameterLayout.index(s, 1)];
+            final double offset = full[ParameterLayout.index(s, 2)];
+            final double[] t = data.get(s).times();
+            final double[] ts = tau[s];
+            for (int i = 0; i < t.length; i++) {
+                ts[i] = t[i] - release;
+            }
+            final SensitivitySwing swing = swings.get(s);
+            swing.configure(stiffness, j, b, tc, stiction, c, tolerance, cancel);
+            swing.run(theta0, ts, 0, t.length);
+            final int[] cols = columns.get(s);
+            final int releaseColumn = layout.column(ParameterLayout.index(s, 1));
+            final int offsetColumn = layout.column(ParameterLayout.index(s, 2));
+            final double releaseScale = layout.scale(ParameterLayout.index(s, 1));
+            final double offsetScale = layout.scale(ParameterLayout.index(s, 2));
+            final double[] colScale = new double[cols.length];
+            for (int k = 0; k < cols.length; k++) {
+                colScale[k] = layout.scale(layout.fullIndex(cols[k]));
+            }
+            for (int i = 0; i < t.length; i++, row++) {
+                values[row] = offset + swing.angle[i];
+                if (jacobian == null) {
+                    continue;
+                }
+                final double[] jr = jacobian[row];
+                for (int k = 0; k < cols.length; k++) {
+                    jr[cols[k]] = swing.sensitivity[k][i] * colScale[k];
+                }
+                if (releaseColumn >= 0) {
+                    jr[releaseColumn] = -swing.velocity[i] * releaseScale;
+                }
+                if (offsetColumn >= 0) {
+                    jr[offsetColumn] = offsetScale;
+                }
+            }
+        }
+    }
+
+    int evaluations() {
+        return evaluations;
+    }
+
+    double bestCost() {
+        return bestCost;
+    }
+
+    /** The full vector of the lowest-cost evaluation so far, or null before the first. */
+    double[] bestFull() {
+        return bestFull == null ? null : bestFull.clone();
+    }
+}

@@ -1,0 +1,101 @@
+package dev.penduline.physics.identify;
+
+import java.util.ArrayList;
+import java.util.Arrays;
+import java.util.List;
+
+import org.hipparchus.linear.MatrixUtils;
+import org.hipparchus.linear.RealMatrix;
+import org.hipparchus.linear.SingularValueDecomposition;
+
+/**
+ * Standard errors and correlations from the Jacobian at the optimum.
+ *
+ * <p>Asymptotic covariance of nonlinear least squares: {@code σ² (JᵀJ)⁻¹} with
+ * {@code σ² = RSS / (n − p)} (Seber &amp; Wild, Nonlinear Regression, §2.1). Hipparchus'
+ * {@code Optimum.getCovariances} returns the unscaled {@code (JᵀJ)⁻¹}, hence the explicit
+ * σ². Parameters on their bound are treated as held there: their columns are dropped and they
+ * get no σ. The normal matrix is equilibrated (columns scaled to unit norm) before its
+ * pseudo-inverse, so that rank deficiency shows as a tiny singular value rather than as
+ * rounding noise.
+ *
+ * @param sigma         standard error per full index (SI); NaN where not free or on bound
+ * @param names         names of the parameters in the correlation matrix
+ * @param indices       their full indices
+ * @param correlation   the correlation matrix
+ * @param rankDeficient whether the Jacobian was (nearly) rank deficient
+ */
+record Uncertainty(double[] sigma, List<String> names, int[] indices, double[][] correlation,
+        boolean rankDeficient) {
+
+    /**
+     * Singular values of the equilibrated normal matrix below this fraction of the largest
+     * count as zero: a Jacobian condition number above 1e6 (correlations beyond 1 − 1e-12).
+     */
+    private static final double RANK_TOLERANCE = 1e-12;
+
+    static Uncertainty of(RealMatrix jacobian, ParameterLayout layout, double[] full, double rss, int rows) {
+        final double[] sigma = new double[layout.size()];
+        Arrays.fill(sigma, Double.NaN);
+        final List<Integer> active = new ArrayList<>();
+        for (int c = 0; c < layout.freeCount(); c++) {
+            final int i = layout.fullIndex(c);
+            if (!layout.onBound(i, full[i])) {
+                active.add(c);
+            }
+        }
+        final int q = active.size();
+        final int dof = rows - layout.freeCount();
+        if (q == 0 || dof <= 0 || jacobian == null) {
+            return new Uncertainty(sigma, List.of(), new int[0], new double[0][0], false);
+        }
+        // normal matrix of the active, equilibrated columns
+        final double[] norms = new double[q];
+        final double[][] normal = new double[q][q];
+        final int n = jacobian.getRowDimension();
+        final double[] row = new double[q];
+        for (int r = 0; r < n; r++) {
+            for (int a = 0; a < q; a++) {
+                row[a] = jacobian.getEntry(r, active.get(a));
+            }
+            for (int a = 0; a < q; a++) {
+                final double ra = row[a];
+                for (int b = 0; b <= a; b++) {
+                    normal[a][b] += ra * row[b];
+                }
+            }
+        }
+        for (int a = 0; a < q; a++) {
+            norms[a] = Math.sqrt(normal[a][a]);
+        }
+        boolean deficient = false;
+        for (int a = 0; a < q; a++) {
+            for (int b = 0; b <= a; b++) {
+                final double v = norms[a] > 0 && norms[b] > 0 ? normal[a][b] / (norms[a] * norms[b]) : 0;
+                normal[a][b] = v;
+                normal[b][a] = v;
+            }
+            deficient |= norms[a] == 0;
+        }
+        final SingularValueDecomposition svd = new SingularValueDecomposition(MatrixUtils.createRealMatrix(normal));
+        final double[] singular = svd.getSingularValues();
+        // the normal matrix squares the Jacobian's singular values
+        deficient |= singular[q - 1] < RANK_TOLERANCE * singular[0];
+        final RealMatrix inverse = svd.getSolver().getInverse();
+        final double variance = rss / dof;
+        final double[][] correlation = new double[q][q];
+        final List<String> names = new ArrayList<>();
+        final int[] indices = new int[q];
+        for (int a = 0; a < q; a++) {
+            final int i = layout.fullIndex(active.get(a));
+            indices[a] = i;
+            names.add(layout.name(i));
+            sigma[i] = layout.scale(i) * Math.sqrt(variance * inverse.getEntry(a, a)) / norms[a];
+            for (int b = 0; b < q; b++) {
+                correlation[a][b] = inverse.getEntry(a, b)
+                        / Math.sqrt(inverse.getEntry(a, a) * inverse.getEntry(b, b));
+            }
+        }
+        return new Uncertainty(sigma, List.copyOf(names), indices, correlation, deficient);
+    }
+}

@@ -1,0 +1,155 @@
+package dev.penduline.services;
+
+import java.nio.file.Path;
+import java.time.Instant;
+import java.time.temporal.ChronoUnit;
+import java.util.List;
+import java.util.Locale;
+
+import dev.penduline.model.EnergyShare;
+import dev.penduline.model.Estimate;
+import dev.penduline.model.FitResult;
+import dev.penduline.model.Mechanism;
+import dev.penduline.model.PendulineFactory;
+import dev.penduline.model.SessionFit;
+import dev.penduline.model.Setting;
+import dev.penduline.model.TermSetScore;
+import dev.penduline.model.naming.NamedElements;
+import dev.penduline.physics.identify.CandidateScore;
+import dev.penduline.physics.identify.CorrelationTable;
+import dev.penduline.physics.identify.FitSettings;
+import dev.penduline.physics.identify.FitWarning;
+import dev.penduline.physics.identify.FrictionFit;
+import dev.penduline.physics.identify.FrictionTerm;
+import dev.penduline.physics.identify.ParameterEstimate;
+import dev.penduline.physics.identify.SessionEstimate;
+
+/**
+ * Stores a friction fit in the mechanism file it belongs to: the sessions and terms used, the
+ * estimates with both standard errors, the correlations, fitted against calculated inertia,
+ * each session's nuisance values, the comparison of term sets, the dominant loss with the
+ * energy shares, the settings, and when it was computed (the file's only timestamp).
+ */
+public final class FitRecorder {
+
+    private FitRecorder() {
+    }
+
+    /**
+     * Appends the fit to the mechanism file and saves it atomically.
+     *
+     * @param mechanismFile the mechanism file
+     * @param outcome       the fit
+     * @param computedAt    when it was computed
+     * @return the stored result's identifier
+     * @throws InputException when the file cannot be read or saved
+     */
+    public static String store(Path mechanismFile, FrictionIdentification.Outcome outcome, Instant computedAt)
+            throws InputException {
+        Mechanism m = MechanismLoader.readMechanism(mechanismFile);
+        String when = computedAt.truncatedTo(ChronoUnit.SECONDS).toString();
+        FitResult r = NamedElements.addFitResult(m, "Fit " + when, when);
+        fill(r, outcome);
+        MechanismStore.save(m, mechanismFile);
+        return r.getId();
+    }
+
+    private static void fill(FitResult r, FrictionIdentification.Outcome outcome) {
+        FrictionFit fit = outcome.fit();
+        PendulineFactory f = PendulineFactory.eINSTANCE;
+        for (FrictionIdentification.SessionInput s : outcome.sessions()) {
+            r.getSessionIds().add(s.sessionId() != null ? s.sessionId() : s.file());
+        }
+        for (FrictionTerm t : fit.terms()) {
+            r.getTermIds().add(t.name().toLowerCase(Locale.ROOT));
+        }
+        for (ParameterEstimate p : fit.parameters()) {
+            Estimate e = f.createEstimate();
+            e.setParameter(p.name());
+            e.setValue(p.value());
+            if (Double.isFinite(p.sigmaJacobian())) {
+                e.setStandardError(p.sigmaJacobian());
+            }
+            if (Double.isFinite(p.sigmaResampling())) {
+                e.setResamplingError(p.sigmaResampling());
+            }
+            r.getEstimates().add(e);
+        }
+        CorrelationTable c = fit.correlation();
+        if (c != null) {
+            r.getCorrelationParameters().addAll(c.names());
+            for (double[] row : c.values()) {
+                for (double v : row) {
+                    r.getCorrelations().add(Double.isFinite(v) ? v : 0);
+                }
+            }
+        }
+        if (fit.inertia() != null) {
+            r.setCalculatedInertia(fit.inertia().calculated());
+            r.setFittedInertia(fit.inertia().fitted());
+        }
+        for (SessionEstimate s : fit.sessions()) {
+            SessionFit sf = f.createSessionFit();
+            sf.setSessionId(sessionId(outcome, s.name()));
+            sf.setInitialAngle(s.releaseAngle().value());
+            sf.setReleaseTime(s.releaseTime().value());
+            sf.setAngleOffset(s.offset().value());
+            sf.setRmsResidual(s.rms());
+            r.getSessionFits().add(sf);
+        }
+        outcome.comparison().ifPresent(cmp -> {
+            for (CandidateScore score : cmp.candidates()) {
+                TermSetScore t = f.createTermSetScore();
+                for (FrictionTerm term : score.terms()) {
+                    t.getTermIds().add(term.name().toLowerCase(Locale.ROOT));
+                }
+                t.setAic(score.aic());
+                t.setBic(score.bic());
+                t.setRmsResidual(score.rms());
+                r.getComparisons().add(t);
+            }
+        });
+        if (fit.energy() != null) {
+            r.setDominantLoss(fit.energy().dominant().name().toLowerCase(Locale.ROOT));
+            share(r, "viscous", fit.energy().viscous());
+            share(r, "coulomb", fit.energy().coulomb());
+            share(r, "drag", fit.energy().drag());
+        }
+        FitSettings s = fit.settings();
+        setting(r, "terms", outcome.automatic() ? "auto" : "given");
+        setting(r, "inertia", fit.inertia() != null && fit.inertia().free() ? "free" : "fixed");
+        setting(r, "status", fit.status().name().toLowerCase(Locale.ROOT));
+        setting(r, "max-iterations", String.valueOf(s.maxIterations()));
+        setting(r, "max-evaluations", String.valueOf(s.maxEvaluations()));
+        setting(r, "integration-tolerance", String.valueOf(s.integrationTolerance()));
+        setting(r, "resamples", String.valueOf(fit.resamplesUsed()));
+        setting(r, "seed", String.valueOf(s.seed()));
+        List<FitWarning> warnings = fit.warnings();
+        for (int i = 0; i < warnings.size(); i++) {
+            setting(r, "warning-" + (i + 1), warnings.get(i).message());
+        }
+    }
+
+    private static String sessionId(FrictionIdentification.Outcome outcome, String name) {
+        for (FrictionIdentification.SessionInput s : outcome.sessions()) {
+            if (s.name().equals(name)) {
+                return s.sessionId() != null ? s.sessionId() : s.file();
+            }
+        }
+        return name;
+    }
+
+    private static void share(FitResult r, String term, double value) {
+        EnergyShare e = PendulineFactory.eINSTANCE.createEnergyShare();
+        e.setTermId(term);
+        e.setShare(value);
+        r.getEnergyShares().add(e);
+    }
+
+    private static void setting(FitResult r, String key, String value) {
+        Setting s = PendulineFactory.eINSTANCE.createSetting();
+        s.setKey(key);
+        s.setValue(value);
+        r.getSettings().add(s);
+    }
+}

@@ -1,0 +1,176 @@
+package dev.penduline.services;
+
+import java.nio.file.Path;
+import java.util.ArrayList;
+import java.util.EnumSet;
+import java.util.List;
+import java.util.Optional;
+import java.util.Set;
+
+import dev.penduline.model.Mechanism;
+import dev.penduline.model.TestSession;
+import dev.penduline.physics.MechanismProperties;
+import dev.penduline.physics.identify.FitControl;
+import dev.penduline.physics.identify.FitSettings;
+import dev.penduline.physics.identify.FrictionFit;
+import dev.penduline.physics.identify.FrictionIdentifier;
+import dev.penduline.physics.identify.FrictionProblem;
+import dev.penduline.physics.identify.FrictionTerm;
+import dev.penduline.physics.identify.ModelComparison;
+import dev.penduline.physics.identify.ReleaseSession;
+import dev.penduline.physics.identify.SessionGuess;
+import dev.penduline.physics.motion.FrictionTorques;
+import dev.penduline.physics.swing.FrictionEstimates;
+import dev.penduline.physics.swing.SwingAnalysis;
+import dev.penduline.records.swing.SwingImportOptions;
+import dev.penduline.records.swing.SwingRecord;
+
+/**
+ * Identifies the friction of a mechanism from one or more release records: the use case behind
+ * {@code penduline fit} and the workbench's fit action. Each record is first analysed (release,
+ * offset, first estimates from the decay envelope) to start the fit; then the whole trajectory
+ * is fitted, either with the terms asked for or, by default, with every candidate term set
+ * compared and the best one kept.
+ */
+public final class FrictionIdentification {
+
+    /** One record to fit, with where it came from and its first analysis. */
+    public record SessionInput(String name, String file, String sessionId, SwingRecord record, SwingAnalysis analysis,
+            List<String> warnings) {
+
+        /** Copies the list. */
+        public SessionInput {
+            warnings = List.copyOf(warnings);
+        }
+    }
+
+    /** What was fitted, how, and what came out. */
+    public record Outcome(MechanismSource mechanism, List<SessionInput> sessions, FrictionFit fit,
+            Optional<ModelComparison> comparison, boolean automatic, List<String> warnings) {
+
+        /** Copies the lists. */
+        public Outcome {
+            sessions = List.copyOf(sessions);
+            warnings = List.copyOf(warnings);
+        }
+    }
+
+    private FrictionIdentification() {
+    }
+
+    /**
+     * Reads and analyses a record given on the command line.
+     *
+     * @param file      the record
+     * @param options   how to read it
+     * @param mechanism the mechanism
+     * @return the prepared input
+     * @throws InputException when the record cannot be read or analysed
+     */
+    public static SessionInput prepare(Path file, SwingImportOptions options, MechanismSource mechanism)
+            throws InputException {
+        SwingRecord record = SessionRecords.read(file, options);
+        SwingAnalysis analysis = SwingSessionAnalysis.analyse(record, Optional.of(mechanism));
+        String name = file.getFileName().toString().replaceFirst("\\.[^.]*$", "");
+        return new SessionInput(name, file.toString(), null, record, analysis, record.warnings());
+    }
+
+    /**
+     * Reads and analyses every test session of a mechanism file.
+     *
+     * @param mechanismFile the mechanism file
+     * @param mechanism     the mechanism loaded from it
+     * @return the prepared inputs, in the file's order
+     * @throws InputException when the file has no sessions or a record cannot be read
+     */
+    public static List<SessionInput> sessionsOf(Path mechanismFile, MechanismSource mechanism) throws InputException {
+        Mechanism m = MechanismLoader.readMechanism(mechanismFile);
+        if (m.getSessions().isEmpty()) {
+            throw new InputException(mechanismFile + ": has no test sessions; add records with 'penduline add-session'"
+                    + " or give them with --session");
+        }
+        List<SessionInput> inputs = new ArrayList<>();
+        for (TestSession s : m.getSessions()) {
+            SessionRecords.SessionRecord sr = SessionRecords.readSession(mechanismFile, s);
+            SwingAnalysis analysis = SwingSessionAnalysis.analyse(sr.record(), Optional.of(mechanism));
+            List<String> warnings = new ArrayList<>(sr.warnings());
+            warnings.addAll(sr.record().warnings());
+            inputs.add(new SessionInput(s.getName(), s.getRecordPath(), s.getId(), sr.record(), analysis, warnings));
+        }
+        return inputs;
+    }
+
+    /**
+     * Fits the friction.
+     *
+     * @param mechanism  the mechanism (its calculated inertia starts the fit)
+     * @param sessions   the prepared records
+     * @param terms      the terms to fit, or empty to compare the candidate sets and keep the best
+     * @param fixInertia whether to hold the pivot inertia at the calculated value
+     * @param settings   limits, tolerances and resampling
+     * @param control    cancellation and progress
+     * @return the outcome; its fit's status says whether it converged
+     * @throws InputException when the records cannot make a problem (too short, inconsistent)
+     */
+    public static Outcome identify(MechanismSource mechanism, List<SessionInput> sessions,
+            Optional<Set<FrictionTerm>> terms, boolean fixInertia, FitSettings settings, FitControl control)
+            throws InputException {
+        if (sessions.isEmpty()) {
+            throw new InputException("no records to fit");
+        }
+        MechanismProperties p = mechanism.properties();
+        MechanismProperties aboutEquilibrium = new MechanismProperties(p.mass(), p.centroidDistance(),
+                p.pivotInertia(), 0, p.gravity(), p.axisTilt());
+        List<ReleaseSession> releases = new ArrayList<>();
+        List<String> warnings = new ArrayList<>();
+        for (SessionInput s : sessions) {
+            SwingAnalysis a = s.analysis();
+            double[] t = s.record().times();
+            releases.add(new ReleaseSession(s.name(), t, s.record().angles(),
+                    new SessionGuess(a.initialAngle(), a.release().time(), a.offset().value())));
+            for (String w : s.warnings()) {
+                warnings.add(s.name() + ": " + w);
+            }
+        }
+        FrictionProblem problem;
+        try {
+            problem = FrictionProblem.of(aboutEquilibrium, releases).withInertiaFree(!fixInertia)
+                    .withStart(startingValues(sessions));
+            if (terms.isPresent()) {
+                problem = problem.withTerms(EnumSet.copyOf(terms.get()));
+            }
+        } catch (IllegalArgumentException e) {
+            throw new InputException(e.getMessage(), e);
+        }
+        FrictionIdentifier identifier = new FrictionIdentifier(settings);
+        if (terms.isPresent()) {
+            return new Outcome(mechanism, sessions, identifier.fit(problem, control), Optional.empty(), false,
+                    warnings);
+        }
+        ModelComparison comparison = identifier.compare(problem, control);
+        return new Outcome(mechanism, sessions, comparison.best(), Optional.of(comparison), true, warnings);
+    }
+
+    /**
+     * The average of the sessions' first estimates from their decay envelopes.
+     *
+     * @param sessions the analysed records
+     * @return starting friction torques (zero where no session shows the term)
+     */
+    static FrictionTorques startingValues(List<SessionInput> sessions) {
+        double b = 0;
+        double tc = 0;
+        double c = 0;
+        int n = 0;
+        for (SessionInput s : sessions) {
+            Optional<FrictionEstimates> e = s.analysis().estimates();
+            if (e.isPresent()) {
+                b += Math.max(0, e.get().viscous());
+                tc += Math.max(0, e.get().coulomb());
+                c += Math.max(0, e.get().drag());
+                n++;
+            }
+        }
+        return n == 0 ? FrictionTorques.none() : new FrictionTorques(b / n, tc / n, 0, c / n);
+    }
+}

@@ -1,0 +1,77 @@
+package dev.penduline.services;
+
+import java.io.IOException;
+import java.nio.file.Files;
+import java.nio.file.NoSuchFileException;
+import java.nio.file.Path;
+import java.util.Optional;
+
+import dev.penduline.model.Mechanism;
+import dev.penduline.model.naming.NamedElements;
+import dev.penduline.model.naming.StableIds;
+import dev.penduline.model.persistence.MechanismFormat;
+import dev.penduline.records.RecordFormatException;
+import dev.penduline.records.parts.PartsList;
+import dev.penduline.records.parts.PartsListReader;
+
+/**
+ * Starts a mechanism file for a new project: empty, or holding the parts of a parts list. The
+ * use case behind the workbench's new-project wizard. The parts list is read first, so that a
+ * bad list is reported before anything is created; the file is never overwritten.
+ */
+public final class NewMechanismFile {
+
+    private NewMechanismFile() {
+    }
+
+    /**
+     * The file name a mechanism of that name gets: its stable identifier with the mechanism
+     * file extension ("Inspection hatch IH-60" gives {@code inspection-hatch-ih-60.penduline}).
+     *
+     * @param mechanismName the mechanism's name
+     * @return the file name, without folder
+     */
+    public static String fileName(String mechanismName) {
+        return StableIds.slug(mechanismName, "mechanism") + "." + MechanismFormat.FILE_EXTENSION;
+    }
+
+    /**
+     * Reads a parts-list CSV, to check it before a project is created for it.
+     *
+     * @param partsList the parts-list CSV
+     * @return the parts as read, with warnings (ignored columns and the like)
+     * @throws InputException naming the file, line and column when the list cannot be read
+     */
+    public static PartsList readPartsList(Path partsList) throws InputException {
+        try {
+            return new PartsListReader().read(partsList);
+        } catch (NoSuchFileException e) {
+            throw new InputException(partsList + ": no such file", e);
+        } catch (IOException e) {
+            throw new InputException(partsList + ": cannot be read (" + e.getMessage() + ")", e);
+        } catch (RecordFormatException e) {
+            throw new InputException(e.getMessage(), e);
+        }
+    }
+
+    /**
+     * Writes a new mechanism file: with the parts of a list when one is given (see
+     * {@link PartsImport#write}), else a mechanism without parts yet.
+     *
+     * @param name   the mechanism's name
+     * @param parts  the parts as read, or empty
+     * @param target the mechanism file to create; it must not exist
+     * @throws InputException when the target exists or cannot be written
+     */
+    public static void write(String name, Optional<PartsList> parts, Path target) throws InputException {
+        if (parts.isPresent()) {
+            PartsImport.write(name, parts.get(), target);
+            return;
+        }
+        if (Files.exists(target)) {
+            throw new InputException(target + ": already exists; choose another name or remove it first");
+        }
+        Mechanism mechanism = NamedElements.mechanism(name);
+        MechanismStore.save(mechanism, target);
+    }
+}
