@@ -78,10 +78,10 @@ final class FitReportText {
             out.println();
             out.printf(Locale.ROOT, "Term sets compared (effective samples %s of %d, residual lag-1 correlation %.2f):%n",
                     Numbers.significant(c.effectiveSamples()), c.samples(), c.lag1());
-            out.println("       terms                         AIC           BIC   rms (°)   supported");
+            out.println("      terms                              AIC           BIC    rms (°)  supported");
             for (int k = 0; k < c.candidates().size(); k++) {
                 CandidateScore s = c.candidates().get(k);
-                out.printf(Locale.ROOT, "  %s  %-26s %12s  %12s  %8s   %s%n", k == c.selected() ? "=>" : "  ",
+                out.printf(Locale.ROOT, "  %s  %-30s %12s  %12s  %9s  %s%n", k == c.selected() ? "=>" : "  ",
                         termList(s.terms()), Numbers.significant(s.aic()), Numbers.significant(s.bic()),
                         Numbers.significant(Unit.DEGREE.fromSi(s.rms())), s.supported() ? "yes" : "no");
             }

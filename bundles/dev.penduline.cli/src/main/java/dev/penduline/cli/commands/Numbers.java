@@ -2,6 +2,7 @@ package dev.penduline.cli.commands;
 
 import java.math.BigDecimal;
 import java.math.MathContext;
+import java.util.Locale;
 
 /** Number formatting for readable reports: six significant digits, no trailing zeros. */
 final class Numbers {
@@ -24,8 +25,13 @@ final class Numbers {
         if (v == 0) {
             return "0";
         }
-        BigDecimal d = new BigDecimal(v).round(SIX).stripTrailingZeros();
         double a = Math.abs(v);
-        return a >= 1e-4 && a < 1e7 ? d.toPlainString() : d.toString();
+        if (a >= 1e-4 && a < 1e7) {
+            return new BigDecimal(v).round(SIX).stripTrailingZeros().toPlainString();
+        }
+        // 3.83297e-06 rather than 0.00000383297 or 3.83297E-6
+        String[] parts = String.format(Locale.ROOT, "%.5e", v).split("e");
+        String mantissa = parts[0].contains(".") ? parts[0].replaceAll("0+$", "").replaceAll("\\.$", "") : parts[0];
+        return mantissa + "e" + parts[1];
     }
 }
