@@ -9,6 +9,12 @@ public final class PendulineViews {
     public static final String PROJECT_FILES = "dev.penduline.ui.projectFiles";
     /** The start page: what Penduline does and where to begin. */
     public static final String SWING_DESK = "dev.penduline.ui.swingDesk";
+    /** The mechanism selected in Project Files: totals, per-part contributions, warnings. */
+    public static final String MECHANISM = "dev.penduline.ui.mechanism";
+    /** A test session's record plotted with its turning points, or a predicted swing. */
+    public static final String SWING_CHART = "dev.penduline.ui.swingChart";
+    /** The wizard that creates a mechanism project (File › New). */
+    public static final String NEW_MECHANISM_PROJECT = "dev.penduline.ui.newMechanismProject";
     /** The platform's Properties view. */
     public static final String PROPERTIES = "org.eclipse.ui.views.PropertySheet";
     /** The platform's Problems view. */

@@ -19,6 +19,7 @@ final class PendulineActionBarAdvisor extends ActionBarAdvisor {
     private IWorkbenchAction about;
     private IWorkbenchAction newWizard;
     private IWorkbenchAction save;
+    private OpenFolderAction openFolder;
 
     PendulineActionBarAdvisor(IActionBarConfigurer configurer) {
         super(configurer);
@@ -28,6 +29,7 @@ final class PendulineActionBarAdvisor extends ActionBarAdvisor {
     protected void makeActions(IWorkbenchWindow window) {
         newWizard = register(ActionFactory.NEW.create(window));
         save = register(ActionFactory.SAVE.create(window));
+        openFolder = new OpenFolderAction(window);
         quit = register(ActionFactory.QUIT.create(window));
         preferences = register(ActionFactory.PREFERENCES.create(window));
         about = register(ActionFactory.ABOUT.create(window));
@@ -42,7 +44,11 @@ final class PendulineActionBarAdvisor extends ActionBarAdvisor {
     protected void fillMenuBar(IMenuManager menuBar) {
         IWorkbenchWindow window = getActionBarConfigurer().getWindowConfigurer().getWindow();
         MenuManager file = new MenuManager("&File", IWorkbenchActionConstants.M_FILE);
-        file.add(newWizard);
+        MenuManager newMenu = new MenuManager("&New", ActionFactory.NEW.getId());
+        // the perspective's new-wizard shortcuts (Mechanism Project first), then "Other..."
+        newMenu.add(ContributionItemFactory.NEW_WIZARD_SHORTLIST.create(window));
+        file.add(newMenu);
+        file.add(openFolder);
         file.add(save);
         file.add(new Separator(IWorkbenchActionConstants.MB_ADDITIONS));
         file.add(new Separator());

@@ -1,9 +1,13 @@
 package dev.penduline.app.internal;
 
+import java.nio.file.Files;
+import java.nio.file.Path;
+
 import org.eclipse.core.resources.ResourcesPlugin;
 import org.eclipse.core.runtime.CoreException;
 import org.eclipse.core.runtime.ILog;
 import org.eclipse.core.runtime.NullProgressMonitor;
+import org.eclipse.core.runtime.Platform;
 import org.eclipse.ui.application.IWorkbenchConfigurer;
 import org.eclipse.ui.application.IWorkbenchWindowConfigurer;
 import org.eclipse.ui.application.WorkbenchAdvisor;
@@ -11,6 +15,7 @@ import org.eclipse.ui.application.WorkbenchWindowAdvisor;
 import org.eclipse.ui.ide.IDE;
 
 import dev.penduline.ui.PendulineViews;
+import dev.penduline.ui.ProjectFolders;
 
 /**
  * Opens the Penduline perspective and keeps the workspace saved. Public (to the test bundle
@@ -37,6 +42,30 @@ public class PendulineWorkbenchAdvisor extends WorkbenchAdvisor {
     @Override
     public WorkbenchWindowAdvisor createWorkbenchWindowAdvisor(IWorkbenchWindowConfigurer configurer) {
         return new PendulineWindowAdvisor(configurer);
+    }
+
+    /**
+     * Opens the folders named on the command line ({@code ./penduline gui FOLDER ...}) as
+     * projects, in place.
+     */
+    @Override
+    public void postStartup() {
+        super.postStartup();
+        for (String arg : Platform.getApplicationArgs()) {
+            if (arg.startsWith("-")) {
+                continue;
+            }
+            Path folder = Path.of(arg);
+            if (Files.isDirectory(folder)) {
+                try {
+                    ProjectFolders.open(folder, new NullProgressMonitor());
+                } catch (CoreException e) {
+                    ILog.of(getClass()).log(e.getStatus());
+                }
+            } else {
+                ILog.of(getClass()).warn("not a folder, not opened: " + folder.toAbsolutePath());
+            }
+        }
     }
 
     @Override

@@ -4,19 +4,11 @@ import static org.junit.jupiter.api.Assertions.assertEquals;
 import static org.junit.jupiter.api.Assertions.assertNotNull;
 import static org.junit.jupiter.api.Assertions.assertTrue;
 
-import java.io.IOException;
 import java.nio.file.Files;
 import java.nio.file.Path;
-import java.nio.file.Paths;
 import java.util.ArrayList;
 import java.util.List;
 
-import org.eclipse.swt.SWT;
-import org.eclipse.swt.graphics.GC;
-import org.eclipse.swt.graphics.Image;
-import org.eclipse.swt.graphics.ImageData;
-import org.eclipse.swt.graphics.ImageLoader;
-import org.eclipse.swt.graphics.Rectangle;
 import org.eclipse.swt.widgets.Display;
 import org.eclipse.swt.widgets.Shell;
 import org.eclipse.ui.IViewPart;
@@ -30,12 +22,18 @@ import dev.penduline.ui.PendulineViews;
 
 /**
  * Starts the real workbench with the product's advisor (under Xvfb in CI), checks the main
- * window and its title, opens the views a user relies on, leaves screenshots under
- * {@code target/screenshots/}, and closes the workbench again.
+ * window and its title, opens the views a user relies on, runs the first steps of an engineer
+ * ({@link MechanismViewsScenario}: a new mechanism project, its inertia, its swing chart), leaves
+ * screenshots under {@code target/screenshots/}, and closes the workbench again.
  */
 class WorkbenchSmokeTest {
 
+    private static final String[] VIEWS = {PendulineViews.PROJECT_FILES, PendulineViews.MECHANISM,
+        PendulineViews.SWING_CHART, PendulineViews.SWING_DESK, PendulineViews.PROPERTIES, PendulineViews.PROBLEMS,
+        PendulineViews.PROGRESS};
+
     private final List<String> seen = new ArrayList<>();
+    private final Screenshots shots = new Screenshots();
     private Throwable failure;
 
     @Test
@@ -54,8 +52,10 @@ class WorkbenchSmokeTest {
             throw failure;
         }
         assertEquals(PlatformUI.RETURN_OK, code);
-        assertEquals(List.of("window", PendulineViews.PROJECT_FILES, PendulineViews.SWING_DESK,
-                PendulineViews.PROPERTIES, PendulineViews.PROBLEMS, PendulineViews.PROGRESS), seen);
+        List<String> expected = new ArrayList<>(List.of("window"));
+        expected.addAll(List.of(VIEWS));
+        expected.add("scenario");
+        assertEquals(expected, seen);
     }
 
     private void inspectAndClose() {
@@ -68,18 +68,24 @@ class WorkbenchSmokeTest {
             IWorkbenchPage page = window.getActivePage();
             assertEquals(PendulineViews.PERSPECTIVE, page.getPerspective().getId());
             flush(shell.getDisplay());
-            Path shot = screenshot(shell, "workbench.png");
+            Path shot = shots.take(shell, "workbench.png");
             assertTrue(Files.size(shot) > 1000, "screenshot is empty: " + shot);
             seen.add("window");
-            for (String id : new String[] {PendulineViews.PROJECT_FILES, PendulineViews.SWING_DESK,
-                    PendulineViews.PROPERTIES, PendulineViews.PROBLEMS, PendulineViews.PROGRESS}) {
+            for (String id : VIEWS) {
                 IViewPart view = page.showView(id);
                 assertNotNull(view, id);
                 assertEquals(id, view.getViewSite().getId());
                 flush(shell.getDisplay());
                 seen.add(id);
             }
-            screenshot(shell, "views.png");
+            shots.take(shell, "views.png");
+            // Back to the layout a user starts with: the Mechanism view in front in the centre.
+            page.showView(PendulineViews.MECHANISM);
+            page.showView(PendulineViews.PROPERTIES);
+            page.showView(PendulineViews.PROJECT_FILES);
+            flush(shell.getDisplay());
+            new MechanismViewsScenario(window, shots).run();
+            seen.add("scenario");
         } catch (Throwable t) {
             failure = t;
         } finally {
@@ -93,26 +99,5 @@ class WorkbenchSmokeTest {
                 // drain the event queue so that the window is painted before the screenshot
             }
         }
-    }
-
-    private static Path screenshot(Shell shell, String name) throws IOException {
-        Path dir = Paths.get(System.getProperty("penduline.screenshotDir", "target/screenshots"));
-        Files.createDirectories(dir);
-        Path file = dir.resolve(name);
-        Display display = shell.getDisplay();
-        Rectangle bounds = shell.getBounds();
-        Image image = new Image(display, bounds.width, bounds.height);
-        GC gc = new GC(display);
-        try {
-            gc.copyArea(image, bounds.x, bounds.y);
-            ImageData data = image.getImageData();
-            ImageLoader loader = new ImageLoader();
-            loader.data = new ImageData[] {data};
-            loader.save(file.toString(), SWT.IMAGE_PNG);
-        } finally {
-            gc.dispose();
-            image.dispose();
-        }
-        return file;
     }
 }

@@ -6,23 +6,35 @@ import org.eclipse.ui.IPerspectiveFactory;
 
 import dev.penduline.ui.PendulineViews;
 
-/** Project files on the left, the desk in the middle, properties and problems below. */
+/**
+ * Project files on the left with Properties, Problems and Progress in a folder below them; the
+ * Mechanism view and the Swing Desk at the top of the centre, the Swing Chart below them. The
+ * centre keeps the full height because the totals, the parts and the chart need it more than
+ * the platform views do.
+ */
 public final class PendulinePerspective implements IPerspectiveFactory {
 
     @Override
     public void createInitialLayout(IPageLayout layout) {
         String editors = layout.getEditorArea();
         layout.setEditorAreaVisible(false);
-        layout.addView(PendulineViews.PROJECT_FILES, IPageLayout.LEFT, 0.25f, editors);
-        layout.addStandaloneView(PendulineViews.SWING_DESK, false, IPageLayout.TOP, 0.7f, editors);
-        IFolderLayout bottom = layout.createFolder("dev.penduline.ui.bottom", IPageLayout.BOTTOM, 0.7f, editors);
+        layout.addView(PendulineViews.PROJECT_FILES, IPageLayout.LEFT, 0.24f, editors);
+        IFolderLayout bottom = layout.createFolder("dev.penduline.ui.bottom", IPageLayout.BOTTOM, 0.6f,
+                PendulineViews.PROJECT_FILES);
         bottom.addView(PendulineViews.PROPERTIES);
         bottom.addView(PendulineViews.PROBLEMS);
         bottom.addPlaceholder(PendulineViews.PROGRESS);
-        layout.addShowViewShortcut(PendulineViews.PROJECT_FILES);
-        layout.addShowViewShortcut(PendulineViews.SWING_DESK);
-        layout.addShowViewShortcut(PendulineViews.PROPERTIES);
-        layout.addShowViewShortcut(PendulineViews.PROBLEMS);
-        layout.addShowViewShortcut(PendulineViews.PROGRESS);
+        // The editor area is hidden: the two centre folders share its space.
+        IFolderLayout centre = layout.createFolder("dev.penduline.ui.centre", IPageLayout.TOP, 0.55f, editors);
+        centre.addView(PendulineViews.MECHANISM);
+        centre.addView(PendulineViews.SWING_DESK);
+        IFolderLayout charts = layout.createFolder("dev.penduline.ui.charts", IPageLayout.BOTTOM, 0.5f, editors);
+        charts.addView(PendulineViews.SWING_CHART);
+        for (String view : new String[] {PendulineViews.PROJECT_FILES, PendulineViews.MECHANISM,
+                PendulineViews.SWING_CHART, PendulineViews.SWING_DESK, PendulineViews.PROPERTIES,
+                PendulineViews.PROBLEMS, PendulineViews.PROGRESS}) {
+            layout.addShowViewShortcut(view);
+        }
+        layout.addNewWizardShortcut(PendulineViews.NEW_MECHANISM_PROJECT);
     }
 }

@@ -3,12 +3,14 @@ package dev.penduline.ui.internal;
 import jakarta.annotation.PostConstruct;
 import jakarta.annotation.PreDestroy;
 
+import org.eclipse.core.resources.IResource;
 import org.eclipse.core.resources.IResourceChangeEvent;
 import org.eclipse.core.resources.IResourceChangeListener;
 import org.eclipse.core.resources.IWorkspace;
 import org.eclipse.core.resources.ResourcesPlugin;
 import org.eclipse.e4.ui.workbench.modeling.ESelectionService;
 import org.eclipse.jface.viewers.IStructuredSelection;
+import org.eclipse.jface.viewers.StructuredSelection;
 import org.eclipse.jface.viewers.TreeViewer;
 import org.eclipse.swt.SWT;
 import org.eclipse.swt.widgets.Composite;
@@ -62,6 +64,20 @@ public final class ProjectFilesPart {
             }
         };
         workspace.addResourceChangeListener(refresher, IResourceChangeEvent.POST_CHANGE);
+    }
+
+    /**
+     * Selects a resource in the tree and shows it, as if the user had clicked it; the
+     * selection then reaches the views that follow it.
+     *
+     * @param resource the file or folder
+     */
+    public void reveal(IResource resource) {
+        if (viewer == null || viewer.getControl().isDisposed()) {
+            return;
+        }
+        viewer.refresh();
+        viewer.setSelection(new StructuredSelection(resource), true);
     }
 
     /** Stops listening to the workspace. */

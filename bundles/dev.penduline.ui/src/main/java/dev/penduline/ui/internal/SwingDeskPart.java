@@ -9,8 +9,7 @@ import org.eclipse.swt.widgets.Composite;
 import org.eclipse.swt.widgets.Label;
 
 /**
- * The start page of the workbench: what Penduline does and the usual caution. Later issues turn
- * it into the desk where a mechanism's inertia, swing records and fits are shown.
+ * The start page of the workbench: what Penduline does, where to begin, and the usual caution.
  */
 public final class SwingDeskPart {
 
@@ -28,6 +27,11 @@ public final class SwingDeskPart {
         Label body = new Label(parent, SWT.WRAP);
         body.setText("Compute the pivot inertia and centroid of hatches, swing arms, gates and flaps from a parts list, "
                 + "import free-release swing records, and find which friction losses dominate.\n\n"
+                + "To begin: File › Open Mechanism Folder… opens a folder that holds a mechanism file (.penduline) "
+                + "and its records where it is, next to the CAD; File › New › Mechanism Project starts a new one "
+                + "from a parts list. Select the mechanism file in Project Files: the Mechanism view shows its "
+                + "inertia part by part, the Swing Chart its test sessions. The command line "
+                + "(./penduline fit FILE) identifies the friction and stores the result in the file.\n\n"
                 + "Caution: results are estimates to be confirmed by test. For doors, hatches, gates and lifting gear, "
                 + "follow local codes and licensed engineering practice.");
         GridDataFactory.fillDefaults().grab(true, false).hint(480, SWT.DEFAULT).applyTo(body);

@@ -1,0 +1,53 @@
+package dev.penduline.ui.tests;
+
+import java.io.IOException;
+import java.nio.file.Files;
+import java.nio.file.Path;
+import java.nio.file.Paths;
+
+import org.eclipse.swt.SWT;
+import org.eclipse.swt.graphics.GC;
+import org.eclipse.swt.graphics.Image;
+import org.eclipse.swt.graphics.ImageData;
+import org.eclipse.swt.graphics.ImageLoader;
+import org.eclipse.swt.graphics.Rectangle;
+import org.eclipse.swt.widgets.Display;
+import org.eclipse.swt.widgets.Shell;
+
+/** Saves what a shell shows as a PNG under {@code penduline.screenshotDir} (default {@code target/screenshots}). */
+final class Screenshots {
+
+    private final Path dir;
+
+    Screenshots() {
+        dir = Paths.get(System.getProperty("penduline.screenshotDir", "target/screenshots"));
+    }
+
+    /**
+     * Copies the shell's area of the screen into a PNG file.
+     *
+     * @param shell the shell (on top, painted)
+     * @param name  the file name
+     * @return the file written
+     * @throws IOException when the folder cannot be created
+     */
+    Path take(Shell shell, String name) throws IOException {
+        Files.createDirectories(dir);
+        Path file = dir.resolve(name);
+        Display display = shell.getDisplay();
+        Rectangle bounds = shell.getBounds();
+        Image image = new Image(display, bounds.width, bounds.height);
+        GC gc = new GC(display);
+        try {
+            gc.copyArea(image, bounds.x, bounds.y);
+            ImageData data = image.getImageData();
+            ImageLoader loader = new ImageLoader();
+            loader.data = new ImageData[] {data};
+            loader.save(file.toString(), SWT.IMAGE_PNG);
+        } finally {
+            gc.dispose();
+            image.dispose();
+        }
+        return file;
+    }
+}
