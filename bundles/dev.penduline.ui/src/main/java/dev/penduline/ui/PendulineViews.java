@@ -13,6 +13,8 @@ public final class PendulineViews {
     public static final String MECHANISM = "dev.penduline.ui.mechanism";
     /** A test session's record plotted with its turning points, or a predicted swing. */
     public static final String SWING_CHART = "dev.penduline.ui.swingChart";
+    /** The friction fits stored in a mechanism file, and the action that fits its sessions. */
+    public static final String FRICTION = "dev.penduline.ui.friction";
     /** The wizard that creates a mechanism project (File › New). */
     public static final String NEW_MECHANISM_PROJECT = "dev.penduline.ui.newMechanismProject";
     /** The platform's Properties view. */

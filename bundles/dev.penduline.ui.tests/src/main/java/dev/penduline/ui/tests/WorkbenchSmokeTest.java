@@ -23,13 +23,15 @@ import dev.penduline.ui.PendulineViews;
 /**
  * Starts the real workbench with the product's advisor (under Xvfb in CI), checks the main
  * window and its title, opens the views a user relies on, runs the first steps of an engineer
- * ({@link MechanismViewsScenario}: a new mechanism project, its inertia, its swing chart), leaves
+ * ({@link MechanismViewsScenario}: a new mechanism project, its inertia, its swing chart; then
+ * {@link FrictionViewScenario}: a fit of two invented records from the Friction view), leaves
  * screenshots under {@code target/screenshots/}, and closes the workbench again.
  */
 class WorkbenchSmokeTest {
 
     private static final String[] VIEWS = {PendulineViews.PROJECT_FILES, PendulineViews.MECHANISM,
-        PendulineViews.SWING_CHART, PendulineViews.SWING_DESK, PendulineViews.PROPERTIES, PendulineViews.PROBLEMS,
+        PendulineViews.SWING_CHART, PendulineViews.FRICTION, PendulineViews.SWING_DESK, PendulineViews.PROPERTIES,
+        PendulineViews.PROBLEMS,
         PendulineViews.PROGRESS};
 
     private final List<String> seen = new ArrayList<>();
@@ -55,6 +57,7 @@ class WorkbenchSmokeTest {
         List<String> expected = new ArrayList<>(List.of("window"));
         expected.addAll(List.of(VIEWS));
         expected.add("scenario");
+        expected.add("friction");
         assertEquals(expected, seen);
     }
 
@@ -86,6 +89,8 @@ class WorkbenchSmokeTest {
             flush(shell.getDisplay());
             new MechanismViewsScenario(window, shots).run();
             seen.add("scenario");
+            new FrictionViewScenario(window, shots).run();
+            seen.add("friction");
         } catch (Throwable t) {
             failure = t;
         } finally {

@@ -8,7 +8,8 @@ import dev.penduline.ui.PendulineViews;
 
 /**
  * Project files on the left with Properties, Problems and Progress in a folder below them; the
- * Mechanism view and the Swing Desk at the top of the centre, the Swing Chart below them. The
+ * Mechanism view, the Friction view and the Swing Desk at the top of the centre, the Swing Chart
+ * below them. The
  * centre keeps the full height because the totals, the parts and the chart need it more than
  * the platform views do.
  */
@@ -27,11 +28,14 @@ public final class PendulinePerspective implements IPerspectiveFactory {
         // The editor area is hidden: the two centre folders share its space.
         IFolderLayout centre = layout.createFolder("dev.penduline.ui.centre", IPageLayout.TOP, 0.55f, editors);
         centre.addView(PendulineViews.MECHANISM);
+        // Beside the Mechanism view rather than the chart: a stored fit is read next to the record
+        // it came from, and the chart below stays in sight.
+        centre.addView(PendulineViews.FRICTION);
         centre.addView(PendulineViews.SWING_DESK);
         IFolderLayout charts = layout.createFolder("dev.penduline.ui.charts", IPageLayout.BOTTOM, 0.5f, editors);
         charts.addView(PendulineViews.SWING_CHART);
         for (String view : new String[] {PendulineViews.PROJECT_FILES, PendulineViews.MECHANISM,
-                PendulineViews.SWING_CHART, PendulineViews.SWING_DESK, PendulineViews.PROPERTIES,
+                PendulineViews.SWING_CHART, PendulineViews.FRICTION, PendulineViews.SWING_DESK, PendulineViews.PROPERTIES,
                 PendulineViews.PROBLEMS, PendulineViews.PROGRESS}) {
             layout.addShowViewShortcut(view);
         }

@@ -30,8 +30,9 @@ public final class SwingDeskPart {
                 + "To begin: File › Open Mechanism Folder… opens a folder that holds a mechanism file (.penduline) "
                 + "and its records where it is, next to the CAD; File › New › Mechanism Project starts a new one "
                 + "from a parts list. Select the mechanism file in Project Files: the Mechanism view shows its "
-                + "inertia part by part, the Swing Chart its test sessions. The command line "
-                + "(./penduline fit FILE) identifies the friction and stores the result in the file.\n\n"
+                + "inertia part by part, the Swing Chart its test sessions, the Friction view the fits stored in it; "
+                + "its Fit friction button (or ./penduline fit FILE) identifies the friction and stores the result "
+                + "in the file.\n\n"
                 + "Caution: results are estimates to be confirmed by test. For doors, hatches, gates and lifting gear, "
                 + "follow local codes and licensed engineering practice.");
         GridDataFactory.fillDefaults().grab(true, false).hint(480, SWT.DEFAULT).applyTo(body);

@@ -1,0 +1,314 @@
+package dev.penduline.ui.internal.friction;
+
+import java.nio.file.Path;
+
+import jakarta.annotation.PostConstruct;
+import jakarta.annotation.PreDestroy;
+import jakarta.inject.Inject;
+import jakarta.inject.Named;
+
+import org.eclipse.core.resources.IFile;
+import org.eclipse.core.resources.IResourceChangeEvent;
+import org.eclipse.core.resources.IResourceChangeListener;
+import org.eclipse.core.resources.ResourcesPlugin;
+import org.eclipse.core.runtime.IProgressMonitor;
+import org.eclipse.core.runtime.IStatus;
+import org.eclipse.core.runtime.Status;
+import org.eclipse.core.runtime.jobs.Job;
+import org.eclipse.e4.core.di.annotations.Optional;
+import org.eclipse.e4.ui.di.UISynchronize;
+import org.eclipse.e4.ui.services.IServiceConstants;
+import org.eclipse.jface.layout.GridDataFactory;
+import org.eclipse.jface.layout.GridLayoutFactory;
+import org.eclipse.jface.resource.JFaceResources;
+import org.eclipse.swt.SWT;
+import org.eclipse.swt.widgets.Button;
+import org.eclipse.swt.widgets.Composite;
+import org.eclipse.swt.widgets.Label;
+import org.eclipse.swt.widgets.Table;
+
+import dev.penduline.ui.internal.MechanismSelection;
+import dev.penduline.ui.internal.friction.FrictionHeader.Tone;
+
+/**
+ * The Friction view: follows the mechanism file selected in Project Files and shows the friction
+ * fits stored in it — the verdict first, then the estimates with both standard errors and units,
+ * fitted against calculated inertia, the comparison of term sets, the sessions and the
+ * warnings, the caution last. "Fit friction" runs the same services as {@code penduline fit}
+ * in a job and stores a converged result in the file; the view then shows it. Widgets are only
+ * touched on the UI thread; errors show as the services' messages, never as stack traces.
+ */
+public final class FrictionPart {
+
+    static final String CAUTION = "Caution: these results are estimates to be confirmed by test. For doors, hatches, "
+            + "gates and lifting gear, follow local codes and licensed engineering practice.";
+    private static final String HINT = "Select a mechanism file (.penduline) in Project Files.";
+    private static final String DURATION = "Fit friction fits all test sessions at once; several long records can "
+            + "take tens of seconds.";
+
+    private final UISynchronize sync;
+    private FrictionHeader header;
+    private StoredFitPanel panel;
+    private IFile pending;
+    private IFile shownFile;
+    private long shownStamp;
+    private long generation;
+    private Job loading;
+    private FrictionFitJob fitting;
+    private FrictionSheet sheet;
+    private StoredFit shownFit;
+    private String preferredId;
+    private boolean keepOutcome;
+    private IResourceChangeListener watcher;
+
+    /**
+     * Created by the workbench.
+     *
+     * @param sync runs the results on the UI thread
+     */
+    @Inject
+    public FrictionPart(UISynchronize sync) {
+        this.sync = sync;
+    }
+
+    /**
+     * Builds the view.
+     *
+     * @param parent the part's composite
+     */
+    @PostConstruct
+    public void create(Composite parent) {
+        GridLayoutFactory.swtDefaults().margins(8, 6).spacing(6, 4).applyTo(parent);
+        header = new FrictionHeader(parent, this::choose, this::fit);
+        header.say(HINT, Tone.HINT);
+        panel = new StoredFitPanel(parent);
+        Label caution = new Label(parent, SWT.WRAP);
+        caution.setText(CAUTION);
+        caution.setFont(JFaceResources.getFontRegistry().getItalic(JFaceResources.DEFAULT_FONT));
+        GridDataFactory.fillDefaults().grab(true, false).hint(300, SWT.DEFAULT).applyTo(caution);
+        watcher = this::reloadWhenChanged;
+        ResourcesPlugin.getWorkspace().addResourceChangeListener(watcher, IResourceChangeEvent.POST_CHANGE);
+        if (pending != null) {
+            show(pending);
+        }
+    }
+
+    /**
+     * Follows the workbench selection; anything but a mechanism file is ignored, so the view
+     * keeps its mechanism while the user works elsewhere.
+     *
+     * @param selection the active selection (may be null)
+     */
+    @Inject
+    public void follow(@Optional @Named(IServiceConstants.ACTIVE_SELECTION) Object selection) {
+        MechanismSelection.fileOf(selection).filter(MechanismSelection::isMechanismFile).ifPresent(file -> {
+            if (header == null) {
+                pending = file;
+            } else if (!header.isDisposed()) {
+                show(file);
+            }
+        });
+    }
+
+    /**
+     * Shows the stored fits of a mechanism file: reads it in a job unless it is shown unchanged.
+     *
+     * @param file the mechanism file
+     */
+    public void show(IFile file) {
+        if (file.equals(shownFile) && file.getModificationStamp() == shownStamp && loading == null) {
+            return;
+        }
+        if (!file.equals(shownFile)) {
+            preferredId = null;
+        }
+        // A new file, or one changed since the last outcome (a session added, a fit stored by
+        // the command line), makes the last outcome stale; the reload after our own fit keeps it.
+        if (fitting == null && !keepOutcome) {
+            header.say(DURATION, Tone.HINT);
+        }
+        keepOutcome = false;
+        shownFile = file;
+        shownStamp = file.getModificationStamp();
+        header.fitEnabled(fitting == null);
+        header.file(file.getName(), file.getFullPath().toString());
+        long ticket = ++generation;
+        if (loading != null) {
+            loading.cancel();
+        }
+        Path path = MechanismSelection.pathOf(file);
+        Job job = new Job("Reading the stored fits of " + file.getName()) {
+            @Override
+            protected IStatus run(IProgressMonitor monitor) {
+                FrictionSheet result = FrictionSheet.read(path);
+                if (monitor.isCanceled()) {
+                    return Status.CANCEL_STATUS;
+                }
+                sync.asyncExec(() -> apply(ticket, result));
+                return Status.OK_STATUS;
+            }
+        };
+        job.setSystem(true);
+        loading = job;
+        job.schedule();
+    }
+
+    private void apply(long ticket, FrictionSheet result) {
+        if (ticket != generation || header.isDisposed()) {
+            return;
+        }
+        loading = null;
+        sheet = result;
+        header.file(result.title(), shownFile.getFullPath().toString());
+        String keep = preferredId != null ? preferredId : shownFit == null ? null : shownFit.id();
+        StoredFit chosen = keep == null ? null : result.fit(keep).orElse(null);
+        if (chosen == null && !result.fits().isEmpty()) {
+            chosen = result.fits().get(0);
+        }
+        header.fits(result.fits(), chosen);
+        result.error().ifPresent(e -> header.say(e, Tone.ERROR));
+        showFit(chosen);
+    }
+
+    private void choose(int index) {
+        if (sheet != null && index >= 0 && index < sheet.fits().size()) {
+            showFit(sheet.fits().get(index));
+        }
+    }
+
+    private void showFit(StoredFit fit) {
+        shownFit = fit;
+        panel.show(sheet, fit);
+    }
+
+    /**
+     * Fits the friction of the shown mechanism file in a job, as the "Fit friction" button does.
+     *
+     * @return whether a fit was started (false while one runs or before a file is shown)
+     */
+    public boolean fit() {
+        if (fitting != null || shownFile == null || header.isDisposed()) {
+            return false;
+        }
+        FrictionFitJob job = new FrictionFitJob(shownFile, line -> sync.asyncExec(() -> progress(line)),
+                attempt -> sync.asyncExec(() -> finish(attempt)));
+        fitting = job;
+        header.fitEnabled(false);
+        header.say("Fitting ... (tens of seconds for several long records; the Progress view can cancel it)",
+                Tone.NEWS);
+        job.schedule();
+        return true;
+    }
+
+    private void progress(String line) {
+        if (fitting != null && !header.isDisposed()) {
+            header.say("Fitting ... " + line, Tone.NEWS);
+        }
+    }
+
+    private void finish(FrictionFitJob.Attempt attempt) {
+        if (header.isDisposed()) {
+            return;
+        }
+        fitting = null;
+        header.fitEnabled(shownFile != null);
+        header.say(attempt.message(), attempt.failed() ? Tone.ERROR : Tone.NEWS);
+        if (attempt.storedId().isPresent() && attempt.file().equals(shownFile)) {
+            preferredId = attempt.storedId().get();
+            // Read again even if the workspace's change event was handled already: the new fit
+            // must be the one shown.
+            shownStamp = IFile.NULL_STAMP;
+            keepOutcome = true;
+            show(attempt.file());
+        }
+    }
+
+    private void reloadWhenChanged(IResourceChangeEvent event) {
+        IFile file = shownFile;
+        if (file == null || event.getDelta() == null || event.getDelta().findMember(file.getFullPath()) == null) {
+            return;
+        }
+        sync.asyncExec(() -> {
+            if (!header.isDisposed() && file.equals(shownFile) && file.exists()) {
+                show(file);
+            }
+        });
+    }
+
+    /**
+     * Picks a stored fit by its place in the list, as the user would.
+     *
+     * @param index the place (0: the most recent)
+     */
+    public void pick(int index) {
+        header.choose(index);
+    }
+
+    /**
+     * What the view read from the shown file, for tests.
+     *
+     * @return the sheet last shown, or null before the first file is read
+     */
+    public FrictionSheet sheet() {
+        return sheet;
+    }
+
+    /**
+     * The stored fit on display, for tests.
+     *
+     * @return the fit, or null when none is shown
+     */
+    public StoredFit shown() {
+        return shownFit;
+    }
+
+    /**
+     * Whether a fit is running (the button is disabled meanwhile).
+     *
+     * @return true while the fit job runs
+     */
+    public boolean fitting() {
+        return fitting != null;
+    }
+
+    /**
+     * The line under the toolbar, for tests.
+     *
+     * @return its text
+     */
+    public String message() {
+        return header.message();
+    }
+
+    /**
+     * The estimates table as the user sees it, for tests.
+     *
+     * @return the table
+     */
+    public Table estimatesTable() {
+        return panel.estimates();
+    }
+
+    /**
+     * The "Fit friction" button, for tests.
+     *
+     * @return the button
+     */
+    public Button fitButton() {
+        return header.fitButton();
+    }
+
+    /** Stops the jobs and the workspace listener. */
+    @PreDestroy
+    public void dispose() {
+        if (loading != null) {
+            loading.cancel();
+        }
+        if (fitting != null) {
+            fitting.cancel();
+        }
+        if (watcher != null) {
+            ResourcesPlugin.getWorkspace().removeResourceChangeListener(watcher);
+        }
+    }
+}

@@ -1,0 +1,228 @@
+package dev.penduline.ui.internal.friction;
+
+import java.util.ArrayList;
+import java.util.HashMap;
+import java.util.HashSet;
+import java.util.List;
+import java.util.Locale;
+import java.util.Map;
+import java.util.Optional;
+import java.util.Set;
+import java.util.TreeMap;
+import java.util.stream.Collectors;
+
+import dev.penduline.model.EnergyShare;
+import dev.penduline.model.Estimate;
+import dev.penduline.model.FitResult;
+import dev.penduline.model.SessionFit;
+import dev.penduline.model.Setting;
+import dev.penduline.model.TermSetScore;
+import dev.penduline.model.TestSession;
+import dev.penduline.physics.identify.ParameterEstimate;
+import dev.penduline.physics.units.Unit;
+import dev.penduline.ui.internal.Figures;
+
+/**
+ * One friction fit as it is stored in a mechanism file, turned into the text the Friction view
+ * shows: nothing is fitted or estimated here, every number comes from the stored
+ * {@code FitResult}; only units are converted (radians to degrees) for display. Built off the
+ * UI thread; holds no widgets.
+ *
+ * @param id          the stored result's identifier
+ * @param computedAt  when it was computed (ISO-8601 instant, as stored)
+ * @param status      how the fit ended ("converged" for every stored fit so far)
+ * @param verdict     the dominant loss and its share of the dissipated energy
+ * @param shares      every term's share of the dissipated energy
+ * @param model       the terms fitted and how they were chosen
+ * @param estimates   the friction terms and the inertia, with both standard errors
+ * @param sessions    each record's release values and residual
+ * @param comparisons the candidate term sets, in the order they were compared
+ * @param warnings    the fit's warnings, in their stored order
+ */
+public record StoredFit(String id, String computedAt, String status, String verdict, String shares, String model,
+        List<EstimateRow> estimates, List<SessionRow> sessions, List<ComparisonRow> comparisons,
+        List<String> warnings) {
+
+    /**
+     * One line of the estimates table.
+     *
+     * @param quantity        what it is ("viscous", "J0 calculated", ...)
+     * @param symbol          the parameter's symbol (b, Tc, Ts, c, J0), empty for derived rows
+     * @param value           the value, six significant digits
+     * @param sigma           the larger of the two standard errors, the one to quote
+     * @param sigmaJacobian   the standard error from the Jacobian at the optimum
+     * @param sigmaResampling the standard error from the block bootstrap
+     * @param unit            the SI unit of value and errors
+     */
+    public record EstimateRow(String quantity, String symbol, String value, String sigma, String sigmaJacobian,
+            String sigmaResampling, String unit) {
+    }
+
+    /**
+     * One line of the sessions table.
+     *
+     * @param session     the session's name in the mechanism file
+     * @param releaseAngle fitted release angle (°)
+     * @param releaseTime fitted release time on the record's time base (s)
+     * @param offset      fitted sensor offset (°)
+     * @param rms         root-mean-square residual (°)
+     */
+    public record SessionRow(String session, String releaseAngle, String releaseTime, String offset, String rms) {
+    }
+
+    /**
+     * One line of the comparison table.
+     *
+     * @param selected whether this is the term set the stored result kept
+     * @param terms    the candidate's terms joined by "+"
+     * @param aic      Akaike's criterion (dimensionless)
+     * @param bic      Schwarz's criterion (dimensionless)
+     * @param rms      root-mean-square residual (°)
+     */
+    public record ComparisonRow(boolean selected, String terms, String aic, String bic, String rms) {
+    }
+
+    /** Freezes the lists. */
+    public StoredFit {
+        estimates = List.copyOf(estimates);
+        sessions = List.copyOf(sessions);
+        comparisons = List.copyOf(comparisons);
+        warnings = List.copyOf(warnings);
+    }
+
+    /**
+     * Reads a stored result.
+     *
+     * @param r        the stored result
+     * @param sessions the mechanism's test sessions, to name the fitted ones
+     * @return what the view shows of it
+     */
+    public static StoredFit of(FitResult r, List<TestSession> sessions) {
+        Map<String, String> settings = new HashMap<>();
+        TreeMap<Integer, String> warnings = new TreeMap<>();
+        for (Setting s : r.getSettings()) {
+            settings.put(s.getKey(), s.getValue());
+            if (s.getKey() != null && s.getKey().matches("warning-\\d{1,9}")) {
+                warnings.put(Integer.parseInt(s.getKey().substring("warning-".length())), s.getValue());
+            }
+        }
+        String model = "model: " + String.join("+", r.getTermIds())
+                + ("auto".equals(settings.get("terms")) ? " (chosen by BIC among the candidates)" : " (as asked)");
+        return new StoredFit(r.getId(), String.valueOf(r.getComputedAt()), settings.getOrDefault("status", "unknown"),
+                verdict(r), shares(r), model, estimates(r, "free".equals(settings.get("inertia"))),
+                sessionRows(r, sessions), comparisons(r), List.copyOf(warnings.values()));
+    }
+
+    /**
+     * The label of this result in the list of stored fits.
+     *
+     * @return the time and the terms
+     */
+    public String label() {
+        return computedAt.replace('T', ' ').replace("Z", " UTC") + "  " + model.substring("model: ".length())
+                .replaceFirst(" \\(.*", "");
+    }
+
+    /**
+     * The row of a parameter.
+     *
+     * @param symbol b, Tc, Ts, c or J0
+     * @return the row, if the fit has that parameter
+     */
+    public Optional<EstimateRow> estimate(String symbol) {
+        return estimates.stream().filter(e -> e.symbol().equals(symbol)).findFirst();
+    }
+
+    private static String verdict(FitResult r) {
+        String dominant = r.getDominantLoss();
+        if (dominant == null) {
+            return "Verdict: not stored with this fit";
+        }
+        double share = shareOf(r, "stiction".equals(dominant) ? "coulomb" : dominant);
+        return "Verdict: " + lossName(dominant) + " dominates, dissipating "
+                + Figures.fixed(100 * share, 0) + " % of the energy lost over the records";
+    }
+
+    private static String shares(FitResult r) {
+        if (r.getEnergyShares().isEmpty()) {
+            return "";
+        }
+        return "Energy dissipated: " + r.getEnergyShares().stream()
+                .map(e -> TermWords.word(e.getTermId()) + " " + Figures.fixed(100 * e.getShare(), 0) + " %")
+                .collect(Collectors.joining(", "));
+    }
+
+    private static double shareOf(FitResult r, String term) {
+        return r.getEnergyShares().stream().filter(e -> term.equals(e.getTermId())).mapToDouble(EnergyShare::getShare)
+                .findFirst().orElse(Double.NaN);
+    }
+
+    private static String lossName(String term) {
+        return switch (term) {
+            case "viscous" -> "viscous damping";
+            case "coulomb", "stiction" -> "dry (Coulomb) friction";
+            case "drag" -> "air drag";
+            default -> term;
+        };
+    }
+
+    private static List<EstimateRow> estimates(FitResult r, boolean inertiaFree) {
+        List<EstimateRow> rows = new ArrayList<>();
+        for (Estimate e : r.getEstimates()) {
+            boolean inertia = TermWords.INERTIA_SYMBOL.equals(e.getParameter());
+            if (inertia && !inertiaFree) {
+                continue;
+            }
+            double sj = e.isSetStandardError() ? e.getStandardError() : Double.NaN;
+            double sr = e.isSetResamplingError() ? e.getResamplingError() : Double.NaN;
+            // The quoted σ follows the physics layer's rule (the larger of the two), not one of ours.
+            double sigma = new ParameterEstimate(e.getParameter(), "", e.getValue(), sj, sr, true, false).sigma();
+            rows.add(new EstimateRow(inertia ? "inertia, fitted" : TermWords.quantity(e.getParameter()),
+                    e.getParameter(), Figures.significant(e.getValue()), orDash(sigma), orDash(sj), orDash(sr),
+                    TermWords.unit(e.getParameter())));
+        }
+        if (r.isSetCalculatedInertia()) {
+            String unit = Unit.KG_M2.symbol();
+            rows.add(new EstimateRow(inertiaFree ? "J0 calculated" : "J0 held at calculated", "",
+                    Figures.significant(r.getCalculatedInertia()), "", "", "", unit));
+            if (inertiaFree && r.isSetFittedInertia()) {
+                double difference = (r.getFittedInertia() - r.getCalculatedInertia()) / r.getCalculatedInertia();
+                rows.add(new EstimateRow("J0 difference", "", (difference >= 0 ? "+" : "")
+                        + Figures.fixed(100 * difference, 2), "", "", "", "%"));
+            }
+        }
+        return rows;
+    }
+
+    private static String orDash(double sigma) {
+        return Double.isFinite(sigma) ? Figures.uncertainty(sigma) : "–";
+    }
+
+    private static List<SessionRow> sessionRows(FitResult r, List<TestSession> sessions) {
+        Map<String, String> names = new HashMap<>();
+        for (TestSession s : sessions) {
+            names.put(s.getId(), s.getName());
+        }
+        List<SessionRow> rows = new ArrayList<>();
+        for (SessionFit s : r.getSessionFits()) {
+            rows.add(new SessionRow(names.getOrDefault(s.getSessionId(), String.valueOf(s.getSessionId())),
+                    Figures.significant(Unit.DEGREE.fromSi(s.getInitialAngle())),
+                    Figures.significant(s.getReleaseTime()),
+                    Figures.significant(Unit.DEGREE.fromSi(s.getAngleOffset())),
+                    Figures.significant(Unit.DEGREE.fromSi(s.getRmsResidual()))));
+        }
+        return rows;
+    }
+
+    private static List<ComparisonRow> comparisons(FitResult r) {
+        Set<String> kept = new HashSet<>(r.getTermIds());
+        List<ComparisonRow> rows = new ArrayList<>();
+        for (TermSetScore s : r.getComparisons()) {
+            rows.add(new ComparisonRow(kept.equals(new HashSet<>(s.getTermIds())),
+                    s.getTermIds().stream().map(t -> t.toLowerCase(Locale.ROOT)).collect(Collectors.joining("+")),
+                    Figures.significant(s.getAic()), Figures.significant(s.getBic()),
+                    Figures.significant(Unit.DEGREE.fromSi(s.getRmsResidual()))));
+        }
+        return rows;
+    }
+}
