@@ -18,6 +18,8 @@ import org.hipparchus.ode.nonstiff.DormandPrince853Integrator;
 import org.hipparchus.ode.sampling.ODEStateInterpolator;
 import org.hipparchus.ode.sampling.ODEStepHandler;
 
+import dev.penduline.physics.motion.ChebyshevStep;
+
 /**
  * A release from rest integrated together with its sensitivity (variational) equations.
  *

@@ -245,7 +245,7 @@ final class SwingIntegration implements OrdinaryDifferentialEquation, ODEEventDe
      */
     private final class SampleRecorder implements ODEStepHandler {
 
-        private final StepPolynomial polynomial = new StepPolynomial();
+        private final ChebyshevStep polynomial = new ChebyshevStep(2);
 
         @Override
         public void handleStep(ODEStateInterpolator interpolator) {
@@ -255,11 +255,17 @@ final class SwingIntegration implements OrdinaryDifferentialEquation, ODEEventDe
                 last++;
             }
             final double tPrevious = interpolator.getPreviousState().getTime();
-            if (last - nextSample > StepPolynomial.NODES && tCurrent > tPrevious) {
-                polynomial.fit(interpolator, tPrevious, tCurrent);
+            if (last - nextSample > ChebyshevStep.NODES && tCurrent > tPrevious) {
+                polynomial.begin(tPrevious, tCurrent);
+                for (int j = 0; j < ChebyshevStep.NODES; j++) {
+                    final double[] y = interpolator.getInterpolatedState(polynomial.nodeTime(j)).getPrimaryState();
+                    polynomial.set(0, j, y[0]);
+                    polynomial.set(1, j, y[1]);
+                }
+                polynomial.transform();
                 for (; nextSample < last; nextSample++) {
-                    angles[nextSample] = polynomial.angle(sampleTimes[nextSample]);
-                    velocities[nextSample] = polynomial.velocity(sampleTimes[nextSample]);
+                    angles[nextSample] = polynomial.value(0, sampleTimes[nextSample]);
+                    velocities[nextSample] = polynomial.value(1, sampleTimes[nextSample]);
                 }
             } else {
                 for (; nextSample < last; nextSample++) {

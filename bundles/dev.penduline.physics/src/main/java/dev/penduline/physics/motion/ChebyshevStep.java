@@ -1,4 +1,4 @@
-package dev.penduline.physics.identify;
+package dev.penduline.physics.motion;
 
 /**
  * Cheap dense output of several state components over one integration step.
@@ -8,12 +8,14 @@ package dev.penduline.physics.identify;
  * dense output of DOP853), so eight Chebyshev nodes reproduce it up to rounding. The
  * integrator's interpolator is asked eight times per step; each sample then costs one
  * Clenshaw recurrence per component instead of an interpolation of the whole augmented state
- * (which allocates). One instance per integration run; buffers are reused.
+ * (which allocates). One instance per integration run; buffers are reused. Shared by the
+ * simulator (angle and velocity) and the identification's sensitivity integration (the state
+ * and its sensitivities).
  */
-final class ChebyshevStep {
+public final class ChebyshevStep {
 
     /** Number of nodes: degree 7 + 1. */
-    static final int NODES = 8;
+    public static final int NODES = 8;
 
     private final double[] nodes = new double[NODES];
     /** cos(π k (j + ½) / N): the discrete cosine transform at the Chebyshev nodes. */
@@ -25,7 +27,12 @@ final class ChebyshevStep {
     private double middle;
     private double halfWidth;
 
-    ChebyshevStep(int components) {
+    /**
+     * Creates the buffers.
+     *
+     * @param components how many state components are sampled
+     */
+    public ChebyshevStep(int components) {
         this.values = new double[components][NODES];
         this.coefficients = new double[components][NODES];
         for (int j = 0; j < NODES; j++) {
@@ -36,24 +43,40 @@ final class ChebyshevStep {
         }
     }
 
-    /** The time of node j on the step [start, end] (s); call {@link #begin} first. */
-    double nodeTime(int j) {
+    /**
+     * The time of a node on the current step; call {@link #begin} first.
+     *
+     * @param j the node, 0 to {@link #NODES} − 1
+     * @return its time (s)
+     */
+    public double nodeTime(int j) {
         return middle + halfWidth * nodes[j];
     }
 
-    /** Starts a new step [start, end] (s). */
-    void begin(double start, double end) {
+    /**
+     * Starts a new step.
+     *
+     * @param start the step's first time (s)
+     * @param end   its last time (s)
+     */
+    public void begin(double start, double end) {
         middle = 0.5 * (start + end);
         halfWidth = 0.5 * (end - start);
     }
 
-    /** Stores the value of component c at node j. */
-    void set(int c, int j, double value) {
+    /**
+     * Stores a component's value at a node.
+     *
+     * @param c     the component
+     * @param j     the node
+     * @param value the value there (unit of the component)
+     */
+    public void set(int c, int j, double value) {
         values[c][j] = value;
     }
 
     /** Turns the node values into Chebyshev coefficients, for every component. */
-    void transform() {
+    public void transform() {
         for (int c = 0; c < values.length; c++) {
             final double[] v = values[c];
             final double[] a = coefficients[c];
@@ -68,8 +91,14 @@ final class ChebyshevStep {
         }
     }
 
-    /** Component c at time t inside the step. */
-    double value(int c, double t) {
+    /**
+     * A component inside the step, by Clenshaw's recurrence.
+     *
+     * @param c the component
+     * @param t the time, within the step (s)
+     * @return the component's value there
+     */
+    public double value(int c, double t) {
         final double[] a = coefficients[c];
         final double x = (t - middle) / halfWidth;
         double b1 = 0;
