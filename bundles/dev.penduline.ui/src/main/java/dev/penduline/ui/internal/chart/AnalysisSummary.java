@@ -30,8 +30,8 @@ final class AnalysisSummary {
                 + Figures.uncertainty(a.release().uncertainty()) + " s), " + deg(a.initialAngle())
                 + "° from the hanging equilibrium; " + a.cycles().size() + " cycle(s), "
                 + a.turningPoints().size() + " turning point(s)");
-        out.add("Offset: the sensor reads " + deg(a.offset().value()) + "° (± " + Figures.uncertainty(Unit.DEGREE.fromSi(a.offset().uncertainty()))
-                + "°) at the hanging equilibrium ("
+        out.add("Offset: the sensor reads " + deg(a.offset().value()) + "° (± "
+                + Figures.uncertainty(Unit.DEGREE.fromSi(a.offset().uncertainty())) + "°) at the hanging equilibrium ("
                 + a.offset().method().name().toLowerCase(Locale.ROOT).replace('_', ' ') + ")");
         PeriodCheck p = a.periodCheck();
         if (withMechanism && p != null && Double.isFinite(p.predictedSmallAnglePeriod())) {
