@@ -118,9 +118,7 @@ public final class FitCommand implements Command {
         if (a.flag("json")) {
             new FitJson(outcome, stored).write(new JsonWriter(out));
         } else {
-            for (String w : outcome.warnings()) {
-                err.println("warning: " + w);
-            }
+            // the report lists the records' warnings with the fit's own, in one place
             new FitReportText(outcome, stored, file).print(out);
         }
         return outcome.fit().status() == FitStatus.CONVERGED ? ExitCode.OK : ExitCode.COMPUTATION_FAILED;
