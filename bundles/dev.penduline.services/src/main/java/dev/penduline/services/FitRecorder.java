@@ -21,6 +21,7 @@ import dev.penduline.physics.identify.FitSettings;
 import dev.penduline.physics.identify.FitWarning;
 import dev.penduline.physics.identify.FrictionFit;
 import dev.penduline.physics.identify.FrictionTerm;
+import dev.penduline.physics.identify.FrictionVerdict;
 import dev.penduline.physics.identify.ParameterEstimate;
 import dev.penduline.physics.identify.SessionEstimate;
 
@@ -110,7 +111,9 @@ public final class FitRecorder {
             }
         });
         if (fit.energy() != null) {
-            r.setDominantLoss(fit.energy().dominant().name().toLowerCase(Locale.ROOT));
+            // the verdict, not merely the largest share: "mixed" when no loss leads clearly
+            r.setDominantLoss(fit.verdict().kind() == FrictionVerdict.Kind.DOMINANT
+                    ? fit.verdict().dominant().name().toLowerCase(Locale.ROOT) : "mixed");
             share(r, "viscous", fit.energy().viscous());
             share(r, "coulomb", fit.energy().coulomb());
             share(r, "drag", fit.energy().drag());
@@ -124,6 +127,13 @@ public final class FitRecorder {
         setting(r, "integration-tolerance", String.valueOf(s.integrationTolerance()));
         setting(r, "resamples", String.valueOf(fit.resamplesUsed()));
         setting(r, "seed", String.valueOf(s.seed()));
+        setting(r, "verdict-margin", String.valueOf(s.verdictMargin()));
+        if (fit.goodness() != null) {
+            setting(r, "noise-ratio", String.valueOf(fit.goodness().ratio()));
+        }
+        if (fit.stopBand() != null) {
+            setting(r, "stop-band", fit.stopBand().lower() + ".." + fit.stopBand().upper());
+        }
         List<FitWarning> warnings = fit.warnings();
         for (int i = 0; i < warnings.size(); i++) {
             setting(r, "warning-" + (i + 1), warnings.get(i).message());

@@ -30,7 +30,7 @@ import dev.penduline.services.MechanismSource;
 public final class FitCommand implements Command {
 
     private static final Set<String> OPTIONS = MechanismOptions.with(RecordOptions.with("session", "terms",
-            "resamples", "max-iterations", "seed"));
+            "resamples", "max-iterations", "seed", "verdict-margin"));
 
     @Override
     public String name() {
@@ -67,6 +67,9 @@ public final class FitCommand implements Command {
                   --resamples N            bootstrap refits for the resampling uncertainty (default 40)
                   --max-iterations N       iteration limit of each fit (default 100)
                   --seed N                 seed of the bootstrap (default fixed: results repeat)
+                  --verdict-margin PP      lead in percentage points of the energy lost that one loss
+                                           needs over the next to be called dominant (default 15);
+                                           otherwise the verdict is "mixed"
                   --no-save                do not store the result in the mechanism file
                   --json                   print a JSON object instead of the report
                 """ + RecordOptions.USAGE;
@@ -90,6 +93,13 @@ public final class FitCommand implements Command {
         if (a.has("max-iterations")) {
             int it = (int) a.number("max-iterations", settings.maxIterations());
             settings = settings.withLimits(it, Math.max(2 * it, settings.maxEvaluations()));
+        }
+        if (a.has("verdict-margin")) {
+            double pp = a.number("verdict-margin", 100 * settings.verdictMargin());
+            if (!(pp >= 0 && pp < 100)) {
+                throw new UsageException("--verdict-margin: give percentage points from 0 to below 100; got " + pp);
+            }
+            settings = settings.withVerdictRules(pp / 100, settings.misfitRatio());
         }
         Outcome outcome;
         String stored = null;

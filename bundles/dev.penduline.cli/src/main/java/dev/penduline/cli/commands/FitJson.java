@@ -7,12 +7,16 @@ import java.util.Optional;
 import dev.penduline.cli.json.JsonWriter;
 import dev.penduline.physics.identify.CandidateScore;
 import dev.penduline.physics.identify.CorrelationTable;
+import dev.penduline.physics.identify.EnergyShares;
 import dev.penduline.physics.identify.FitWarning;
 import dev.penduline.physics.identify.FrictionFit;
 import dev.penduline.physics.identify.FrictionTerm;
+import dev.penduline.physics.identify.FrictionVerdict;
+import dev.penduline.physics.identify.Goodness;
 import dev.penduline.physics.identify.InertiaCheck;
 import dev.penduline.physics.identify.ParameterEstimate;
 import dev.penduline.physics.identify.SessionEstimate;
+import dev.penduline.physics.identify.StictionBand;
 import dev.penduline.physics.units.Unit;
 import dev.penduline.services.FrictionIdentification.Outcome;
 import dev.penduline.services.FrictionIdentification.SessionInput;
@@ -56,10 +60,10 @@ final class FitJson {
             j.field("unit", t.unit()).endObject();
         }
         j.endObject();
-        j.field("dominant", word(fit.energy().dominant()));
-        j.name("energy_share").beginObject().field("viscous", fit.energy().viscous())
-                .field("coulomb", fit.energy().coulomb()).field("drag", fit.energy().drag()).endObject();
+        verdict(j, fit);
         j.field("energy_dissipated_J", fit.energy().dissipated());
+        goodness(j, fit.goodness());
+        stopBand(j, fit);
         sessions(j, fit);
         outcome.comparison().ifPresent(c -> {
             j.name("comparison").beginArray();
@@ -98,10 +102,57 @@ final class FitJson {
                     .field("release_time_s", s.releaseTime().value())
                     .field("release_time_sigma_s", s.releaseTime().sigma())
                     .field("offset_deg", Unit.DEGREE.fromSi(s.offset().value()))
-                    .field("rms_residual_deg", Unit.DEGREE.fromSi(s.rms())).field("samples", s.samples())
-                    .endObject();
+                    .field("rms_residual_deg", Unit.DEGREE.fromSi(s.rms())).field("samples", s.samples());
+            if (fit.goodness() != null) {
+                Goodness.SessionGoodness g = fit.goodness().sessions().get(k);
+                j.field("noise_floor_deg", Unit.DEGREE.fromSi(g.noise().sigma()))
+                        .field("noise_floor_method", g.noise().method())
+                        .field("residual_to_noise", g.ratio()).field("residual_lag1", g.lag1());
+            }
+            j.endObject();
         }
         j.endArray();
+    }
+
+    /** The verdict: {@code dominant} (absent when withheld), the losses in order, the shares with σ. */
+    private static void verdict(JsonWriter j, FrictionFit fit) {
+        FrictionVerdict v = fit.verdict();
+        EnergyShares e = fit.energy();
+        if (v.kind() == FrictionVerdict.Kind.DOMINANT) {
+            j.field("dominant", word(v.dominant()));
+        } else if (v.kind() == FrictionVerdict.Kind.MIXED) {
+            j.field("dominant", "mixed");
+        }
+        j.name("leading").beginArray();
+        v.leading().forEach(t -> j.value(word(t)));
+        j.endArray();
+        j.field("verdict_margin", v.margin()).field("lead", v.lead()).field("lead_sigma", v.leadSigma());
+        j.name("energy_share").beginObject().field("viscous", e.viscous()).field("coulomb", e.coulomb())
+                .field("drag", e.drag()).endObject();
+        j.name("energy_share_sigma").beginObject().field("viscous", e.viscousSigma())
+                .field("coulomb", e.coulombSigma()).field("drag", e.dragSigma()).endObject();
+    }
+
+    private static void goodness(JsonWriter j, Goodness g) {
+        if (g == null) {
+            return;
+        }
+        j.name("goodness").beginObject().field("rms_residual_deg", Unit.DEGREE.fromSi(g.rms()))
+                .field("noise_floor_deg", Unit.DEGREE.fromSi(g.floor())).field("ratio", g.ratio())
+                .field("limit", g.limit()).field("residual_lag1", g.lag1()).field("test", g.test())
+                .field("passed", g.passed()).endObject();
+    }
+
+    private static void stopBand(JsonWriter j, FrictionFit fit) {
+        if (fit.stopNote() == null) {
+            return;
+        }
+        j.name("stop_band").beginObject();
+        StictionBand b = fit.stopBand();
+        if (b != null) {
+            j.field("lower_N_m", b.lower()).field("upper_N_m", b.upper()).field("resolved", b.resolved());
+        }
+        j.field(b == null ? "reason" : "note", fit.stopNote()).endObject();
     }
 
     private static void correlation(JsonWriter j, CorrelationTable c) {

@@ -12,9 +12,12 @@ import dev.penduline.physics.identify.FitStatus;
 import dev.penduline.physics.identify.FitWarning;
 import dev.penduline.physics.identify.FrictionFit;
 import dev.penduline.physics.identify.FrictionTerm;
+import dev.penduline.physics.identify.FrictionVerdict;
+import dev.penduline.physics.identify.Goodness;
 import dev.penduline.physics.identify.InertiaCheck;
 import dev.penduline.physics.identify.ParameterEstimate;
 import dev.penduline.physics.identify.SessionEstimate;
+import dev.penduline.physics.identify.StictionBand;
 import dev.penduline.physics.units.Unit;
 import dev.penduline.services.FrictionIdentification.Outcome;
 
@@ -37,16 +40,23 @@ final class FitReportText {
         out.println("Friction of " + outcome.mechanism().label() + ", from " + outcome.sessions().size()
                 + " release record(s)");
         out.println();
-        if (fit.status() != FitStatus.CONVERGED) {
+        if (fit.status() == FitStatus.MISFIT) {
+            out.println("THE MODEL DOES NOT DESCRIBE THE RECORDS: the residuals are clearly above the noise floor.");
+            fit.goodness().evidence().forEach(line -> out.println("  " + line));
+            out.println("  Likely causes: a loss law not in the model, a wrong inertia or centroid, a sensor fault, or a");
+            out.println("  record that is not a free swing. No verdict is drawn, nothing is stored, and the values below");
+            out.println("  describe the best fit of a model that does not hold: do not use them.");
+            out.println();
+        } else if (fit.status() != FitStatus.CONVERGED) {
             out.println("THE FIT DID NOT CONVERGE (" + fit.status().name().toLowerCase(Locale.ROOT).replace('_', ' ')
                     + "): " + fit.message());
             out.println("The values below are the best point reached and must not be used.");
             out.println();
         }
-        out.printf(Locale.ROOT, "Verdict: %s dominates, dissipating %.0f %% of the energy lost over the records%n",
-                lossName(e.dominant()), 100 * share(e, e.dominant()));
-        out.printf(Locale.ROOT, "  (viscous %.0f %%, Coulomb %.0f %%, drag %.0f %% of %s J)%n", 100 * e.viscous(),
-                100 * e.coulomb(), 100 * e.drag(), Numbers.significant(e.dissipated()));
+        out.println("Verdict: " + verdict(fit));
+        out.printf(Locale.ROOT, "  (energy lost over the records: viscous %s, Coulomb %s, drag %s of %s J)%n",
+                percent(e.viscous(), e.viscousSigma()), percent(e.coulomb(), e.coulombSigma()),
+                percent(e.drag(), e.dragSigma()), Numbers.significant(e.dissipated()));
         out.println("  model: " + termList(fit.terms()) + (outcome.automatic() ? " (chosen by BIC among the candidates)"
                 : " (as asked)"));
         out.println();
@@ -74,6 +84,8 @@ final class FitReportText {
         }
         out.println();
         printSessions(out, fit);
+        printGoodness(out, fit);
+        printStopBand(out, fit);
         outcome.comparison().ifPresent(c -> {
             out.println();
             out.printf(Locale.ROOT, "Term sets compared (effective samples %s of %d, residual lag-1 correlation %.2f):%n",
@@ -103,6 +115,57 @@ final class FitReportText {
         out.println(Caution.TEXT);
     }
 
+    /** The verdict sentence: one dominant loss, mixed losses in order, or why there is none. */
+    static String verdict(FrictionFit fit) {
+        FrictionVerdict v = fit.verdict();
+        EnergyShares e = fit.energy();
+        return switch (v.kind()) {
+            case DOMINANT -> String.format(Locale.ROOT, "%s dominates, dissipating %s of the energy lost over the"
+                    + " records (a lead of %.0f points over the next loss; %.0f needed)", lossName(v.dominant()),
+                    percent(e.share(v.dominant()), e.sigma(v.dominant())), 100 * v.lead(), 100 * v.margin());
+            case MIXED -> "mixed: no loss leads the next by " + String.format(Locale.ROOT, "%.0f", 100 * v.margin())
+                    + " percentage points clear of the uncertainty; in order: " + v.leading().stream()
+                    .map(t -> lossName(t) + " " + percent(e.share(t), e.sigma(t))).collect(Collectors.joining(", "));
+            case WITHHELD -> fit.status() == FitStatus.MISFIT ? "withheld: the model does not describe the records"
+                    : "withheld: the fit did not converge";
+        };
+    }
+
+    private static String percent(double share, double sigma) {
+        if (Double.isFinite(sigma) && sigma > 0) {
+            // the σ to two significant digits and the share to the same decimal place (GUM §7.2.6)
+            int decimals = (int) Math.max(0, Math.min(4, 1 - Math.floor(Math.log10(100 * sigma))));
+            return String.format(Locale.ROOT, "%." + decimals + "f ± %." + decimals + "f %%", 100 * share,
+                    100 * sigma);
+        }
+        return String.format(Locale.ROOT, "%.0f %%", 100 * share);
+    }
+
+    private static void printGoodness(PrintWriter out, FrictionFit fit) {
+        Goodness g = fit.goodness();
+        if (g == null) {
+            return;
+        }
+        out.printf(Locale.ROOT, "Against the noise: residual rms %s° against a noise floor of %s° (largest ratio of a"
+                + " record %.2f, limit %.2g; residual lag-1 correlation %.2f): %s%n",
+                Numbers.significant(Unit.DEGREE.fromSi(g.rms())), Numbers.significant(Unit.DEGREE.fromSi(g.floor())),
+                g.ratio(), g.limit(), g.lag1(), g.passed() ? "the model describes the records"
+                        : "the model does NOT describe the records");
+    }
+
+    private static void printStopBand(PrintWriter out, FrictionFit fit) {
+        if (fit.stopNote() == null) {
+            return;
+        }
+        StictionBand b = fit.stopBand();
+        if (b == null) {
+            out.println("Static friction from the stops: none can be given: " + fit.stopNote());
+        } else {
+            out.printf(Locale.ROOT, "Static friction from the stops: Ts between %s and %s N·m (%s)%n",
+                    Numbers.significant(b.lower()), Numbers.significant(b.upper()), fit.stopNote());
+        }
+    }
+
     private void printSessions(PrintWriter out, FrictionFit fit) {
         out.println("Records:");
         for (SessionEstimate s : fit.sessions()) {
@@ -112,14 +175,6 @@ final class FitReportText {
                     Numbers.significant(Unit.DEGREE.fromSi(s.offset().value())),
                     Numbers.significant(Unit.DEGREE.fromSi(s.rms())));
         }
-    }
-
-    private static double share(EnergyShares e, FrictionTerm t) {
-        return switch (t) {
-            case VISCOUS -> e.viscous();
-            case COULOMB, STICTION -> e.coulomb();
-            case DRAG -> e.drag();
-        };
     }
 
     private static String lossName(FrictionTerm t) {

@@ -22,15 +22,27 @@ final class FitReport {
 
     static FrictionFit build(FrictionProblem problem, Set<FrictionTerm> terms, PointFit point, double[] resampled,
             int resamplesUsed, FitSettings settings) {
+        return build(problem, terms, point, null, resampled, resamplesUsed, settings, false);
+    }
+
+    /**
+     * The report of a fit.
+     *
+     * @param replicates the full vectors of the resampling refits (for the σ of the energy shares); may be
+     *                   null when only their spread is known
+     * @param resampled  standard deviation of each full entry over the refits, or null
+     * @param judge      whether this is a reported fit, to be held against the noise floor, given a
+     *                   verdict and a stop band (candidates of a comparison are not)
+     */
+    static FrictionFit build(FrictionProblem problem, Set<FrictionTerm> terms, PointFit point,
+            List<double[]> replicates, double[] resampled, int resamplesUsed, FitSettings settings, boolean judge) {
         final StageOutcome o = point.outcome();
         final ParameterLayout layout = point.layout();
         final double[] full = o.full();
         final int n = problem.samples();
         final Uncertainty u = Uncertainty.of(o.jacobian(), layout, full, o.rss(), n);
         final List<FitWarning> warnings = new ArrayList<>();
-        final double tc = full[ParameterLayout.index(ParameterKind.COULOMB)];
-        final double ts = point.stiction() > tc ? point.stiction() : 0;
-        final FrictionTorques friction = new FrictionTorques(full[0], tc, ts, full[2]);
+        final FrictionTorques friction = friction(full, point.stiction());
         final List<ParameterEstimate> physical = new ArrayList<>();
         for (FrictionTerm term : terms) {
             if (term == FrictionTerm.STICTION) {
@@ -65,15 +77,66 @@ final class FitReport {
             row += size;
         }
         final double lag1 = o.residuals() == null ? Double.NaN : RecordSignals.lag1(o.residuals(), 0, n);
-        final EnergyShares energy = o.status() == FitStatus.CANCELLED ? new EnergyShares(0, 0, 0, 0, null)
-                : EnergyAccount.of(StagedFit.level(mechanism), friction, full, problem.sessions(),
+        final MechanismProperties level = StagedFit.level(mechanism);
+        EnergyShares energy = o.status() == FitStatus.CANCELLED ? new EnergyShares(0, 0, 0, 0, null)
+                : EnergyAccount.of(level, friction, full, problem.sessions(), settings.integrationTolerance());
+        final List<double[]> shares = new ArrayList<>();
+        if (judge && replicates != null && o.status() == FitStatus.CONVERGED) {
+            for (double[] r : replicates) {
+                final EnergyShares e = EnergyAccount.of(level, friction(r, point.stiction()), r, problem.sessions(),
                         settings.integrationTolerance());
+                shares.add(new double[] {e.viscous(), e.coulomb(), e.drag()});
+            }
+            if (shares.size() >= 2) {
+                final double[] sigma = BlockBootstrap.spread(shares, 3);
+                energy = energy.withSigmas(sigma[0], sigma[1], sigma[2]);
+            }
+        }
+        FitStatus status = o.status();
+        String message = o.message();
+        Goodness goodness = null;
+        StictionBand stopBand = null;
+        String stopNote = null;
+        if (judge) {
+            goodness = Goodness.of(problem.sessions(), o.residuals(), settings.misfitRatio());
+            if (status == FitStatus.CONVERGED && !goodness.passed()) {
+                status = FitStatus.MISFIT;
+                message = "the model does not describe the records: the residuals are clearly above the noise floor";
+            }
+            final StopBands.Found found = StopBands.of(problem, point, settings);
+            stopBand = found.band();
+            stopNote = found.note();
+        }
+        final FrictionVerdict verdict = FrictionVerdict.judge(energy, shares, settings.verdictMargin(),
+                status == FitStatus.CONVERGED);
         warn(warnings, problem, point, u, physical, check, settings, resamplesUsed);
-        return new FrictionFit(o.status(), o.message(), List.copyOf(terms), friction, physical, check, point.band(),
+        if (goodness != null) {
+            for (String line : goodness.evidence()) {
+                warnings.add(new FitWarning(FitWarning.Kind.MISFIT, line + ": the model does not describe this"
+                        + " record; likely causes: a loss law not in the model, a wrong inertia or centroid, a"
+                        + " sensor fault, or a record that is not a free swing"));
+            }
+            if (goodness.aboveNoise()) {
+                warnings.add(new FitWarning(FitWarning.Kind.ABOVE_NOISE, String.format(Locale.ROOT, "the residuals"
+                        + " are up to %.3g times the noise floor: the model misses part of the motion (below the"
+                        + " misfit limit %.3g, so the estimates stand, with care)", goodness.ratio(),
+                        goodness.limit())));
+            }
+        }
+        return new FrictionFit(status, message, List.copyOf(terms), friction, physical, check, point.band(),
                 sessions, new CorrelationTable(u.names(), u.correlation()), energy, Math.sqrt(o.rss() / n), o.rss(),
                 n, layout.freeCount(), lag1, resamplesUsed, warnings, settings, point.iterations(),
-                point.evaluations());
+                point.evaluations(), verdict, goodness, stopBand, stopNote);
     }
+
+    /** The friction torques of a full vector; a holding torque not above Tc means "as Tc". */
+    static FrictionTorques friction(double[] full, double stiction) {
+        final double tc = full[ParameterLayout.index(ParameterKind.COULOMB)];
+        final double ts = stiction > tc ? stiction : 0;
+        return new FrictionTorques(full[ParameterLayout.index(ParameterKind.VISCOUS)], tc, ts,
+                full[ParameterLayout.index(ParameterKind.DRAG)]);
+    }
+
 
     private static int indexOf(FrictionTerm term) {
         return switch (term) {
@@ -120,13 +183,9 @@ final class FitReport {
                 final ParameterKind ka = point.layout().kind(u.indices()[a]);
                 final ParameterKind kb = point.layout().kind(u.indices()[b]);
                 if (Math.abs(r[a][b]) > settings.correlationLimit() && (ka.physical() || kb.physical())) {
-                    String text = u.names().get(a) + " and " + u.names().get(b) + " correlate at "
-                            + format(r[a][b]) + ": the records hardly tell them apart";
-                    if (problem.sessions().size() == 1 && friction(ka) && friction(kb)) {
-                        text += "; releases at different amplitudes are what separate viscous from dry friction:"
-                                + " record more sessions and fit them jointly";
-                    }
-                    warnings.add(new FitWarning(FitWarning.Kind.STRONG_CORRELATION, text));
+                    warnings.add(new FitWarning(FitWarning.Kind.STRONG_CORRELATION,
+                            correlationAdvice(u.names().get(a), ka, u.names().get(b), kb, r[a][b],
+                                    problem.sessions().size())));
                 }
             }
         }
@@ -150,8 +209,26 @@ final class FitReport {
         }
     }
 
-    private static boolean friction(ParameterKind kind) {
-        return kind == ParameterKind.VISCOUS || kind == ParameterKind.COULOMB || kind == ParameterKind.DRAG;
+    /**
+     * What a strong correlation means for the user: the standard errors already carry it, and
+     * which further test would separate the two parameters.
+     */
+    static String correlationAdvice(String a, ParameterKind ka, String b, ParameterKind kb, double r, int sessions) {
+        final String head = a + " and " + b + " correlate at " + format(r) + ": a change of one is partly"
+                + " made up by the other, and their ± above already include this";
+        final boolean inertia = ka == ParameterKind.INERTIA || kb == ParameterKind.INERTIA;
+        if (inertia) {
+            return head + "; to separate them, hold the inertia with --fix-inertia when the parts list is trusted,"
+                    + " or add a release at a small amplitude (its period fixes the inertia)";
+        }
+        final boolean drag = ka == ParameterKind.DRAG || kb == ParameterKind.DRAG;
+        final String test = drag
+                ? "a release at a larger amplitude (drag grows with the square of the speed, the other term does"
+                        + " not)"
+                : "releases at clearly different amplitudes (dry friction takes a fixed angle per swing, viscous"
+                        + " damping a fixed fraction)";
+        return head + (sessions == 1 ? "; one record cannot separate them well: " : "; what separates them: ") + test
+                + ", fitted jointly";
     }
 
     private static String format(double v) {

@@ -21,14 +21,18 @@ package dev.penduline.physics.identify;
  * @param correlationLimit     |correlation| above which a warning is raised, in (0, 1)
  * @param inertiaLimitPercent  fitted-versus-calculated inertia difference above which a
  *                             warning is raised (%), &gt; 0
+ * @param verdictMargin        lead in energy share (a fraction, 0.15 = 15 percentage points) one loss
+ *                             needs over the next to be called dominant, in [0, 1)
+ * @param misfitRatio          residual rms over noise floor above which the model is said not to
+ *                             describe a record, &gt; 1
  */
 public record FitSettings(int maxIterations, int maxEvaluations, double costTolerance,
         double parameterTolerance, double integrationTolerance, double lockCycles,
         int lockSamplesPerPeriod, int resamples, long seed, boolean parallel, double correlationLimit,
-        double inertiaLimitPercent) {
+        double inertiaLimitPercent, double verdictMargin, double misfitRatio) {
 
     private static final FitSettings DEFAULTS = new FitSettings(100, 200, 1e-9, 1e-8, 1e-9, 3, 40, 40,
-            0x5EED_1DL, true, 0.95, 5);
+            0x5EED_1DL, true, 0.95, 5, 0.15, 2);
 
     /**
      * Checks every setting.
@@ -49,6 +53,8 @@ public record FitSettings(int maxIterations, int maxEvaluations, double costTole
         require(correlationLimit > 0 && correlationLimit < 1, "correlationLimit", correlationLimit, "in (0, 1)");
         require(inertiaLimitPercent > 0 && Double.isFinite(inertiaLimitPercent), "inertiaLimitPercent",
                 inertiaLimitPercent, "> 0");
+        require(verdictMargin >= 0 && verdictMargin < 1, "verdictMargin", verdictMargin, "in [0, 1)");
+        require(misfitRatio > 1 && Double.isFinite(misfitRatio), "misfitRatio", misfitRatio, "> 1");
     }
 
     private static void require(boolean ok, String name, double value, String range) {
@@ -61,7 +67,8 @@ public record FitSettings(int maxIterations, int maxEvaluations, double costTole
      * The defaults: 100 iterations and 200 evaluations per stage, cost tolerance 1e-9,
      * parameter tolerance 1e-8, integration tolerance 1e-9, a locking stage of 3 periods at 40
      * samples per period, 40 seeded resamples in parallel, warnings above |ρ| = 0.95 and 5 %
-     * inertia difference.
+     * inertia difference, a dominant loss only with a lead of 15 percentage points, and a
+     * misfit above twice the noise floor.
      *
      * @return the default settings
      */
@@ -78,7 +85,8 @@ public record FitSettings(int maxIterations, int maxEvaluations, double costTole
      */
     public FitSettings withLimits(int iterations, int evaluations) {
         return new FitSettings(iterations, evaluations, costTolerance, parameterTolerance, integrationTolerance,
-                lockCycles, lockSamplesPerPeriod, resamples, seed, parallel, correlationLimit, inertiaLimitPercent);
+                lockCycles, lockSamplesPerPeriod, resamples, seed, parallel, correlationLimit, inertiaLimitPercent, verdictMargin,
+                misfitRatio);
     }
 
     /**
@@ -90,7 +98,8 @@ public record FitSettings(int maxIterations, int maxEvaluations, double costTole
      */
     public FitSettings withTolerances(double cost, double parameter) {
         return new FitSettings(maxIterations, maxEvaluations, cost, parameter, integrationTolerance,
-                lockCycles, lockSamplesPerPeriod, resamples, seed, parallel, correlationLimit, inertiaLimitPercent);
+                lockCycles, lockSamplesPerPeriod, resamples, seed, parallel, correlationLimit, inertiaLimitPercent, verdictMargin,
+                misfitRatio);
     }
 
     /**
@@ -101,7 +110,8 @@ public record FitSettings(int maxIterations, int maxEvaluations, double costTole
      */
     public FitSettings withIntegrationTolerance(double relative) {
         return new FitSettings(maxIterations, maxEvaluations, costTolerance, parameterTolerance, relative,
-                lockCycles, lockSamplesPerPeriod, resamples, seed, parallel, correlationLimit, inertiaLimitPercent);
+                lockCycles, lockSamplesPerPeriod, resamples, seed, parallel, correlationLimit, inertiaLimitPercent, verdictMargin,
+                misfitRatio);
     }
 
     /**
@@ -114,7 +124,7 @@ public record FitSettings(int maxIterations, int maxEvaluations, double costTole
     public FitSettings withLockStage(double cycles, int samplesPerPeriod) {
         return new FitSettings(maxIterations, maxEvaluations, costTolerance, parameterTolerance,
                 integrationTolerance, cycles, samplesPerPeriod, resamples, seed, parallel, correlationLimit,
-                inertiaLimitPercent);
+                inertiaLimitPercent, verdictMargin, misfitRatio);
     }
 
     /**
@@ -128,7 +138,8 @@ public record FitSettings(int maxIterations, int maxEvaluations, double costTole
     public FitSettings withResampling(int count, long randomSeed, boolean multithread) {
         return new FitSettings(maxIterations, maxEvaluations, costTolerance, parameterTolerance,
                 integrationTolerance, lockCycles, lockSamplesPerPeriod, count, randomSeed, multithread,
-                correlationLimit, inertiaLimitPercent);
+                correlationLimit, inertiaLimitPercent, verdictMargin,
+                misfitRatio);
     }
 
     /**
@@ -141,6 +152,19 @@ public record FitSettings(int maxIterations, int maxEvaluations, double costTole
     public FitSettings withWarningLimits(double correlation, double inertiaPercent) {
         return new FitSettings(maxIterations, maxEvaluations, costTolerance, parameterTolerance,
                 integrationTolerance, lockCycles, lockSamplesPerPeriod, resamples, seed, parallel, correlation,
-                inertiaPercent);
+                inertiaPercent, verdictMargin, misfitRatio);
+    }
+
+    /**
+     * Returns a copy with other verdict rules.
+     *
+     * @param margin lead in energy share needed to name one loss dominant (fraction), in [0, 1)
+     * @param misfit residual rms over noise floor above which the model does not describe a record, &gt; 1
+     * @return the copy
+     */
+    public FitSettings withVerdictRules(double margin, double misfit) {
+        return new FitSettings(maxIterations, maxEvaluations, costTolerance, parameterTolerance,
+                integrationTolerance, lockCycles, lockSamplesPerPeriod, resamples, seed, parallel, correlationLimit,
+                inertiaLimitPercent, margin, misfit);
     }
 }

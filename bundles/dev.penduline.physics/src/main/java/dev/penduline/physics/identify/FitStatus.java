@@ -14,5 +14,10 @@ public enum FitStatus {
     /** The caller's cancellation check answered true. */
     CANCELLED,
     /** The model could not be evaluated or the optimiser gave up (see the message). */
-    FAILED
+    FAILED,
+    /**
+     * The optimiser converged, but the residuals are clearly above the records' noise floor:
+     * the model does not describe the records, and no verdict is drawn (see {@link Goodness}).
+     */
+    MISFIT
 }

@@ -25,6 +25,10 @@ public record FitWarning(Kind kind, String message) {
         /** The sessions' stiction bands do not overlap. */
         STICTION_UNRESOLVED,
         /** The two uncertainty estimates disagree strongly (residuals far from white noise). */
-        UNCERTAINTY_DISAGREEMENT
+        UNCERTAINTY_DISAGREEMENT,
+        /** The residuals of a record are clearly above its noise floor: the model does not describe it. */
+        MISFIT,
+        /** The residuals are above the noise floor, but below the misfit limit. */
+        ABOVE_NOISE
     }
 }

@@ -31,12 +31,18 @@ import dev.penduline.physics.motion.FrictionTorques;
  * @param settings       the settings used
  * @param iterations     optimiser iterations over all stages
  * @param evaluations    model evaluations over all stages (resampling excluded)
+ * @param verdict        which loss dominates, or mixed, or withheld
+ * @param goodness       the residuals against the records' noise floors
+ * @param stopBand       the static-friction band the records' stops allow, whatever the term set;
+ *                       null when none can be given ({@code stopNote} says why)
+ * @param stopNote       how the stop band was found, or why there is none
  */
 public record FrictionFit(FitStatus status, String message, List<FrictionTerm> terms, FrictionTorques friction,
         List<ParameterEstimate> parameters, InertiaCheck inertia, StictionBand stiction,
         List<SessionEstimate> sessions, CorrelationTable correlation, EnergyShares energy, double rms,
         double residualSumOfSquares, int samples, int freeParameters, double residualLag1, int resamplesUsed,
-        List<FitWarning> warnings, FitSettings settings, int iterations, int evaluations) {
+        List<FitWarning> warnings, FitSettings settings, int iterations, int evaluations, FrictionVerdict verdict,
+        Goodness goodness, StictionBand stopBand, String stopNote) {
 
     /**
      * Freezes the lists.

@@ -68,19 +68,41 @@ public final class FrictionIdentifier {
      * @return the fit; check {@link FrictionFit#status()}
      */
     public FrictionFit fit(FrictionProblem problem, FitControl control) {
-        return fit(problem, problem.terms(), settings, control);
-    }
-
-    static FrictionFit fit(FrictionProblem problem, Set<FrictionTerm> terms, FitSettings settings,
-            FitControl control) {
         Objects.requireNonNull(problem, "problem");
         Objects.requireNonNull(control, "control");
-        final PointFit point = StagedFit.run(problem, terms, settings, control);
+        final Set<FrictionTerm> terms = problem.terms();
+        final FitSettings quick = settings.withResampling(0, settings.seed(), settings.parallel());
+        final NestedFits nested = new NestedFits(problem, quick, control,
+                TermSelection.candidates(terms.contains(FrictionTerm.STICTION)));
+        return finish(problem, terms, nested.point(terms), settings, control);
+    }
+
+    /**
+     * The reported fit of a term set from its guarded point fit: refitted from a small spread
+     * of starts around the optimum (friction halved and doubled), resampled for the second
+     * uncertainty and the σ of the energy shares, held against the noise floor, judged.
+     */
+    static FrictionFit finish(FrictionProblem problem, Set<FrictionTerm> terms, PointFit guarded,
+            FitSettings settings, FitControl control) {
+        PointFit point = guarded;
+        final StageOutcome o0 = point.outcome();
+        if (o0.status() == FitStatus.CONVERGED) {
+            final FitSettings quick = settings.withResampling(0, settings.seed(), settings.parallel());
+            final PointFit spread = StagedFit.run(problem, terms, quick, control,
+                    List.of(o0.full(), scaledFriction(o0.full(), 0.5), scaledFriction(o0.full(), 2)));
+            if (spread.outcome().status() == FitStatus.CONVERGED
+                    && spread.outcome().rss() < o0.rss() * (1 - NestedFits.GUARD_TOLERANCE)) {
+                point = new PointFit(spread.layout(), spread.outcome(), spread.data(), spread.stiction(),
+                        spread.band(), point.iterations() + spread.iterations(),
+                        point.evaluations() + spread.evaluations());
+            }
+        }
+        List<double[]> replicates = null;
         double[] resampled = null;
         int used = 0;
         final StageOutcome o = point.outcome();
         if (settings.resamples() > 0 && o.status() == FitStatus.CONVERGED) {
-            final List<double[]> replicates = BlockBootstrap.run(point.layout(), o.full(), point.stiction(),
+            replicates = BlockBootstrap.run(point.layout(), o.full(), point.stiction(),
                     point.data(), o.residuals(), problem.mechanism().gravityStiffness(), settings, control);
             used = replicates.size();
             resampled = BlockBootstrap.spread(replicates, point.layout().size());
@@ -89,10 +111,21 @@ public final class FrictionIdentifier {
                         "cancelled by the caller during resampling", o.iterations(), o.evaluations(), o.rss(),
                         o.residuals(), o.jacobian());
                 return FitReport.build(problem, terms, new PointFit(point.layout(), cancelled, point.data(),
-                        point.stiction(), point.band(), point.iterations(), point.evaluations()), null, 0, settings);
+                        point.stiction(), point.band(), point.iterations(), point.evaluations()), null, null, 0,
+                        settings, true);
             }
         }
-        return FitReport.build(problem, terms, point, resampled, used, settings);
+        return FitReport.build(problem, terms, point, replicates, resampled, used, settings, true);
+    }
+
+    /** The full vector with the friction terms scaled (a start for the spread). */
+    private static double[] scaledFriction(double[] full, double factor) {
+        final double[] x = full.clone();
+        for (ParameterKind k : new ParameterKind[] {ParameterKind.VISCOUS, ParameterKind.COULOMB,
+            ParameterKind.DRAG}) {
+            x[ParameterLayout.index(k)] *= factor;
+        }
+        return x;
     }
 
     /**

@@ -39,70 +39,216 @@ final class StagedFit {
 
     static PointFit run(FrictionProblem problem, Set<FrictionTerm> terms, FitSettings settings,
             FitControl control) {
-        final MechanismProperties mechanism = problem.mechanism();
-        final MechanismProperties level = level(mechanism);
-        final double k = mechanism.gravityStiffness();
-        final double j = mechanism.pivotInertia();
-        final double wn = Math.sqrt(k / j);
-        final List<ReleaseSession> sessions = problem.sessions();
-        final int count = sessions.size();
-        double amplitude = 0;
-        for (ReleaseSession s : sessions) {
-            amplitude = Math.max(amplitude, Math.abs(s.guess().releaseAngle()));
+        return run(problem, terms, settings, control, List.of());
+    }
+
+    /**
+     * The staged fit from the analysis' starting values and from every seed: each start runs
+     * the cheap motion stage (or the full stage when there is nothing to thin), and the start
+     * that reaches the lowest cost goes on to the full stage.
+     *
+     * @param seeds full vectors (SI) to start from besides the analysis estimates, usually the
+     *              optima of nested term sets; terms of this set that a seed lacks (zero) are
+     *              started at half the analysis' value, terms outside this set are zeroed
+     */
+    static PointFit run(FrictionProblem problem, Set<FrictionTerm> terms, FitSettings settings,
+            FitControl control, List<double[]> seeds) {
+        final Plan plan = new Plan(problem, terms);
+        final Tally tally = new Tally();
+        double[] current = plan.initial;
+        if (settings.lockCycles() > 0) {
+            final List<StageSamples> window = plan.lockWindow(settings);
+            final StageOutcome lock = tally.add(LevenbergStage.run("lock", plan.layout.withFree(plan.lockFree),
+                    current, window, plan.stiffness, plan.start.stiction(), settings, control));
+            if (lock.status() == FitStatus.CANCELLED) {
+                return tally.point(plan.layout, lock, window, plan.start.stiction(), null);
+            }
+            current = lock.full();
         }
-        final FrictionTorques start = StartingValues.forTerms(problem.start(), terms, k, j, amplitude);
-        final int size = ParameterLayout.PHYSICAL + ParameterLayout.PER_SESSION * count;
-        final double[] full = new double[size];
-        final double[] scales = new double[size];
-        final double[] shifts = new double[size];
-        final double[] lower = new double[size];
-        Arrays.fill(lower, Double.NEGATIVE_INFINITY);
-        final double reference = 2 * REFERENCE_DAMPING * Math.sqrt(k * j);
-        full[0] = start.viscous();
-        full[1] = start.coulomb();
-        full[2] = start.drag();
-        full[3] = j;
-        scales[0] = reference;
-        scales[1] = reference * Math.PI * wn * amplitude / 4;
-        scales[2] = reference * 3 * Math.PI / (8 * wn * amplitude);
-        scales[3] = j;
-        lower[0] = 0;
-        lower[1] = 0;
-        lower[2] = 0;
-        lower[3] = mechanism.mass() * mechanism.centroidDistance() * mechanism.centroidDistance();
-        final List<String> names = new ArrayList<>();
-        for (int s = 0; s < count; s++) {
-            final SessionGuess g = sessions.get(s).guess();
-            names.add(sessions.get(s).name());
-            full[ParameterLayout.index(s, 0)] = g.releaseAngle();
-            full[ParameterLayout.index(s, 1)] = g.releaseTime();
-            full[ParameterLayout.index(s, 2)] = g.offset();
-            scales[ParameterLayout.index(s, 0)] = Math.abs(g.releaseAngle());
-            scales[ParameterLayout.index(s, 1)] = 1 / wn;
-            scales[ParameterLayout.index(s, 2)] = Math.abs(g.releaseAngle());
-            shifts[ParameterLayout.index(s, 1)] = g.releaseTime();
-            shifts[ParameterLayout.index(s, 2)] = g.offset();
+        final List<double[]> starts = new ArrayList<>();
+        starts.add(current);
+        for (double[] seed : seeds) {
+            starts.add(seeded(seed, terms, plan.start, plan.initial));
         }
-        final boolean[] lockFree = new boolean[size];
-        final boolean[] fullFree = new boolean[size];
-        for (int s = 0; s < count; s++) {
-            for (int q = 0; q < ParameterLayout.PER_SESSION; q++) {
-                lockFree[ParameterLayout.index(s, q)] = true;
-                fullFree[ParameterLayout.index(s, q)] = true;
+        // with nothing to thin, the "motion" stage would be the full stage itself
+        final String firstStage = plan.thinned ? "motion" : "full";
+        final List<StageSamples> firstData = plan.thinned ? plan.motion : plan.all;
+        StageOutcome best = null;
+        for (double[] from : starts) {
+            final StageOutcome moving = tally.add(LevenbergStage.run(firstStage, plan.layout, from, firstData,
+                    plan.stiffness, plan.start.stiction(), settings, control));
+            if (moving.status() == FitStatus.CANCELLED) {
+                return tally.point(plan.layout, moving, firstData, plan.start.stiction(), null);
+            }
+            if (best == null || better(moving, best)) {
+                best = moving;
             }
         }
-        lockFree[3] = problem.inertiaFree();
-        fullFree[3] = problem.inertiaFree();
-        fullFree[0] = terms.contains(FrictionTerm.VISCOUS);
-        fullFree[1] = terms.contains(FrictionTerm.COULOMB);
-        fullFree[2] = terms.contains(FrictionTerm.DRAG);
-        final ParameterLayout fullLayout = new ParameterLayout(names, scales, shifts, lower, fullFree);
-        double stiction = start.stiction();
-        int iterations = 0;
-        int evaluations = 0;
-        double[] current = full;
-        final double period = 2 * Math.PI / wn;
-        if (settings.lockCycles() > 0) {
+        if (!plan.thinned) {
+            return stiction(plan, best, settings, control, tally);
+        }
+        return refine(plan, best.full(), settings, control, tally);
+    }
+
+    /**
+     * The full stage (and the stiction rounds) from a given point, as the guard of nested term
+     * sets uses it: from the optimum of a subset, with the terms it lacks at exactly zero, the
+     * richer set starts at the subset's cost, and the optimiser, which accepts only steps that
+     * lower the cost, cannot end above it.
+     *
+     * @param from full vector (SI); terms outside this set are zeroed, the others kept as they are
+     */
+    static PointFit refine(FrictionProblem problem, Set<FrictionTerm> terms, FitSettings settings,
+            FitControl control, double[] from) {
+        final Plan plan = new Plan(problem, terms);
+        final double[] x = from.clone();
+        final FrictionTerm[] order = {FrictionTerm.VISCOUS, FrictionTerm.COULOMB, FrictionTerm.DRAG};
+        final ParameterKind[] kinds = {ParameterKind.VISCOUS, ParameterKind.COULOMB, ParameterKind.DRAG};
+        for (int i = 0; i < order.length; i++) {
+            if (!terms.contains(order[i])) {
+                x[ParameterLayout.index(kinds[i])] = 0;
+            }
+        }
+        return refine(plan, x, settings, control, new Tally());
+    }
+
+    private static PointFit refine(Plan plan, double[] from, FitSettings settings, FitControl control, Tally tally) {
+        final StageOutcome outcome = tally.add(LevenbergStage.run("full", plan.layout, from, plan.all,
+                plan.stiffness, plan.start.stiction(), settings, control));
+        return stiction(plan, outcome, settings, control, tally);
+    }
+
+    /** Brackets Ts from the stops and refits with Ts at the band's middle, until the band settles. */
+    private static PointFit stiction(Plan plan, StageOutcome first, FitSettings settings, FitControl control,
+            Tally tally) {
+        StageOutcome outcome = first;
+        double stiction = plan.start.stiction();
+        StictionBand band = null;
+        if (plan.terms.contains(FrictionTerm.STICTION)) {
+            for (int round = 0; round < STICTION_ROUNDS && outcome.status() != FitStatus.CANCELLED; round++) {
+                band = StictionBracket.of(plan.level, outcome.full(), plan.all, settings.integrationTolerance());
+                final double next = band.middle();
+                if (round > 0 && Math.abs(next - stiction) <= 1e-3 * next) {
+                    break;
+                }
+                stiction = next;
+                outcome = tally.add(LevenbergStage.run("stiction", plan.layout, outcome.full(), plan.all,
+                        plan.stiffness, stiction, settings, control));
+            }
+        }
+        return tally.point(plan.layout, outcome, plan.all, stiction, band);
+    }
+
+    /** Iterations and evaluations over the stages of one point fit. */
+    private static final class Tally {
+        private int iterations;
+        private int evaluations;
+
+        StageOutcome add(StageOutcome o) {
+            iterations += o.iterations();
+            evaluations += o.evaluations();
+            return o;
+        }
+
+        PointFit point(ParameterLayout layout, StageOutcome o, List<StageSamples> data, double stiction,
+                StictionBand band) {
+            return new PointFit(layout, o, data, stiction, band, iterations, evaluations);
+        }
+    }
+
+    /** The parameters, scales, bounds and data sets of one term set's fit. */
+    private static final class Plan {
+        final Set<FrictionTerm> terms;
+        final MechanismProperties level;
+        final double stiffness;
+        final double period;
+        final FrictionTorques start;
+        final double[] initial;
+        final ParameterLayout layout;
+        final boolean[] lockFree;
+        final List<ReleaseSession> sessions;
+        final List<StageSamples> all = new ArrayList<>();
+        final List<StageSamples> motion = new ArrayList<>();
+        final boolean thinned;
+
+        Plan(FrictionProblem problem, Set<FrictionTerm> terms) {
+            this.terms = terms;
+            final MechanismProperties mechanism = problem.mechanism();
+            level = level(mechanism);
+            stiffness = mechanism.gravityStiffness();
+            final double j = mechanism.pivotInertia();
+            final double wn = Math.sqrt(stiffness / j);
+            period = 2 * Math.PI / wn;
+            sessions = problem.sessions();
+            final int count = sessions.size();
+            double amplitude = 0;
+            for (ReleaseSession s : sessions) {
+                amplitude = Math.max(amplitude, Math.abs(s.guess().releaseAngle()));
+            }
+            start = StartingValues.forTerms(problem.start(), terms, stiffness, j, amplitude);
+            final int size = ParameterLayout.PHYSICAL + ParameterLayout.PER_SESSION * count;
+            initial = new double[size];
+            final double[] scales = new double[size];
+            final double[] shifts = new double[size];
+            final double[] lower = new double[size];
+            Arrays.fill(lower, Double.NEGATIVE_INFINITY);
+            final double reference = 2 * REFERENCE_DAMPING * Math.sqrt(stiffness * j);
+            final int v = ParameterLayout.index(ParameterKind.VISCOUS);
+            final int c = ParameterLayout.index(ParameterKind.COULOMB);
+            final int d = ParameterLayout.index(ParameterKind.DRAG);
+            final int inertia = ParameterLayout.index(ParameterKind.INERTIA);
+            initial[v] = start.viscous();
+            initial[c] = start.coulomb();
+            initial[d] = start.drag();
+            initial[inertia] = j;
+            scales[v] = reference;
+            scales[c] = reference * Math.PI * wn * amplitude / 4;
+            scales[d] = reference * 3 * Math.PI / (8 * wn * amplitude);
+            scales[inertia] = j;
+            lower[v] = 0;
+            lower[c] = 0;
+            lower[d] = 0;
+            lower[inertia] = mechanism.mass() * mechanism.centroidDistance() * mechanism.centroidDistance();
+            final List<String> names = new ArrayList<>();
+            lockFree = new boolean[size];
+            final boolean[] fullFree = new boolean[size];
+            for (int s = 0; s < count; s++) {
+                final SessionGuess g = sessions.get(s).guess();
+                names.add(sessions.get(s).name());
+                initial[ParameterLayout.index(s, 0)] = g.releaseAngle();
+                initial[ParameterLayout.index(s, 1)] = g.releaseTime();
+                initial[ParameterLayout.index(s, 2)] = g.offset();
+                scales[ParameterLayout.index(s, 0)] = Math.abs(g.releaseAngle());
+                scales[ParameterLayout.index(s, 1)] = 1 / wn;
+                scales[ParameterLayout.index(s, 2)] = Math.abs(g.releaseAngle());
+                shifts[ParameterLayout.index(s, 1)] = g.releaseTime();
+                shifts[ParameterLayout.index(s, 2)] = g.offset();
+                for (int q = 0; q < ParameterLayout.PER_SESSION; q++) {
+                    lockFree[ParameterLayout.index(s, q)] = true;
+                    fullFree[ParameterLayout.index(s, q)] = true;
+                }
+            }
+            lockFree[inertia] = problem.inertiaFree();
+            fullFree[inertia] = problem.inertiaFree();
+            fullFree[v] = terms.contains(FrictionTerm.VISCOUS);
+            fullFree[c] = terms.contains(FrictionTerm.COULOMB);
+            fullFree[d] = terms.contains(FrictionTerm.DRAG);
+            layout = new ParameterLayout(names, scales, shifts, lower, fullFree);
+            boolean thin = false;
+            for (ReleaseSession s : sessions) {
+                all.add(StageSamples.all(s));
+                final double[] t = s.timesView();
+                final double spacing = (t[t.length - 1] - t[0]) / (t.length - 1);
+                final int stride = (int) Math.max(1, Math.floor(period / spacing / MOTION_SAMPLES_PER_PERIOD));
+                final double end = RecordSignals.motionEnd(s) + 0.5 * period;
+                motion.add(StageSamples.window(s, end, stride));
+                thin |= stride > 1 || end < t[t.length - 1];
+            }
+            thinned = thin;
+        }
+
+        /** The first periods after each release, decimated, for the locking stage. */
+        List<StageSamples> lockWindow(FitSettings settings) {
             final List<StageSamples> window = new ArrayList<>();
             for (ReleaseSession s : sessions) {
                 final double[] t = s.timesView();
@@ -110,56 +256,45 @@ final class StagedFit {
                 final int stride = (int) Math.max(1, Math.floor(period / spacing / settings.lockSamplesPerPeriod()));
                 window.add(StageSamples.window(s, s.guess().releaseTime() + settings.lockCycles() * period, stride));
             }
-            final StageOutcome lock = LevenbergStage.run("lock", fullLayout.withFree(lockFree), current, window, k,
-                    stiction, settings, control);
-            iterations += lock.iterations();
-            evaluations += lock.evaluations();
-            if (lock.status() == FitStatus.CANCELLED) {
-                return new PointFit(fullLayout, lock, window, stiction, null, iterations, evaluations);
-            }
-            current = lock.full();
+            return window;
         }
-        final List<StageSamples> all = new ArrayList<>();
-        final List<StageSamples> motion = new ArrayList<>();
-        boolean thinned = false;
-        for (ReleaseSession s : sessions) {
-            all.add(StageSamples.all(s));
-            final double[] t = s.timesView();
-            final double spacing = (t[t.length - 1] - t[0]) / (t.length - 1);
-            final int stride = (int) Math.max(1, Math.floor(period / spacing / MOTION_SAMPLES_PER_PERIOD));
-            final double end = RecordSignals.motionEnd(s) + 0.5 * period;
-            motion.add(StageSamples.window(s, end, stride));
-            thinned |= stride > 1 || end < t[t.length - 1];
+    }
+
+    /**
+     * Whether an outcome is better than another: a converged stage beats one that is not, then
+     * the lower cost wins.
+     */
+    static boolean better(StageOutcome a, StageOutcome b) {
+        final boolean ca = a.status() == FitStatus.CONVERGED;
+        final boolean cb = b.status() == FitStatus.CONVERGED;
+        if (ca != cb) {
+            return ca;
         }
-        if (thinned) {
-            final StageOutcome moving = LevenbergStage.run("motion", fullLayout, current, motion, k, stiction,
-                    settings, control);
-            iterations += moving.iterations();
-            evaluations += moving.evaluations();
-            if (moving.status() == FitStatus.CANCELLED) {
-                return new PointFit(fullLayout, moving, motion, stiction, null, iterations, evaluations);
-            }
-            current = moving.full();
-        }
-        StageOutcome outcome = LevenbergStage.run("full", fullLayout, current, all, k, stiction, settings, control);
-        iterations += outcome.iterations();
-        evaluations += outcome.evaluations();
-        StictionBand band = null;
-        if (terms.contains(FrictionTerm.STICTION)) {
-            for (int round = 0; round < STICTION_ROUNDS && outcome.status() != FitStatus.CANCELLED; round++) {
-                band = StictionBracket.of(level, outcome.full(), all, settings.integrationTolerance());
-                final double next = band.middle();
-                if (round > 0 && Math.abs(next - stiction) <= 1e-3 * next) {
-                    break;
-                }
-                stiction = next;
-                outcome = LevenbergStage.run("stiction", fullLayout, outcome.full(), all, k, stiction, settings,
-                        control);
-                iterations += outcome.iterations();
-                evaluations += outcome.evaluations();
+        return a.rss() < b.rss();
+    }
+
+    /**
+     * A seed made to fit a term set: its terms kept, the set's terms it lacks started from the
+     * analysis' value for this set (never from exactly zero, where the projection onto the bound
+     * could keep them), terms outside the set zeroed.
+     */
+    private static double[] seeded(double[] seed, Set<FrictionTerm> terms, FrictionTorques start, double[] fallback) {
+        final double[] x = seed.clone();
+        final FrictionTerm[] order = {FrictionTerm.VISCOUS, FrictionTerm.COULOMB, FrictionTerm.DRAG};
+        final ParameterKind[] kinds = {ParameterKind.VISCOUS, ParameterKind.COULOMB, ParameterKind.DRAG};
+        final double[] given = {start.viscous(), start.coulomb(), start.drag()};
+        for (int i = 0; i < order.length; i++) {
+            final int at = ParameterLayout.index(kinds[i]);
+            if (!terms.contains(order[i])) {
+                x[at] = 0;
+            } else if (!(x[at] > 0)) {
+                x[at] = 0.5 * given[i];
             }
         }
-        return new PointFit(fullLayout, outcome, all, stiction, band, iterations, evaluations);
+        if (x.length != fallback.length) {
+            return fallback.clone();
+        }
+        return x;
     }
 
     /** The mechanism with its equilibrium at the sensor's zero: each session's offset carries it. */

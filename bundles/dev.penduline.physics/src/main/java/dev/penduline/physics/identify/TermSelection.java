@@ -56,9 +56,10 @@ final class TermSelection {
         }
         final List<Set<FrictionTerm>> sets = candidates(stops);
         final FitSettings quick = settings.withResampling(0, settings.seed(), settings.parallel());
+        final NestedFits nested = new NestedFits(problem, quick, control, sets);
         final List<FrictionFit> fits = new ArrayList<>();
         for (Set<FrictionTerm> terms : sets) {
-            fits.add(FrictionIdentifier.fit(problem, terms, quick, control));
+            fits.add(FitReport.build(problem, terms, nested.point(terms), null, 0, quick));
         }
         int richest = 0;
         for (int i = 0; i < sets.size(); i++) {
@@ -89,9 +90,8 @@ final class TermSelection {
             }
         }
         final int selected = best >= 0 ? best : fallback;
-        final FrictionFit chosen = settings.resamples() > 0 && fits.get(selected).converged()
-                ? FrictionIdentifier.fit(problem, sets.get(selected), settings, control)
-                : fits.get(selected);
+        final FrictionFit chosen = FrictionIdentifier.finish(problem, sets.get(selected),
+                nested.point(sets.get(selected)), settings, control);
         return new ModelComparison(scores, selected, effective, rho, n, chosen);
     }
 

@@ -6,25 +6,25 @@ import java.util.Arrays;
  * Median and median absolute deviation (MAD), the robust location and spread used to read the
  * noise of a still segment: a single encoder step or spike moves neither.
  */
-final class RobustStatistics {
+public final class RobustStatistics {
 
     /**
      * Scale that turns a MAD into a standard deviation for Gaussian noise, 1/Φ⁻¹(3/4)
      * (Rousseeuw &amp; Croux, J. Am. Stat. Assoc. 88 (1993) 1273).
      */
-    static final double MAD_TO_SIGMA = 1.482602218505602;
+    public static final double MAD_TO_SIGMA = 1.482602218505602;
 
     private RobustStatistics() {
     }
 
     /** Median of {@code values[from, to)}; the array is not modified. */
-    static double median(double[] values, int from, int to) {
+    public static double median(double[] values, int from, int to) {
         final double[] copy = Arrays.copyOfRange(values, from, to);
         return medianInPlace(copy);
     }
 
     /** Median of all values, sorting the given array. */
-    static double medianInPlace(double[] values) {
+    public static double medianInPlace(double[] values) {
         if (values.length == 0) {
             return Double.NaN;
         }
@@ -34,7 +34,7 @@ final class RobustStatistics {
     }
 
     /** Median absolute deviation of {@code values[from, to)} about a given centre. */
-    static double mad(double[] values, int from, int to, double centre) {
+    public static double mad(double[] values, int from, int to, double centre) {
         final double[] d = new double[to - from];
         for (int i = from; i < to; i++) {
             d[i - from] = Math.abs(values[i] - centre);
@@ -46,7 +46,7 @@ final class RobustStatistics {
      * The step of quantised data: the smallest non-zero jump between neighbours, accepted only
      * when nearly every jump is a whole multiple of it (an encoder), else 0 (analogue noise).
      */
-    static double quantum(double[] values) {
+    public static double quantum(double[] values) {
         double smallest = Double.POSITIVE_INFINITY;
         for (int i = 1; i < values.length; i++) {
             final double d = Math.abs(values[i] - values[i - 1]);
@@ -72,7 +72,7 @@ final class RobustStatistics {
     }
 
     /** Median spacing of sample times. */
-    static double medianStep(double[] t) {
+    public static double medianStep(double[] t) {
         if (t.length < 2) {
             return Double.NaN;
         }

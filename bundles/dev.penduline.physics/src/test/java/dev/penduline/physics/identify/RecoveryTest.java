@@ -110,7 +110,9 @@ class RecoveryTest {
         assertTrue(band.resolved());
         assertTrue(band.lower() <= 0.25 && 0.25 < band.upper(), "Ts = 0.25 outside the band " + band);
         assertTrue(band.lower() > fit.friction().coulomb(), "band " + band + " must lie above Tc");
-        assertEquals(band.middle(), fit.friction().stiction(), 1e-12);
+        // Ts is the middle of the band of the last round; the rounds stop once that middle moves
+        // by less than 1e-3 of itself, so the reported band may have moved that much since
+        assertEquals(band.middle(), fit.friction().stiction(), 1e-3 * band.middle());
     }
 
     @Test

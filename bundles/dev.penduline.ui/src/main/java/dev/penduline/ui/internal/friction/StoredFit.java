@@ -138,6 +138,9 @@ public record StoredFit(String id, String computedAt, String status, String verd
         if (dominant == null) {
             return "Verdict: not stored with this fit";
         }
+        if ("mixed".equals(dominant)) {
+            return "Verdict: mixed: no loss leads the next by a clear margin (see the shares)";
+        }
         double share = shareOf(r, "stiction".equals(dominant) ? "coulomb" : dominant);
         return "Verdict: " + lossName(dominant) + " dominates, dissipating "
                 + Figures.fixed(100 * share, 0) + " % of the energy lost over the records";

@@ -1,0 +1,110 @@
+package dev.penduline.physics.identify;
+
+import java.util.ArrayList;
+import java.util.EnumSet;
+import java.util.LinkedHashMap;
+import java.util.List;
+import java.util.Locale;
+import java.util.Map;
+import java.util.Set;
+
+/**
+ * Point fits of term sets that know their nested subsets, with the guard that keeps a local
+ * minimum from passing for a result.
+ *
+ * <p>A term set contains each of its subsets (set the extra terms to zero), so its best fit
+ * can never be worse than theirs. Each set is therefore started from the analysis' estimates
+ * and from the optimum of every subset already fitted, and the best start is kept. The guard:
+ * if the set still ends with a larger residual than a subset, it is refitted from that
+ * subset's optimum (from where the optimiser, which only accepts steps that lower the cost,
+ * cannot end worse); if even that fails, the set's fit is marked {@link FitStatus#FAILED} as
+ * an optimiser failure, never reported as a result.
+ *
+ * <p>Not thread-safe: one instance serves one comparison.
+ */
+final class NestedFits {
+
+    /** Relative excess of the residual sum of squares over a subset's that the guard tolerates (rounding). */
+    static final double GUARD_TOLERANCE = 1e-6;
+
+    private final FrictionProblem problem;
+    private final FitSettings settings;
+    private final FitControl control;
+    private final List<Set<FrictionTerm>> family;
+    private final Map<Set<FrictionTerm>, PointFit> points = new LinkedHashMap<>();
+
+    /**
+     * @param family the term sets that may serve as subsets (candidates), smaller ones first
+     */
+    NestedFits(FrictionProblem problem, FitSettings settings, FitControl control, List<Set<FrictionTerm>> family) {
+        this.problem = problem;
+        this.settings = settings;
+        this.control = control;
+        this.family = List.copyOf(family);
+    }
+
+    /**
+     * The point fit of a term set, fitting its subsets in the family first.
+     *
+     * @param terms the term set
+     * @return the guarded point fit
+     */
+    PointFit point(Set<FrictionTerm> terms) {
+        final PointFit known = points.get(terms);
+        if (known != null) {
+            return known;
+        }
+        final List<PointFit> subsets = new ArrayList<>();
+        for (Set<FrictionTerm> s : family) {
+            if (terms.containsAll(s) && !terms.equals(s)) {
+                subsets.add(point(s));
+            }
+        }
+        final List<double[]> seeds = new ArrayList<>();
+        for (PointFit p : subsets) {
+            if (p.outcome().status() == FitStatus.CONVERGED) {
+                seeds.add(p.outcome().full());
+            }
+        }
+        PointFit fit = StagedFit.run(problem, terms, settings, control, seeds);
+        for (PointFit sub : subsets) {
+            if (fit.outcome().status() == FitStatus.CANCELLED) {
+                break;
+            }
+            if (violates(fit, sub)) {
+                final PointFit again = StagedFit.refine(problem, terms, settings, control, sub.outcome().full());
+                if (StagedFit.better(again.outcome(), fit.outcome())) {
+                    fit = again;
+                }
+            }
+        }
+        for (PointFit sub : subsets) {
+            if (violates(fit, sub)) {
+                fit = failed(fit, terms, sub);
+                break;
+            }
+        }
+        points.put(EnumSet.copyOf(terms), fit);
+        return fit;
+    }
+
+    /** Whether a fit ends worse than a converged subset's. */
+    private static boolean violates(PointFit fit, PointFit subset) {
+        if (subset.outcome().status() != FitStatus.CONVERGED) {
+            return false;
+        }
+        return !(fit.outcome().rss() <= subset.outcome().rss() * (1 + GUARD_TOLERANCE));
+    }
+
+    private static PointFit failed(PointFit fit, Set<FrictionTerm> terms, PointFit subset) {
+        final StageOutcome o = fit.outcome();
+        final int n = o.residuals() == null ? 1 : o.residuals().length;
+        final String message = String.format(Locale.ROOT, "optimiser failure: the terms %s fit worse (rms %.4g rad)"
+                + " than the smaller set they contain (rms %.4g rad), even when started from its optimum",
+                terms, Math.sqrt(o.rss() / n), Math.sqrt(subset.outcome().rss() / n));
+        final StageOutcome marked = new StageOutcome(o.full(), FitStatus.FAILED, message, o.iterations(),
+                o.evaluations(), o.rss(), o.residuals(), o.jacobian());
+        return new PointFit(fit.layout(), marked, fit.data(), fit.stiction(), fit.band(), fit.iterations(),
+                fit.evaluations());
+    }
+}
