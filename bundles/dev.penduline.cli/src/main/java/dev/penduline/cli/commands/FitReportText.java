@@ -17,6 +17,7 @@ import dev.penduline.physics.identify.ParameterEstimate;
 import dev.penduline.physics.identify.SessionEstimate;
 import dev.penduline.physics.units.Unit;
 import dev.penduline.services.FrictionIdentification.Outcome;
+import dev.penduline.services.present.Figures;
 
 /** The readable report of {@code penduline fit}: verdict, estimates, evidence, warnings, caution. */
 final class FitReportText {
@@ -46,7 +47,7 @@ final class FitReportText {
         out.printf(Locale.ROOT, "Verdict: %s dominates, dissipating %.0f %% of the energy lost over the records%n",
                 lossName(e.dominant()), 100 * share(e, e.dominant()));
         out.printf(Locale.ROOT, "  (viscous %.0f %%, Coulomb %.0f %%, drag %.0f %% of %s J)%n", 100 * e.viscous(),
-                100 * e.coulomb(), 100 * e.drag(), Numbers.significant(e.dissipated()));
+                100 * e.coulomb(), 100 * e.drag(), Figures.significant(e.dissipated()));
         out.println("  model: " + termList(fit.terms()) + (outcome.automatic() ? " (chosen by BIC among the candidates)"
                 : " (as asked)"));
         out.println();
@@ -54,36 +55,36 @@ final class FitReportText {
         for (FrictionTerm t : fit.terms()) {
             if (t == FrictionTerm.STICTION && fit.stiction() != null) {
                 out.printf(Locale.ROOT, "  %-9s Ts = between %s and %s %s%n", "stiction",
-                        Numbers.significant(fit.stiction().lower()), Numbers.significant(fit.stiction().upper()),
+                        Figures.significant(fit.stiction().lower()), Figures.significant(fit.stiction().upper()),
                         t.unit());
                 continue;
             }
             Optional<ParameterEstimate> p = fit.parameter(t.symbol());
-            p.ifPresent(v -> out.printf(Locale.ROOT, "  %-9s %-2s = %s ± %s %s%s%n", FitJson.word(t), t.symbol(),
-                    Numbers.significant(v.value()), Numbers.significant(v.sigma()), t.unit(),
+            p.ifPresent(v -> out.printf(Locale.ROOT, "  %-9s %-2s = %s %s%s%n", FitJson.word(t), t.symbol(),
+                    Figures.measured(v.value(), v.sigma()), t.unit(),
                     v.onBound() ? "  (on its bound)" : ""));
         }
         InertiaCheck i = fit.inertia();
         if (i.free()) {
-            out.printf(Locale.ROOT, "  inertia   J0 = %s ± %s kg·m² (calculated from the parts: %s kg·m², %+.2f %%)%n",
-                    Numbers.significant(i.fitted()), Numbers.significant(i.sigma()), Numbers.significant(i.calculated()),
+            out.printf(Locale.ROOT, "  inertia   J0 = %s kg·m² (calculated from the parts: %s kg·m², %+.2f %%)%n",
+                    Figures.measured(i.fitted(), i.sigma()), Figures.significant(i.calculated()),
                     i.differencePercent());
         } else {
             out.printf(Locale.ROOT, "  inertia   J0 = %s kg·m² (held at the calculated value)%n",
-                    Numbers.significant(i.calculated()));
+                    Figures.significant(i.calculated()));
         }
         out.println();
         printSessions(out, fit);
         outcome.comparison().ifPresent(c -> {
             out.println();
             out.printf(Locale.ROOT, "Term sets compared (effective samples %s of %d, residual lag-1 correlation %.2f):%n",
-                    Numbers.significant(c.effectiveSamples()), c.samples(), c.lag1());
+                    Figures.fixed(c.effectiveSamples(), 0), c.samples(), c.lag1());
             out.println("      terms                              AIC           BIC    rms (°)  supported");
             for (int k = 0; k < c.candidates().size(); k++) {
                 CandidateScore s = c.candidates().get(k);
                 out.printf(Locale.ROOT, "  %s  %-30s %12s  %12s  %9s  %s%n", k == c.selected() ? "=>" : "  ",
-                        termList(s.terms()), Numbers.significant(s.aic()), Numbers.significant(s.bic()),
-                        Numbers.significant(Unit.DEGREE.fromSi(s.rms())), s.supported() ? "yes" : "no");
+                        termList(s.terms()), Figures.fixed(s.aic(), 1), Figures.fixed(s.bic(), 1),
+                        Figures.significant(Unit.DEGREE.fromSi(s.rms())), s.supported() ? "yes" : "no");
             }
         });
         List<FitWarning> warnings = fit.warnings();
@@ -95,7 +96,7 @@ final class FitReportText {
         }
         out.println();
         out.printf(Locale.ROOT, "Residual rms %s° over %d samples; %d iterations, %d evaluations, %d bootstrap refits.%n",
-                Numbers.significant(Unit.DEGREE.fromSi(fit.rms())), fit.samples(), fit.iterations(), fit.evaluations(),
+                Figures.significant(Unit.DEGREE.fromSi(fit.rms())), fit.samples(), fit.iterations(), fit.evaluations(),
                 fit.resamplesUsed());
         if (stored != null) {
             out.println("Stored in " + file + " as fit '" + stored + "'.");
@@ -107,10 +108,10 @@ final class FitReportText {
         out.println("Records:");
         for (SessionEstimate s : fit.sessions()) {
             out.printf(Locale.ROOT, "  %-22s released %s° at %s s, offset %s°, residual rms %s°%n", s.name(),
-                    Numbers.significant(Unit.DEGREE.fromSi(s.releaseAngle().value())),
-                    Numbers.significant(s.releaseTime().value()),
-                    Numbers.significant(Unit.DEGREE.fromSi(s.offset().value())),
-                    Numbers.significant(Unit.DEGREE.fromSi(s.rms())));
+                    Figures.significant(Unit.DEGREE.fromSi(s.releaseAngle().value())),
+                    Figures.significant(s.releaseTime().value()),
+                    Figures.significant(Unit.DEGREE.fromSi(s.offset().value())),
+                    Figures.significant(Unit.DEGREE.fromSi(s.rms())));
         }
     }
 
