@@ -15,6 +15,7 @@ import dev.penduline.physics.swing.SwingCycle;
 import dev.penduline.physics.units.Unit;
 import dev.penduline.records.swing.SwingRecord;
 import dev.penduline.services.MechanismSource;
+import dev.penduline.services.present.Figures;
 
 /** The readable report of {@code penduline analyze}: the verdict first, then the evidence. */
 final class AnalysisReport {
@@ -33,7 +34,7 @@ final class AnalysisReport {
         LossVerdict v = s.verdict();
         out.println("Swing record " + record.source());
         out.printf(Locale.ROOT, "  %d samples at %s Hz; SHA-256 %s%n", record.size(),
-                Numbers.significant(AnalyzeCommand.sampleRate(record.times())), record.sha256().substring(0, 16) + "…");
+                Figures.significant(AnalyzeCommand.sampleRate(record.times())), record.sha256().substring(0, 16) + "…");
         out.println();
         out.printf(Locale.ROOT, "Verdict: %s (Coulomb %.0f %%, viscous %.0f %%, drag %.0f %% of the mean decrement)%n",
                 verdictText(v), 100 * v.coulombShare(), 100 * v.viscousShare(), 100 * v.dragShare());
@@ -41,17 +42,16 @@ final class AnalysisReport {
             out.println("  - " + e);
         }
         out.println();
-        out.printf(Locale.ROOT, "Release   at %s s (± %s s), from %s° off the hanging equilibrium%n",
-                Numbers.significant(s.release().time()), Numbers.significant(s.release().uncertainty()),
-                deg(s.initialAngle()));
-        out.printf(Locale.ROOT, "Offset    the sensor reads %s° (± %s°) at the hanging equilibrium (%s)%n",
-                deg(s.offset().value()), deg(s.offset().uncertainty()),
+        out.printf(Locale.ROOT, "Release   at %s s, from %s° off the hanging equilibrium%n",
+                Figures.measured(s.release().time(), s.release().uncertainty()), deg(s.initialAngle()));
+        out.printf(Locale.ROOT, "Offset    the sensor reads %s° at the hanging equilibrium (%s)%n",
+                Figures.measured(Unit.DEGREE.fromSi(s.offset().value()), Unit.DEGREE.fromSi(s.offset().uncertainty())),
                 s.offset().method().name().toLowerCase(Locale.ROOT).replace('_', ' '));
         StopInfo stop = s.stop();
         if (stop.stopped()) {
             out.printf(Locale.ROOT, "Stop      at rest from %s s, %s° from the equilibrium: stiction at least %s N·m%n",
-                    Numbers.significant(stop.time()), deg(stop.restOffset()),
-                    Numbers.significant(stop.stictionLowerBound()));
+                    Figures.significant(stop.time()), deg(stop.restOffset()),
+                    Figures.significant(stop.stictionLowerBound()));
         } else {
             out.println("Stop      still swinging at the end of the record");
         }
@@ -63,22 +63,22 @@ final class AnalysisReport {
             out.printf(Locale.ROOT, "  %-10s r² = %.5f   %s%n", e.model().name().toLowerCase(Locale.ROOT), e.rSquared(),
                     switch (e.model()) {
                         case LINEAR -> "loses " + deg(e.ratePerCycle()) + "° per cycle (dry-friction signature)";
-                        case GEOMETRIC -> "log decrement " + Numbers.significant(e.ratePerCycle()) + ", damping ratio "
-                                + Numbers.significant(e.dampingRatio()) + " (viscous signature)";
-                        case RECIPROCAL -> "1/A grows " + Numbers.significant(e.ratePerCycle())
+                        case GEOMETRIC -> "log decrement " + Figures.significant(e.ratePerCycle()) + ", damping ratio "
+                                + Figures.significant(e.dampingRatio()) + " (viscous signature)";
+                        case RECIPROCAL -> "1/A grows " + Figures.significant(e.ratePerCycle())
                                 + " /rad per cycle (drag signature)";
                     });
         }
         s.regression().ifPresent(r -> out.printf(Locale.ROOT,
                 "Decrement per half-swing ΔA = a0 + a1·A + a2·A²: a0 = %s rad, a1 = %s, a2 = %s /rad (r² = %.4f, %d half-swings)%n",
-                Numbers.significant(r.a0()), Numbers.significant(r.a1()), Numbers.significant(r.a2()), r.rSquared(),
+                Figures.significant(r.a0()), Figures.significant(r.a1()), Figures.significant(r.a2()), r.rSquared(),
                 r.count()));
         PeriodCheck p = s.periodCheck();
         if (mechanism.isPresent() && p != null && Double.isFinite(p.predictedSmallAnglePeriod())) {
             out.printf(Locale.ROOT, "Period    small-angle %s s measured, %s s predicted from the mechanism (%+.2f %%); "
-                    + "the record implies J0 ≈ %s kg·m²%n", Numbers.significant(p.measuredSmallAnglePeriod()),
-                    Numbers.significant(p.predictedSmallAnglePeriod()), 100 * p.medianRelativeDifference(),
-                    Numbers.significant(p.impliedPivotInertia()));
+                    + "the record implies J0 ≈ %s kg·m²%n", Figures.significant(p.measuredSmallAnglePeriod()),
+                    Figures.significant(p.predictedSmallAnglePeriod()), 100 * p.medianRelativeDifference(),
+                    Figures.significant(p.impliedPivotInertia()));
         }
         s.estimates().ifPresent(e -> printEstimates(e, out));
         out.println();
@@ -98,19 +98,16 @@ final class AnalysisReport {
                 i = n - 4;
             }
             SwingCycle c = cycles.get(i);
-            out.printf(Locale.ROOT, "  %4d  %10s  %14s  %11s%n", c.index() + 1, Numbers.significant(c.startTime()),
-                    deg(c.amplitude()), Numbers.significant(c.period()));
+            out.printf(Locale.ROOT, "  %4d  %10s  %14s  %11s%n", c.index() + 1, Figures.significant(c.startTime()),
+                    deg(c.amplitude()), Figures.significant(c.period()));
         }
     }
 
     private static void printEstimates(FrictionEstimates e, PrintWriter out) {
         out.println("First estimates (energy balance per half-swing):");
-        out.printf(Locale.ROOT, "  viscous   b  = %s ± %s N·m·s/rad%n", Numbers.significant(e.viscous()),
-                Numbers.significant(e.viscousError()));
-        out.printf(Locale.ROOT, "  Coulomb   Tc = %s ± %s N·m%n", Numbers.significant(e.coulomb()),
-                Numbers.significant(e.coulombError()));
-        out.printf(Locale.ROOT, "  drag      c  = %s ± %s N·m·s²/rad²%n", Numbers.significant(e.drag()),
-                Numbers.significant(e.dragError()));
+        out.printf(Locale.ROOT, "  viscous   b  = %s N·m·s/rad%n", Figures.measured(e.viscous(), e.viscousError()));
+        out.printf(Locale.ROOT, "  Coulomb   Tc = %s N·m%n", Figures.measured(e.coulomb(), e.coulombError()));
+        out.printf(Locale.ROOT, "  drag      c  = %s N·m·s²/rad²%n", Figures.measured(e.drag(), e.dragError()));
     }
 
     private static String verdictText(LossVerdict v) {
@@ -124,6 +121,6 @@ final class AnalysisReport {
     }
 
     private static String deg(double rad) {
-        return Numbers.significant(Unit.DEGREE.fromSi(rad));
+        return Figures.significant(Unit.DEGREE.fromSi(rad));
     }
 }

@@ -20,6 +20,7 @@ import dev.penduline.physics.identify.SessionEstimate;
 import dev.penduline.physics.identify.StictionBand;
 import dev.penduline.physics.units.Unit;
 import dev.penduline.services.FrictionIdentification.Outcome;
+import dev.penduline.services.present.Figures;
 
 /** The readable report of {@code penduline fit}: verdict, estimates, evidence, warnings, caution. */
 final class FitReportText {
@@ -56,7 +57,7 @@ final class FitReportText {
         out.println("Verdict: " + verdict(fit));
         out.printf(Locale.ROOT, "  (energy lost over the records: viscous %s, Coulomb %s, drag %s of %s J)%n",
                 percent(e.viscous(), e.viscousSigma()), percent(e.coulomb(), e.coulombSigma()),
-                percent(e.drag(), e.dragSigma()), Numbers.significant(e.dissipated()));
+                percent(e.drag(), e.dragSigma()), Figures.significant(e.dissipated()));
         out.println("  model: " + termList(fit.terms()) + (outcome.automatic() ? " (chosen by BIC among the candidates)"
                 : " (as asked)"));
         out.println();
@@ -64,23 +65,23 @@ final class FitReportText {
         for (FrictionTerm t : fit.terms()) {
             if (t == FrictionTerm.STICTION && fit.stiction() != null) {
                 out.printf(Locale.ROOT, "  %-9s Ts = between %s and %s %s%n", "stiction",
-                        Numbers.significant(fit.stiction().lower()), Numbers.significant(fit.stiction().upper()),
+                        Figures.significant(fit.stiction().lower()), Figures.significant(fit.stiction().upper()),
                         t.unit());
                 continue;
             }
             Optional<ParameterEstimate> p = fit.parameter(t.symbol());
-            p.ifPresent(v -> out.printf(Locale.ROOT, "  %-9s %-2s = %s ± %s %s%s%n", FitJson.word(t), t.symbol(),
-                    Numbers.significant(v.value()), Numbers.significant(v.sigma()), t.unit(),
+            p.ifPresent(v -> out.printf(Locale.ROOT, "  %-9s %-2s = %s %s%s%n", FitJson.word(t), t.symbol(),
+                    Figures.measured(v.value(), v.sigma()), t.unit(),
                     v.onBound() ? "  (on its bound)" : ""));
         }
         InertiaCheck i = fit.inertia();
         if (i.free()) {
-            out.printf(Locale.ROOT, "  inertia   J0 = %s ± %s kg·m² (calculated from the parts: %s kg·m², %+.2f %%)%n",
-                    Numbers.significant(i.fitted()), Numbers.significant(i.sigma()), Numbers.significant(i.calculated()),
+            out.printf(Locale.ROOT, "  inertia   J0 = %s kg·m² (calculated from the parts: %s kg·m², %+.2f %%)%n",
+                    Figures.measured(i.fitted(), i.sigma()), Figures.significant(i.calculated()),
                     i.differencePercent());
         } else {
             out.printf(Locale.ROOT, "  inertia   J0 = %s kg·m² (held at the calculated value)%n",
-                    Numbers.significant(i.calculated()));
+                    Figures.significant(i.calculated()));
         }
         out.println();
         printSessions(out, fit);
@@ -89,13 +90,13 @@ final class FitReportText {
         outcome.comparison().ifPresent(c -> {
             out.println();
             out.printf(Locale.ROOT, "Term sets compared (effective samples %s of %d, residual lag-1 correlation %.2f):%n",
-                    Numbers.significant(c.effectiveSamples()), c.samples(), c.lag1());
+                    Figures.fixed(c.effectiveSamples(), 0), c.samples(), c.lag1());
             out.println("      terms                              AIC           BIC    rms (°)  supported");
             for (int k = 0; k < c.candidates().size(); k++) {
                 CandidateScore s = c.candidates().get(k);
                 out.printf(Locale.ROOT, "  %s  %-30s %12s  %12s  %9s  %s%n", k == c.selected() ? "=>" : "  ",
-                        termList(s.terms()), Numbers.significant(s.aic()), Numbers.significant(s.bic()),
-                        Numbers.significant(Unit.DEGREE.fromSi(s.rms())), s.supported() ? "yes" : "no");
+                        termList(s.terms()), Figures.fixed(s.aic(), 1), Figures.fixed(s.bic(), 1),
+                        Figures.significant(Unit.DEGREE.fromSi(s.rms())), s.supported() ? "yes" : "no");
             }
         });
         List<FitWarning> warnings = fit.warnings();
@@ -107,7 +108,7 @@ final class FitReportText {
         }
         out.println();
         out.printf(Locale.ROOT, "Residual rms %s° over %d samples; %d iterations, %d evaluations, %d bootstrap refits.%n",
-                Numbers.significant(Unit.DEGREE.fromSi(fit.rms())), fit.samples(), fit.iterations(), fit.evaluations(),
+                Figures.significant(Unit.DEGREE.fromSi(fit.rms())), fit.samples(), fit.iterations(), fit.evaluations(),
                 fit.resamplesUsed());
         if (stored != null) {
             out.println("Stored in " + file + " as fit '" + stored + "'.");
@@ -133,13 +134,11 @@ final class FitReportText {
 
     private static String percent(double share, double sigma) {
         if (Double.isFinite(sigma) && sigma > 0) {
-            // the σ to two significant digits and the share to the same decimal place (GUM §7.2.6)
-            int decimals = (int) Math.max(0, Math.min(4, 1 - Math.floor(Math.log10(100 * sigma))));
-            return String.format(Locale.ROOT, "%." + decimals + "f ± %." + decimals + "f %%", 100 * share,
-                    100 * sigma);
+            return Figures.measured(100 * share, 100 * sigma) + " %";
         }
-        return String.format(Locale.ROOT, "%.0f %%", 100 * share);
+        return Figures.percent(share);
     }
+
 
     private static void printGoodness(PrintWriter out, FrictionFit fit) {
         Goodness g = fit.goodness();
@@ -148,7 +147,7 @@ final class FitReportText {
         }
         out.printf(Locale.ROOT, "Against the noise: residual rms %s° against a noise floor of %s° (largest ratio of a"
                 + " record %.2f, limit %.2g; residual lag-1 correlation %.2f): %s%n",
-                Numbers.significant(Unit.DEGREE.fromSi(g.rms())), Numbers.significant(Unit.DEGREE.fromSi(g.floor())),
+                Figures.significant(Unit.DEGREE.fromSi(g.rms())), Figures.significant(Unit.DEGREE.fromSi(g.floor())),
                 g.ratio(), g.limit(), g.lag1(), g.passed() ? "the model describes the records"
                         : "the model does NOT describe the records");
     }
@@ -162,7 +161,7 @@ final class FitReportText {
             out.println("Static friction from the stops: none can be given: " + fit.stopNote());
         } else {
             out.printf(Locale.ROOT, "Static friction from the stops: Ts between %s and %s N·m (%s)%n",
-                    Numbers.significant(b.lower()), Numbers.significant(b.upper()), fit.stopNote());
+                    Figures.significant(b.lower()), Figures.significant(b.upper()), fit.stopNote());
         }
     }
 
@@ -170,10 +169,10 @@ final class FitReportText {
         out.println("Records:");
         for (SessionEstimate s : fit.sessions()) {
             out.printf(Locale.ROOT, "  %-22s released %s° at %s s, offset %s°, residual rms %s°%n", s.name(),
-                    Numbers.significant(Unit.DEGREE.fromSi(s.releaseAngle().value())),
-                    Numbers.significant(s.releaseTime().value()),
-                    Numbers.significant(Unit.DEGREE.fromSi(s.offset().value())),
-                    Numbers.significant(Unit.DEGREE.fromSi(s.rms())));
+                    Figures.significant(Unit.DEGREE.fromSi(s.releaseAngle().value())),
+                    Figures.significant(s.releaseTime().value()),
+                    Figures.significant(Unit.DEGREE.fromSi(s.offset().value())),
+                    Figures.significant(Unit.DEGREE.fromSi(s.rms())));
         }
     }
 

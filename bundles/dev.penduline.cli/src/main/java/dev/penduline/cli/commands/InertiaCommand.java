@@ -16,6 +16,7 @@ import dev.penduline.physics.units.Unit;
 import dev.penduline.services.InputException;
 import dev.penduline.services.MechanismLoader;
 import dev.penduline.services.MechanismSource;
+import dev.penduline.services.present.Figures;
 
 /** {@code penduline inertia FILE}: mass, centroid and inertia about the pivot, part by part. */
 public final class InertiaCommand implements Command {
@@ -115,26 +116,26 @@ public final class InertiaCommand implements Command {
         out.printf(row, "part", "mass (kg)", "distance (m)", "J pivot (kg·m²)", "share");
         for (PartContribution p : s.contributions()) {
             out.printf(row, p.name(), num(p.mass()), num(p.axisDistance()), num(p.pivotInertia()),
-                    String.format("%.1f %%", 100 * p.share()));
+                    Figures.percent(p.share()));
         }
         out.println();
         out.printf("  total mass                      %s kg%n", num(s.totalMass()));
         out.printf("  centroid (x, y, z)              (%s, %s, %s) m%n", num(s.centroid().x()), num(s.centroid().y()),
                 num(s.centroid().z()));
         out.printf("  centroid distance Lc            %s m%n", num(s.centroidDistance()));
-        out.printf("  equilibrium angle               %.3f°%n", Unit.DEGREE.fromSi(s.equilibriumAngle()));
+        out.printf("  equilibrium angle               %s°%n", Figures.fixed(Unit.DEGREE.fromSi(s.equilibriumAngle()), 3));
         out.printf("  inertia about the pivot J0      %s kg·m²%n", num(s.pivotInertia()));
         out.printf("  inertia about the centroid      %s kg·m²%n", num(s.centroidalInertia()));
         out.printf("  radius of gyration              %s m%n", num(s.radiusOfGyration()));
         out.printf("  equivalent pendulum length      %s m%n", num(s.equivalentLength()));
         out.printf("  small-angle period T0           %s s%n", num(s.smallAnglePeriod()));
-        out.printf("  simple-pendulum period error    %.2f %% (treating the body as a point mass at its centroid)%n",
-                100 * s.simplePendulumPeriodError());
+        out.printf("  simple-pendulum period error    %s (treating the body as a point mass at its centroid)%n",
+                Figures.percent(s.simplePendulumPeriodError(), 2));
         out.println();
         out.println(Caution.TEXT);
     }
 
     private static String num(double v) {
-        return Numbers.significant(v);
+        return Figures.significant(v);
     }
 }

@@ -20,6 +20,7 @@ import dev.penduline.services.AtomicFiles;
 import dev.penduline.services.InputException;
 import dev.penduline.services.MechanismSource;
 import dev.penduline.services.SwingPrediction;
+import dev.penduline.services.present.Figures;
 
 /** {@code penduline simulate}: the free swing of a mechanism with chosen friction torques. */
 public final class SimulateCommand implements Command {
@@ -144,32 +145,32 @@ public final class SimulateCommand implements Command {
             PrintWriter out) {
         out.println("Swing of " + m.label());
         out.printf(Locale.ROOT, "  released at %s° (small-angle period %s s)%n",
-                Numbers.significant(Unit.DEGREE.fromSi(theta0)), Numbers.significant(m.properties().smallAnglePeriod()));
+                Figures.significant(Unit.DEGREE.fromSi(theta0)), Figures.significant(m.properties().smallAnglePeriod()));
         out.printf(Locale.ROOT, "  friction: viscous %s N·m·s/rad, Coulomb %s N·m, stiction %s N·m, drag %s N·m·s²/rad²%n",
-                Numbers.significant(f.viscous()), Numbers.significant(f.coulomb()),
-                Numbers.significant(f.staticTorque()), Numbers.significant(f.drag()));
+                Figures.significant(f.viscous()), Figures.significant(f.coulomb()),
+                Figures.significant(f.staticTorque()), Figures.significant(f.drag()));
         out.println();
         double[] periods = run.periods();
         List<TurningPoint> tps = run.turningPoints();
         out.printf("  %d turning points, %d full-cycle periods%n", tps.size(), periods.length);
         int shown = Math.min(periods.length, 5);
         for (int i = 0; i < shown; i++) {
-            out.printf(Locale.ROOT, "    cycle %d: period %s s%n", i + 1, Numbers.significant(periods[i]));
+            out.printf(Locale.ROOT, "    cycle %d: period %s s%n", i + 1, Figures.significant(periods[i]));
         }
         if (periods.length > shown) {
-            out.printf(Locale.ROOT, "    ... last cycle: period %s s%n", Numbers.significant(periods[periods.length - 1]));
+            out.printf(Locale.ROOT, "    ... last cycle: period %s s%n", Figures.significant(periods[periods.length - 1]));
         }
         if (run.stopped()) {
             out.printf(Locale.ROOT, "  came to rest at %s s, %s° from the hanging equilibrium%n",
-                    Numbers.significant(run.stopTime()), Numbers.significant(Unit.DEGREE.fromSi(run.restAngle())));
+                    Figures.significant(run.stopTime()), Figures.significant(Unit.DEGREE.fromSi(run.restAngle())));
         } else {
             double last = run.angles()[run.size() - 1];
-            out.printf(Locale.ROOT, "  still moving at the end (%s°)%n", Numbers.significant(Unit.DEGREE.fromSi(last)));
+            out.printf(Locale.ROOT, "  still moving at the end (%s°)%n", Figures.significant(Unit.DEGREE.fromSi(last)));
         }
         SwingEnergy e = run.energy();
         out.printf(Locale.ROOT, "  energy: released with %s J; dissipated viscous %s J, Coulomb %s J, drag %s J%n",
-                Numbers.significant(e.initial()), Numbers.significant(e.viscous()), Numbers.significant(e.coulomb()),
-                Numbers.significant(e.drag()));
+                Figures.significant(e.initial()), Figures.significant(e.viscous()), Figures.significant(e.coulomb()),
+                Figures.significant(e.drag()));
         if (run.smoothed()) {
             out.println("  note: the friction sign was smoothed (not the exact dry-friction model)");
         }

@@ -5,6 +5,7 @@ import static org.junit.jupiter.api.Assertions.assertEquals;
 import static org.junit.jupiter.api.Assertions.assertTrue;
 
 import java.io.PrintWriter;
+import java.math.BigDecimal;
 import java.io.StringWriter;
 import java.nio.file.Files;
 import java.nio.file.Path;
@@ -102,6 +103,11 @@ class FitCommandTest {
         assertEquals(ExitCode.COMPUTATION_FAILED, run("fit", mechanism.toString(), "--terms", "viscous,coulomb",
                 "--max-iterations", "1", "--resamples", "0"));
         assertTrue(out.toString().contains("DID NOT CONVERGE"), out.toString());
+        // GUM §7.2.6: the standard error to two significant digits, the estimate to the same decimal place
+        Matcher b = Pattern.compile("b  = \\(?(-?[0-9.]+) ± ([0-9.]+)\\)?(e-?[0-9]+)? N·m·s/rad").matcher(out.toString());
+        assertTrue(b.find(), out.toString());
+        assertEquals(2, new BigDecimal(b.group(2)).precision(), b.group());
+        assertEquals(new BigDecimal(b.group(2)).scale(), new BigDecimal(b.group(1)).scale(), b.group());
         assertArrayEquals(before, Files.readAllBytes(mechanism));
     }
 

@@ -54,7 +54,11 @@ class InertiaCommandTest {
     void readableReportEndsWithTheCaution() throws IOException {
         Path csv = Files.writeString(dir.resolve("bob.csv"), "name,shape,mass_kg,x_m,y_m,z_m\nbob,point,2,0,-1,0\n");
         assertEquals(ExitCode.OK, run("inertia", csv.toString()));
-        assertTrue(out.toString().contains("inertia about the pivot J0      2 kg·m²"), out.toString());
+        // a point mass m = 2 kg at r = 1 m: J0 = m r² = 2 kg·m², printed to four significant digits
+        assertTrue(out.toString().contains("inertia about the pivot J0      2.000 kg·m²"), out.toString());
+        // the simple pendulum of length 1 m: T0 = 2π √(L/g) = 2.006 s (g = 9.80665 m/s², the classic result)
+        assertTrue(out.toString().contains("small-angle period T0           2.006 s"), out.toString());
+        assertTrue(out.toString().contains("100.0 %"), "the bob's share " + out);
         assertTrue(out.toString().contains("Caution"), out.toString());
     }
 

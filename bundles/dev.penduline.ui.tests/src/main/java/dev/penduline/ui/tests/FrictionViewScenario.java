@@ -6,6 +6,7 @@ import static org.junit.jupiter.api.Assertions.assertNotNull;
 import static org.junit.jupiter.api.Assertions.assertTrue;
 import static org.junit.jupiter.api.Assertions.fail;
 
+import java.math.BigDecimal;
 import java.nio.charset.StandardCharsets;
 import java.nio.file.Files;
 import java.nio.file.Path;
@@ -166,13 +167,16 @@ final class FrictionViewScenario {
             }
         }
         assertNotNull(row, "no row " + symbol + " in the estimates table");
-        double value = Double.parseDouble(row.getText(1));
-        // Six significant digits are shown.
-        assertEquals(e.getValue(), value, 5e-6 * Math.abs(e.getValue()), symbol + " shown");
         double sigma = Math.max(e.isSetStandardError() ? e.getStandardError() : 0,
                 e.isSetResamplingError() ? e.getResamplingError() : 0);
         // Two significant digits of the larger standard error.
-        assertEquals(sigma, Double.parseDouble(row.getText(2)), 0.05 * sigma, symbol + " σ shown");
+        BigDecimal sigmaShown = new BigDecimal(row.getText(2));
+        assertEquals(sigma, sigmaShown.doubleValue(), 0.05 * sigma, symbol + " σ shown");
+        // The value rounded to the decimal place of that standard error (GUM §7.2.6).
+        BigDecimal valueShown = new BigDecimal(row.getText(1));
+        assertEquals(sigmaShown.ulp(), valueShown.ulp(), symbol + " shown to the place of its σ: " + row.getText(1));
+        assertEquals(e.getValue(), valueShown.doubleValue(), 0.5 * sigmaShown.ulp().doubleValue() * (1 + 1e-9),
+                symbol + " shown");
     }
 
     private void press(FrictionPart view) {

@@ -9,7 +9,7 @@ import dev.penduline.physics.swing.LossVerdict;
 import dev.penduline.physics.swing.PeriodCheck;
 import dev.penduline.physics.swing.SwingAnalysis;
 import dev.penduline.physics.units.Unit;
-import dev.penduline.ui.internal.Figures;
+import dev.penduline.services.present.Figures;
 
 /**
  * The few lines under the Swing Chart: the verdict first, then the release, the sensor's offset
@@ -26,12 +26,13 @@ final class AnalysisSummary {
         out.add(String.format(Locale.ROOT, "Verdict: %s (Coulomb %s, viscous %s, drag %s of the mean decrement)",
                 verdict(v), Figures.percent(v.coulombShare()), Figures.percent(v.viscousShare()),
                 Figures.percent(v.dragShare())));
-        out.add("Release at " + Figures.significant(a.release().time()) + " s (± "
-                + Figures.uncertainty(a.release().uncertainty()) + " s), " + deg(a.initialAngle())
+        out.add("Release at " + Figures.measured(a.release().time(), a.release().uncertainty()) + " s, "
+                + deg(a.initialAngle())
                 + "° from the hanging equilibrium; " + a.cycles().size() + " cycle(s), "
                 + a.turningPoints().size() + " turning point(s)");
-        out.add("Offset: the sensor reads " + deg(a.offset().value()) + "° (± "
-                + Figures.uncertainty(Unit.DEGREE.fromSi(a.offset().uncertainty())) + "°) at the hanging equilibrium ("
+        out.add("Offset: the sensor reads "
+                + Figures.measured(Unit.DEGREE.fromSi(a.offset().value()), Unit.DEGREE.fromSi(a.offset().uncertainty()))
+                + "° at the hanging equilibrium ("
                 + a.offset().method().name().toLowerCase(Locale.ROOT).replace('_', ' ') + ")");
         PeriodCheck p = a.periodCheck();
         if (withMechanism && p != null && Double.isFinite(p.predictedSmallAnglePeriod())) {

@@ -21,7 +21,7 @@ import dev.penduline.services.MechanismSource;
 import dev.penduline.services.SessionRecords;
 import dev.penduline.services.SwingPrediction;
 import dev.penduline.services.SwingSessionAnalysis;
-import dev.penduline.ui.internal.Figures;
+import dev.penduline.services.present.Figures;
 
 /**
  * A mechanism file opened for the Swing Chart: its test sessions and, when its parts allow, the

@@ -31,7 +31,7 @@ import dev.penduline.services.FrictionIdentification.SessionInput;
 import dev.penduline.services.InputException;
 import dev.penduline.services.MechanismLoader;
 import dev.penduline.services.MechanismSource;
-import dev.penduline.ui.internal.Figures;
+import dev.penduline.services.present.Figures;
 import dev.penduline.ui.internal.MechanismSelection;
 
 /**
@@ -145,7 +145,7 @@ final class FrictionFitJob extends Job {
                 return;
             }
             String text = "stage " + stage + ": " + evaluations + " evaluations, rms "
-                    + Figures.digits(Unit.DEGREE.fromSi(rms), 3) + "°";
+                    + Figures.significant(Unit.DEGREE.fromSi(rms), 3) + "°";
             monitor.subTask(text);
             line.accept(text);
         }

@@ -20,7 +20,7 @@ import dev.penduline.model.TermSetScore;
 import dev.penduline.model.TestSession;
 import dev.penduline.physics.identify.ParameterEstimate;
 import dev.penduline.physics.units.Unit;
-import dev.penduline.ui.internal.Figures;
+import dev.penduline.services.present.Figures;
 
 /**
  * One friction fit as it is stored in a mechanism file, turned into the text the Friction view
@@ -48,7 +48,7 @@ public record StoredFit(String id, String computedAt, String status, String verd
      *
      * @param quantity        what it is ("viscous", "J0 calculated", ...)
      * @param symbol          the parameter's symbol (b, Tc, Ts, c, J0), empty for derived rows
-     * @param value           the value, six significant digits
+     * @param value           the value, rounded to the decimal place of {@code sigma} (GUM §7.2.6)
      * @param sigma           the larger of the two standard errors, the one to quote
      * @param sigmaJacobian   the standard error from the Jacobian at the optimum
      * @param sigmaResampling the standard error from the block bootstrap
@@ -181,7 +181,7 @@ public record StoredFit(String id, String computedAt, String status, String verd
             // The quoted σ follows the physics layer's rule (the larger of the two), not one of ours.
             double sigma = new ParameterEstimate(e.getParameter(), "", e.getValue(), sj, sr, true, false).sigma();
             rows.add(new EstimateRow(inertia ? "inertia, fitted" : TermWords.quantity(e.getParameter()),
-                    e.getParameter(), Figures.significant(e.getValue()), orDash(sigma), orDash(sj), orDash(sr),
+                    e.getParameter(), Figures.value(e.getValue(), sigma), orDash(sigma), orDash(sj), orDash(sr),
                     TermWords.unit(e.getParameter())));
         }
         if (r.isSetCalculatedInertia()) {
@@ -223,7 +223,7 @@ public record StoredFit(String id, String computedAt, String status, String verd
         for (TermSetScore s : r.getComparisons()) {
             rows.add(new ComparisonRow(kept.equals(new HashSet<>(s.getTermIds())),
                     s.getTermIds().stream().map(t -> t.toLowerCase(Locale.ROOT)).collect(Collectors.joining("+")),
-                    Figures.significant(s.getAic()), Figures.significant(s.getBic()),
+                    Figures.fixed(s.getAic(), 1), Figures.fixed(s.getBic(), 1),
                     Figures.significant(Unit.DEGREE.fromSi(s.getRmsResidual()))));
         }
         return rows;

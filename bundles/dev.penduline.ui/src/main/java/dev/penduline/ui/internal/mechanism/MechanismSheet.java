@@ -13,7 +13,7 @@ import dev.penduline.physics.inertia.PartContribution;
 import dev.penduline.services.InputException;
 import dev.penduline.services.MechanismLoader;
 import dev.penduline.services.MechanismSource;
-import dev.penduline.ui.internal.Figures;
+import dev.penduline.services.present.Figures;
 
 /**
  * What the Mechanism view shows for one file: the services' results as rows of text, or the
@@ -79,9 +79,8 @@ public record MechanismSheet(String title, String source, List<TotalRow> totals,
                     : Figures.significant(t.valueOf(s));
             rows.add(new TotalRow(t, t.label(), value, t.unit()));
             if (t == InertiaTotal.MASS) {
-                // Four digits keep the three coordinates in one readable cell; the report has six.
-                rows.add(new TotalRow(null, "centroid (x, y, z)", "(" + Figures.digits(s.centroid().x(), 4) + ", "
-                        + Figures.digits(s.centroid().y(), 4) + ", " + Figures.digits(s.centroid().z(), 4) + ")",
+                rows.add(new TotalRow(null, "centroid (x, y, z)", "(" + Figures.significant(s.centroid().x()) + ", "
+                        + Figures.significant(s.centroid().y()) + ", " + Figures.significant(s.centroid().z()) + ")",
                         "m"));
             }
         }

@@ -15,7 +15,7 @@ import org.eclipse.swt.widgets.TableColumn;
 
 import dev.penduline.physics.inertia.PartContribution;
 import dev.penduline.physics.units.Unit;
-import dev.penduline.ui.internal.Figures;
+import dev.penduline.services.present.Figures;
 
 /**
  * The two tables of the Mechanism view, side by side: the totals (quantity, value, unit) and the
