@@ -131,7 +131,6 @@ public final class FrictionIdentification {
             for (String w : s.warnings()) {
                 warnings.add(s.name() + ": " + w);
             }
-            quantisationWarning(s).ifPresent(warnings::add);
         }
         FrictionProblem problem;
         try {
@@ -150,26 +149,6 @@ public final class FrictionIdentification {
         }
         ModelComparison comparison = identifier.compare(problem, control);
         return new Outcome(mechanism, sessions, comparison.best(), Optional.of(comparison), true, warnings);
-    }
-
-    /**
-     * Rounding to encoder counts acts as additive noise only when the sensor's own noise spans
-     * about half a step or more (Widrow &amp; Kollár, Quantization Noise, 2008: the quantisation
-     * theorems); below that, rounding can bias the fit by more than the standard errors say.
-     *
-     * @param s an analysed record
-     * @return a warning, when the record is coarsely quantised for its noise
-     */
-    static Optional<String> quantisationWarning(SessionInput s) {
-        double q = s.analysis().release().quantum();
-        double noise = s.analysis().release().noise();
-        if (!(q > 0) || noise >= 0.5 * q) {
-            return Optional.empty();
-        }
-        return Optional.of(String.format(java.util.Locale.ROOT, "%s: the record moves in encoder steps of %.3g° with"
-                + " little noise (%.2g°): rounding can bias the estimates by more than their standard errors show"
-                + " (typically a few tenths of a percent); a finer encoder or more records help", s.name(),
-                Math.toDegrees(q), Math.toDegrees(noise)));
     }
 
     /**

@@ -83,7 +83,7 @@ final class BlockBootstrap {
                 y[i] = d.angles()[i] - residuals[from + i] + residuals[from + start + j] - mean;
             }
         }
-        return new StageSamples(d.times(), y);
+        return d.withAngles(y);
     }
 
     /** Standard deviation of each full entry over the replicates (NaN with fewer than two). */

@@ -110,6 +110,16 @@ final class FitReport {
         final FrictionVerdict verdict = FrictionVerdict.judge(energy, shares, settings.verdictMargin(),
                 status == FitStatus.CONVERGED);
         warn(warnings, problem, point, u, physical, check, settings, resamplesUsed);
+        for (int s = 0; s < point.data().size(); s++) {
+            final EncoderRounding r = point.data().get(s).rounding();
+            if (r != null) {
+                warnings.add(new FitWarning(FitWarning.Kind.ENCODER_ROUNDING, String.format(Locale.ROOT, "%s: the"
+                        + " record moves in encoder steps of %.3g° with noise of only %.2g° before rounding (estimated"
+                        + " by maximum likelihood): the rounding is part of the fitted measurement model, which"
+                        + " removes the bias plain least squares would have", problem.sessions().get(s).name(),
+                        Math.toDegrees(r.step()), Math.toDegrees(r.sigma()))));
+            }
+        }
         if (goodness != null) {
             for (String line : goodness.evidence()) {
                 warnings.add(new FitWarning(FitWarning.Kind.MISFIT, line + ": the model does not describe this"

@@ -29,6 +29,8 @@ public record FitWarning(Kind kind, String message) {
         /** The residuals of a record are clearly above its noise floor: the model does not describe it. */
         MISFIT,
         /** The residuals are above the noise floor, but below the misfit limit. */
-        ABOVE_NOISE
+        ABOVE_NOISE,
+        /** A record is quantised coarsely for its noise: the encoder's rounding was modelled. */
+        ENCODER_ROUNDING
     }
 }

@@ -1,8 +1,17 @@
 package dev.penduline.physics.identify;
 
+import java.util.ArrayList;
 import java.util.List;
 import java.util.Objects;
 import java.util.Set;
+
+import org.hipparchus.analysis.UnivariateFunction;
+import org.hipparchus.exception.MathIllegalStateException;
+import org.hipparchus.optim.MaxEval;
+import org.hipparchus.optim.nonlinear.scalar.GoalType;
+import org.hipparchus.optim.univariate.BrentOptimizer;
+import org.hipparchus.optim.univariate.SearchInterval;
+import org.hipparchus.optim.univariate.UnivariateObjectiveFunction;
 
 /**
  * Identifies friction from recorded releases: the entry point of this package.
@@ -97,6 +106,7 @@ public final class FrictionIdentifier {
                         point.evaluations() + spread.evaluations());
             }
         }
+        point = withEncoderRounding(problem, point, settings, control);
         List<double[]> replicates = null;
         double[] resampled = null;
         int used = 0;
@@ -116,6 +126,77 @@ public final class FrictionIdentifier {
             }
         }
         return FitReport.build(problem, terms, point, replicates, resampled, used, settings, true);
+    }
+
+    /** Relative accuracy of the noise scale found by the profile over σ. */
+    private static final double NOISE_SCALE_ACCURACY = 0.02;
+    private static final int NOISE_SCALE_EVALUATIONS = 12;
+
+    /**
+     * Refits records that are quantised coarsely for their noise with the encoder's rounding in
+     * the measurement model ({@link EncoderRounding}).
+     *
+     * <p>The noise before rounding, σ, is first estimated by maximum likelihood at the plain
+     * fit; that fit is biased, and its errors inflate σ. The mean function g(μ; σ) identifies σ
+     * as well: the expected squared residual is the readings' own variance (which does not
+     * depend on the model's σ) plus {@code (g_true − g_σ)²}, least at the true σ. So the
+     * residual sum of squares is profiled over a common scale of the sessions' σ (Brent's
+     * method, each point a warm-started refit), and the best refit is kept.
+     */
+    static PointFit withEncoderRounding(FrictionProblem problem, PointFit point, FitSettings settings,
+            FitControl control) {
+        final StageOutcome o = point.outcome();
+        if (o.status() != FitStatus.CONVERGED || o.residuals() == null) {
+            return point;
+        }
+        final List<EncoderRounding> roundings = new ArrayList<>();
+        boolean any = false;
+        int row = 0;
+        for (StageSamples d : point.data()) {
+            final double[] model = new double[d.size()];
+            for (int i = 0; i < model.length; i++) {
+                model[i] = d.angles()[i] - o.residuals()[row + i];
+            }
+            row += d.size();
+            final EncoderRounding rounding = EncoderRounding.of(d.angles(), model);
+            any |= rounding != null;
+            roundings.add(rounding);
+        }
+        if (!any) {
+            return point;
+        }
+        final double k = problem.mechanism().gravityStiffness();
+        final FitSettings refit = settings.withLimits(Math.min(settings.maxIterations(), 20),
+                Math.min(settings.maxEvaluations(), 40));
+        final StageOutcome[] best = {null};
+        final List<List<StageSamples>> bestData = new ArrayList<>();
+        bestData.add(null);
+        final UnivariateFunction cost = scale -> {
+            final List<StageSamples> data = new ArrayList<>();
+            for (int s = 0; s < roundings.size(); s++) {
+                final EncoderRounding r = roundings.get(s);
+                data.add(point.data().get(s).withRounding(r == null ? null : r.withSigma(scale * r.sigma())));
+            }
+            final double[] from = best[0] == null ? o.full() : best[0].full();
+            final StageOutcome out = LevenbergStage.run("encoder rounding", point.layout(), from, data, k,
+                    point.stiction(), refit, control);
+            if (out.status() == FitStatus.CONVERGED && (best[0] == null || out.rss() < best[0].rss())) {
+                best[0] = out;
+                bestData.set(0, data);
+            }
+            return out.status() == FitStatus.CONVERGED ? out.rss() : Double.MAX_VALUE;
+        };
+        try {
+            new BrentOptimizer(NOISE_SCALE_ACCURACY, 1e-3).optimize(new MaxEval(NOISE_SCALE_EVALUATIONS),
+                    new UnivariateObjectiveFunction(cost), GoalType.MINIMIZE, new SearchInterval(0.3, 1.1, 0.8));
+        } catch (MathIllegalStateException e) {
+            // the evaluation limit: the best refit so far stands
+        }
+        if (best[0] == null) {
+            return point;
+        }
+        return new PointFit(point.layout(), best[0], bestData.get(0), point.stiction(), point.band(),
+                point.iterations() + best[0].iterations(), point.evaluations() + best[0].evaluations());
     }
 
     /** The full vector with the friction terms scaled (a start for the spread). */

@@ -141,20 +141,29 @@ final class JointModel implements MultivariateJacobianFunction {
             for (int k = 0; k < cols.length; k++) {
                 colScale[k] = layout.scale(layout.fullIndex(cols[k]));
             }
+            final EncoderRounding rounding = data.get(s).rounding();
+            final double[] expected = new double[2];
             for (int i = 0; i < t.length; i++, row++) {
+                double slope = 1;
                 values[row] = offset + swing.angle[i];
+                if (rounding != null) {
+                    // the expected encoder reading of the modelled angle, and the chain rule
+                    rounding.expected(values[row], expected);
+                    values[row] = expected[0];
+                    slope = expected[1];
+                }
                 if (jacobian == null) {
                     continue;
                 }
                 final double[] jr = jacobian[row];
                 for (int k = 0; k < cols.length; k++) {
-                    jr[cols[k]] = swing.sensitivity[k][i] * colScale[k];
+                    jr[cols[k]] = swing.sensitivity[k][i] * colScale[k] * slope;
                 }
                 if (releaseColumn >= 0) {
-                    jr[releaseColumn] = -swing.velocity[i] * releaseScale;
+                    jr[releaseColumn] = -swing.velocity[i] * releaseScale * slope;
                 }
                 if (offsetColumn >= 0) {
-                    jr[offsetColumn] = offsetScale;
+                    jr[offsetColumn] = offsetScale * slope;
                 }
             }
         }

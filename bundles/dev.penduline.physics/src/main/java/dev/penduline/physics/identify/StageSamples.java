@@ -3,10 +3,26 @@ package dev.penduline.physics.identify;
 /**
  * The samples of one session that a fitting stage uses: all of them, or a decimated window.
  *
- * @param times  sample times on the record's time base (s), increasing
- * @param angles measured angles in the sensor's frame (rad)
+ * @param times    sample times on the record's time base (s), increasing
+ * @param angles   measured angles in the sensor's frame (rad)
+ * @param rounding the encoder's rounding, put into the model of this session's readings; null
+ *                 when the readings are fitted as they are
  */
-record StageSamples(double[] times, double[] angles) {
+record StageSamples(double[] times, double[] angles, EncoderRounding rounding) {
+
+    StageSamples(double[] times, double[] angles) {
+        this(times, angles, null);
+    }
+
+    /** The same samples with other readings (a resampled record of the same sensor). */
+    StageSamples withAngles(double[] newAngles) {
+        return new StageSamples(times, newAngles, rounding);
+    }
+
+    /** The same samples with the encoder's rounding in their model. */
+    StageSamples withRounding(EncoderRounding r) {
+        return new StageSamples(times, angles, r);
+    }
 
     /** Every sample. */
     static StageSamples all(ReleaseSession session) {
