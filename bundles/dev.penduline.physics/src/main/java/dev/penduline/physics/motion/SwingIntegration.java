@@ -2,6 +2,7 @@ package dev.penduline.physics.motion;
 
 import java.util.ArrayList;
 import java.util.Arrays;
+import java.util.Collections;
 import java.util.List;
 
 import org.hipparchus.ode.ExpandableODE;
@@ -77,6 +78,9 @@ public final class SwingIntegration {
      * @param omega0 initial angular velocity (rad/s)
      */
     public void run(double theta0, double omega0) {
+        if (primary != null) {
+            throw new IllegalStateException("a SwingIntegration runs once; make a new one for the next run");
+        }
         final double duration = sampler.lastTime();
         equation.begin(tolerance, duration, new Reversal());
         double[] y = new double[equation.getDimension()];
@@ -94,7 +98,7 @@ public final class SwingIntegration {
             equation.move(omega0);
         }
         double t = 0;
-        if (t < duration && !equation.heldForGood()) {
+        if (duration > 0 && !equation.heldForGood()) {
             final DormandPrince853Integrator integrator = integrator(theta0, omega0, duration);
             final ExpandableODE ode = new ExpandableODE(equation);
             if (companion != null) {
@@ -190,10 +194,10 @@ public final class SwingIntegration {
      * Every instant of zero velocity, in time order: the release when it is from rest, each
      * reversal, and the final stop.
      *
-     * @return the turning points (live list of this run)
+     * @return the turning points (unmodifiable view)
      */
     public List<TurningPoint> turningPoints() {
-        return turningPoints;
+        return Collections.unmodifiableList(turningPoints);
     }
 
     /**
@@ -224,7 +228,7 @@ public final class SwingIntegration {
     }
 
     /**
-     * The equation's state at the end of the run.
+     * The equation's state at the end of the run (after {@link #run}).
      *
      * @return θ (rad), ω (rad/s), then the energy account (J) when the equation carries it
      */
@@ -233,7 +237,7 @@ public final class SwingIntegration {
     }
 
     /**
-     * The companion's state at the end of the run.
+     * The companion's state at the end of the run (after {@link #run}).
      *
      * @return its values, or null without a companion
      */
