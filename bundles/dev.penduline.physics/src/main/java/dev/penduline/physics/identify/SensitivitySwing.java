@@ -1,49 +1,39 @@
 package dev.penduline.physics.identify;
 
+import java.util.List;
 import java.util.function.BooleanSupplier;
 
-import org.hipparchus.analysis.UnivariateFunction;
-import org.hipparchus.analysis.solvers.BracketedUnivariateSolver;
-import org.hipparchus.analysis.solvers.BracketingNthOrderBrentSolver;
-import org.hipparchus.ode.ExpandableODE;
-import org.hipparchus.ode.ODEState;
-import org.hipparchus.ode.ODEStateAndDerivative;
-import org.hipparchus.ode.OrdinaryDifferentialEquation;
-import org.hipparchus.ode.SecondaryODE;
-import org.hipparchus.ode.events.Action;
-import org.hipparchus.ode.events.AdaptableInterval;
-import org.hipparchus.ode.events.ODEEventDetector;
-import org.hipparchus.ode.events.ODEEventHandler;
-import org.hipparchus.ode.nonstiff.DormandPrince853Integrator;
 import org.hipparchus.ode.sampling.ODEStateInterpolator;
 import org.hipparchus.ode.sampling.ODEStepHandler;
 
-import dev.penduline.physics.motion.ChebyshevStep;
+import dev.penduline.physics.motion.SwingCompanion;
+import dev.penduline.physics.motion.SwingEquation;
+import dev.penduline.physics.motion.SwingIntegration;
+import dev.penduline.physics.motion.SwingSampler;
+import dev.penduline.physics.motion.TurningPoint;
 
 /**
  * A release from rest integrated together with its sensitivity (variational) equations.
  *
- * <p>Primary state: the deviation x = θ − θeq and ω. Secondary state: {@code ∂x/∂p, ∂ω/∂p} for
- * each integrated parameter p (release angle, b, Tc, c, J0). With
- * {@code f = (−K sin x − b ω − s Tc − s c ω²)/J} and the half-swing sign s frozen,
- * {@code (∂x/∂p)' = ∂ω/∂p} and {@code (∂ω/∂p)' = f_x ∂x/∂p + f_ω ∂ω/∂p + ∂f/∂p}.
- * Error control acts on the primary state only, so the steps are those of a plain run.
+ * <p>The motion is the simulator's: the same {@link SwingEquation} (here in deviation
+ * coordinates x = θ − θeq), integrated by the same {@link SwingIntegration}, with the same
+ * reversal event and stick test. The sensitivities {@code ∂x/∂p, ∂ω/∂p} for each integrated
+ * parameter p (release angle, b, Tc, c, J0) ride along as its secondary equation: with
+ * {@code f = ω'} and the half-swing sign s frozen, {@code (∂x/∂p)' = ∂ω/∂p} and
+ * {@code (∂ω/∂p)' = f_x ∂x/∂p + f_ω ∂ω/∂p + ∂f/∂p}. Error control acts on the primary state
+ * only, so the steps, and x and ω themselves, are those of a plain run.
  *
  * <p>Reversals are events on ω = 0 whose time depends on p. The jump condition of trajectory
  * sensitivities across a switching event (Hiskens &amp; Pai, "Trajectory sensitivity analysis
  * of hybrid systems", IEEE Trans. Circuits and Systems I 47(2), 2000) is
  * {@code S⁺ = S⁻ + (F⁻ − F⁺) dτ/dp} with {@code dτ/dp = −S_ω⁻/ω'⁻}; since x' = ω = 0 at the
- * event only ∂ω/∂p jumps: {@code S_ω⁺ = S_ω⁻ ω'⁺/ω'⁻}. When the body sticks, F⁺ = 0 and the
- * same rule gives S_ω⁺ = 0 while ∂x/∂p freezes. The stick decision itself (|K sin x| ≤ Ts) is
- * discrete and contributes no gradient.
+ * event only ∂ω/∂p jumps: {@code S_ω⁺ = S_ω⁻ ω'⁺/ω'⁻}, with ω'⁻ and ω'⁺ from the equation. When
+ * the body sticks, ω'⁺ = 0, so S_ω⁺ = 0 while ∂x/∂p freezes. The stick decision itself
+ * (|K sin x| ≤ Ts) is discrete and contributes no gradient.
  *
  * <p>One instance per session and thread; its output buffers are reused between evaluations.
  */
-final class SensitivitySwing implements OrdinaryDifferentialEquation, ODEEventDetector,
-        ODEEventHandler {
-
-    private static final int MAX_SEGMENTS = 1_000_000;
-    private static final int MAX_ROOT_ITERATIONS = 100;
+final class SensitivitySwing {
 
     private final ParameterKind[] kinds;
     private final int count;
@@ -51,28 +41,14 @@ final class SensitivitySwing implements OrdinaryDifferentialEquation, ODEEventDe
     final double[] angle;
     final double[] velocity;
     final double[][] sensitivity;
-    private final double[] primaryDot = new double[2];
-    private final double[] secondaryDot;
-    private final ChebyshevStep polynomial;
-    private final StepRecorder recorder = new StepRecorder();
-    private final Variational variational = new Variational();
+    private final SwingSampler sampler;
+    private final Variational variational;
+    private final ODEStepHandler cancelCheck = new CancelCheck();
 
-    private double stiffness;
-    private double inertia;
-    private double viscous;
-    private double coulomb;
-    private double stiction;
-    private double drag;
+    private SwingEquation equation;
     private double tolerance;
     private BooleanSupplier cancel;
-
-    private double[] tau;
-    private int next;
-    private int end;
-    private double sign;
-    private boolean eventFired;
-    private BracketedUnivariateSolver<UnivariateFunction> solver;
-    private AdaptableInterval maxCheck;
+    private SwingIntegration last;
 
     /**
      * @param capacity largest number of samples of one run
@@ -81,24 +57,26 @@ final class SensitivitySwing implements OrdinaryDifferentialEquation, ODEEventDe
     SensitivitySwing(int capacity, ParameterKind[] kinds) {
         this.kinds = kinds.clone();
         this.count = kinds.length;
-        this.angle = new double[capacity];
-        this.velocity = new double[capacity];
-        this.sensitivity = new double[count][capacity];
-        this.secondaryDot = new double[2 * count];
-        this.polynomial = new ChebyshevStep(2 + count);
+        final int[] columns = new int[count];
+        for (int p = 0; p < count; p++) {
+            columns[p] = 2 * p;
+        }
+        this.sampler = new SwingSampler(capacity, columns);
+        this.angle = sampler.angles();
+        this.velocity = sampler.velocities();
+        this.sensitivity = new double[count][];
+        for (int p = 0; p < count; p++) {
+            sensitivity[p] = sampler.companion(p);
+        }
+        this.variational = new Variational();
     }
 
-    /** Sets the model for the next run (SI units); ts ≥ tc is the holding torque at rest. */
+    /** Sets the model for the next run (SI units); the larger of ts and tc holds the body at rest. */
     void configure(double k, double j, double b, double tc, double ts, double c, double relativeTolerance,
-            BooleanSupplier cancelCheck) {
-        this.stiffness = k;
-        this.inertia = j;
-        this.viscous = b;
-        this.coulomb = tc;
-        this.stiction = Math.max(ts, tc);
-        this.drag = c;
+            BooleanSupplier cancelCheckSupplier) {
+        this.equation = SwingEquation.release(k, j, b, tc, ts, c);
         this.tolerance = relativeTolerance;
-        this.cancel = cancelCheck;
+        this.cancel = cancelCheckSupplier;
     }
 
     /**
@@ -107,158 +85,29 @@ final class SensitivitySwing implements OrdinaryDifferentialEquation, ODEEventDe
      * samples at or before the release get the held state).
      */
     void run(double x0, double[] times, int from, int to) {
-        this.tau = times;
-        this.next = from;
-        this.end = to;
-        while (next < end && tau[next] <= 0) {
-            hold(next, x0, 1.0);
-            next++;
+        sampler.start(times, from, to);
+        final SwingIntegration integration = new SwingIntegration(equation, tolerance, variational, sampler);
+        if (cancel != null) {
+            integration.observe(cancelCheck);
         }
-        if (next >= end) {
-            return;
-        }
-        final double[] y = {x0, 0};
-        final double[] s = new double[2 * count];
-        for (int p = 0; p < count; p++) {
-            s[2 * p] = kinds[p] == ParameterKind.RELEASE_ANGLE ? 1 : 0;
-        }
-        final double net = -stiffness * Math.sin(x0);
-        if (Math.abs(net) <= stiction) {
-            fillStuck(x0, s);
-            return;
-        }
-        sign = Math.signum(net);
-        final double wn = Math.sqrt(stiffness / inertia);
-        final double period = 2 * Math.PI / wn;
-        final double tEnd = tau[end - 1];
-        final double threshold = Math.max(1e-2 * tolerance * period, 4 * Math.ulp(tEnd + period));
-        solver = new BracketingNthOrderBrentSolver(0, threshold, 0, 5);
-        maxCheck = AdaptableInterval.of(period / 8);
-        final double amplitude = Math.max(Math.abs(x0), 1e-6);
-        final DormandPrince853Integrator integrator = new DormandPrince853Integrator(0, Math.max(tEnd, period),
-                new double[] {tolerance * amplitude, tolerance * amplitude * wn},
-                new double[] {tolerance, tolerance});
-        integrator.addStepHandler(recorder);
-        integrator.addEventDetector(this);
-        final ExpandableODE ode = new ExpandableODE(this);
-        ode.addSecondaryEquations(variational);
-        double t = 0;
-        double[] state = y;
-        double[] sens = s;
-        int segments = 0;
-        while (t < tEnd) {
-            eventFired = false;
-            final double start = t;
-            final ODEStateAndDerivative last = integrator.integrate(ode,
-                    new ODEState(t, state, new double[][] {sens}), tEnd);
-            t = last.getTime();
-            state = last.getPrimaryState();
-            sens = last.getSecondaryState(1);
-            if (!eventFired) {
-                break;
-            }
-            final double x = state[0];
-            state[1] = 0;
-            final double before = (-stiffness * Math.sin(x) - sign * coulomb) / inertia;
-            final double holding = -stiffness * Math.sin(x);
-            if (t - start <= threshold || Math.abs(holding) <= stiction) {
-                // stuck: ∂ω/∂p jumps to zero, ∂x/∂p freezes
-                fillStuck(x, sens);
-                return;
-            }
-            sign = Math.signum(holding);
-            final double after = (holding - sign * coulomb) / inertia;
-            final double ratio = after / before;
-            for (int p = 0; p < count; p++) {
-                sens[2 * p + 1] *= ratio;
-            }
-            if (++segments > MAX_SEGMENTS) {
-                throw new IllegalStateException("more than " + MAX_SEGMENTS + " reversals before t = " + t + " s");
-            }
-        }
-        // samples exactly at the end of the last step
-        while (next < end) {
-            record(next, state[0], state[1], sens);
-            next++;
-        }
+        integration.run(x0, 0);
+        last = integration;
     }
 
-    private void hold(int i, double x, double thetaSensitivity) {
-        angle[i] = x;
-        velocity[i] = 0;
-        for (int p = 0; p < count; p++) {
-            sensitivity[p][i] = kinds[p] == ParameterKind.RELEASE_ANGLE ? thetaSensitivity : 0;
-        }
+    /** The turning points of the last run (times since release, deviations). */
+    List<TurningPoint> turningPoints() {
+        return last.turningPoints();
     }
 
-    private void fillStuck(double x, double[] sens) {
-        for (; next < end; next++) {
-            angle[next] = x;
-            velocity[next] = 0;
-            for (int p = 0; p < count; p++) {
-                sensitivity[p][next] = sens[2 * p];
-            }
-        }
-    }
-
-    private void record(int i, double x, double w, double[] sens) {
-        angle[i] = x;
-        velocity[i] = w;
-        for (int p = 0; p < count; p++) {
-            sensitivity[p][i] = sens[2 * p];
-        }
-    }
-
-    // ---- equations ------------------------------------------------------------------------------
-
-    @Override
-    public int getDimension() {
-        return 2;
-    }
-
-    @Override
-    public double[] computeDerivatives(double t, double[] y) {
-        final double w = y[1];
-        primaryDot[0] = w;
-        primaryDot[1] = (-stiffness * Math.sin(y[0]) - viscous * w - sign * (coulomb + drag * w * w)) / inertia;
-        return primaryDot;
-    }
-
-    // ---- the reversal event --------------------------------------------------------------------
-
-    @Override
-    public double g(ODEStateAndDerivative state) {
-        return sign * state.getPrimaryState()[1];
-    }
-
-    @Override
-    public Action eventOccurred(ODEStateAndDerivative state, ODEEventDetector detector, boolean increasing) {
-        eventFired = true;
-        return Action.STOP;
-    }
-
-    @Override
-    public AdaptableInterval getMaxCheckInterval() {
-        return maxCheck;
-    }
-
-    @Override
-    public int getMaxIterationCount() {
-        return MAX_ROOT_ITERATIONS;
-    }
-
-    @Override
-    public BracketedUnivariateSolver<UnivariateFunction> getSolver() {
-        return solver;
-    }
-
-    @Override
-    public ODEEventHandler getHandler() {
-        return this;
+    /** When the last run came to rest (s since release), or NaN when it moves at the end. */
+    double stopTime() {
+        return last.stopTime();
     }
 
     /** The variational equations, carried as the secondary state. */
-    private final class Variational implements SecondaryODE {
+    private final class Variational implements SwingCompanion {
+
+        private final double[] secondaryDot = new double[2 * count];
 
         @Override
         public int getDimension() {
@@ -266,71 +115,51 @@ final class SensitivitySwing implements OrdinaryDifferentialEquation, ODEEventDe
         }
 
         @Override
+        public double[] initialState() {
+            final double[] s = new double[2 * count];
+            for (int p = 0; p < count; p++) {
+                s[2 * p] = kinds[p] == ParameterKind.RELEASE_ANGLE ? 1 : 0;
+            }
+            return s;
+        }
+
+        @Override
         public double[] computeDerivatives(double t, double[] primary, double[] primaryDerivative,
                 double[] secondary) {
-            final double x = primary[0];
+            final SwingEquation e = equation;
             final double w = primary[1];
-            final double inverse = 1 / inertia;
-            final double fx = -stiffness * Math.cos(x) * inverse;
-            final double fw = -(viscous + 2 * sign * drag * w) * inverse;
+            final double fx = e.accelerationPerAngle(primary[0]);
+            final double fw = e.accelerationPerVelocity(w);
             for (int p = 0; p < count; p++) {
-                final double sx = secondary[2 * p];
-                final double sw = secondary[2 * p + 1];
                 final double direct = switch (kinds[p]) {
-                    case VISCOUS -> -w * inverse;
-                    case COULOMB -> -sign * inverse;
-                    case DRAG -> -sign * w * w * inverse;
-                    case INERTIA -> -primaryDerivative[1] * inverse;
+                    case VISCOUS -> e.accelerationPerViscous(w);
+                    case COULOMB -> e.accelerationPerCoulomb();
+                    case DRAG -> e.accelerationPerDrag(w);
+                    case INERTIA -> e.accelerationPerInertia(primaryDerivative[1]);
                     default -> 0;
                 };
-                secondaryDot[2 * p] = sw;
-                secondaryDot[2 * p + 1] = fx * sx + fw * sw + direct;
+                secondaryDot[2 * p] = secondary[2 * p + 1];
+                secondaryDot[2 * p + 1] = fx * secondary[2 * p] + fw * secondary[2 * p + 1] + direct;
             }
             return secondaryDot;
         }
+
+        @Override
+        public void reversal(double[] state, double accelerationBefore, double accelerationAfter) {
+            final double ratio = accelerationAfter == 0 ? 0 : accelerationAfter / accelerationBefore;
+            for (int p = 0; p < count; p++) {
+                state[2 * p + 1] *= ratio;
+            }
+        }
     }
 
-    /** Fills the samples that fall in each accepted step, and checks for cancellation. */
-    private final class StepRecorder implements ODEStepHandler {
+    /** Ends the run at the next accepted step once the fit is cancelled. */
+    private final class CancelCheck implements ODEStepHandler {
 
         @Override
         public void handleStep(ODEStateInterpolator interpolator) {
-            if (cancel != null && cancel.getAsBoolean()) {
+            if (cancel.getAsBoolean()) {
                 throw new FitCancelledException();
-            }
-            final double tCurrent = interpolator.getCurrentState().getTime();
-            int last = next;
-            while (last < end && tau[last] <= tCurrent) {
-                last++;
-            }
-            final double tPrevious = interpolator.getPreviousState().getTime();
-            if (last - next > ChebyshevStep.NODES && tCurrent > tPrevious) {
-                final ChebyshevStep poly = polynomial;
-                poly.begin(tPrevious, tCurrent);
-                for (int j = 0; j < ChebyshevStep.NODES; j++) {
-                    final ODEStateAndDerivative s = interpolator.getInterpolatedState(poly.nodeTime(j));
-                    final double[] y = s.getPrimaryState();
-                    final double[] z = s.getSecondaryState(1);
-                    poly.set(0, j, y[0]);
-                    poly.set(1, j, y[1]);
-                    for (int p = 0; p < count; p++) {
-                        poly.set(2 + p, j, z[2 * p]);
-                    }
-                }
-                poly.transform();
-                for (; next < last; next++) {
-                    final double t = tau[next];
-                    angle[next] = poly.value(0, t);
-                    velocity[next] = poly.value(1, t);
-                    for (int p = 0; p < count; p++) {
-                        sensitivity[p][next] = poly.value(2 + p, t);
-                    }
-                }
-            } else {
-                for (; next < last; next++) {
-                    final ODEStateAndDerivative s = interpolator.getInterpolatedState(tau[next]);
-                    record(next, s.getPrimaryState()[0], s.getPrimaryState()[1], s.getSecondaryState(1));
-                }
             }
         }
     }

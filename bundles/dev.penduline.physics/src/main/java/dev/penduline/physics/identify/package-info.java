@@ -36,7 +36,11 @@
  *
  * <h2>The Jacobian: sensitivity equations</h2>
  * The derivatives of the trajectory are integrated with it (variational equations, error
- * control on θ and ω only, see {@code SensitivitySwing}). Compared with finite differences
+ * control on θ and ω only, see {@code SensitivitySwing}) as a secondary equation of the
+ * simulator's integration of the simulator's equation
+ * ({@link dev.penduline.physics.motion.SwingIntegration},
+ * {@link dev.penduline.physics.motion.SwingEquation}): the fit and the simulator share one
+ * model and agree to the integration tolerance. Compared with finite differences
  * they cost one augmented run instead of 2p runs, and they are as accurate as the trajectory
  * rather than limited by a step-size compromise — which matters because the friction sign
  * switches make difference quotients noisy. Each reversal is an event whose time depends on

@@ -8,11 +8,11 @@ package dev.penduline.physics.motion;
  * dense output of DOP853), so eight Chebyshev nodes reproduce it up to rounding. The
  * integrator's interpolator is asked eight times per step; each sample then costs one
  * Clenshaw recurrence per component instead of an interpolation of the whole augmented state
- * (which allocates). One instance per integration run; buffers are reused. Shared by the
- * simulator (angle and velocity) and the identification's sensitivity integration (the state
- * and its sensitivities).
+ * (which allocates). One instance per {@link SwingSampler}; buffers are reused. The sampler
+ * serves both the simulator (angle and velocity) and the identification's sensitivity
+ * integration (the state and its sensitivities).
  */
-public final class ChebyshevStep {
+final class ChebyshevStep {
 
     /** Number of nodes: degree 7 + 1. */
     public static final int NODES = 8;

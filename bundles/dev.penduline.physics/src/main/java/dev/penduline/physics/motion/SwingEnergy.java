@@ -6,8 +6,8 @@ package dev.penduline.physics.motion;
  * <p>Potential energy is measured from the hanging equilibrium:
  * {@code m g cos α Lc (1 − cos(θ − θeq))}, or {@code ½ m g cos α Lc (θ − θeq)²} with
  * linearised gravity. The balance {@code initial + applied = kinetic + potential + dissipated}
- * holds to the integrator's tolerance, because every dissipated term is integrated as part of
- * the state.
+ * holds to the integrator's tolerance, because every dissipated term is integrated, and
+ * error-controlled, as part of the state (see {@link SwingEquation}).
  *
  * @param initial   kinetic plus potential energy at release (J)
  * @param kinetic   kinetic energy ½ J0 ω² at the end of the run (J)

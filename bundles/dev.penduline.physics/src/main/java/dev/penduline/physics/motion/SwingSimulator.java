@@ -13,7 +13,11 @@ import dev.penduline.physics.MechanismProperties;
  * {@code J0 θ'' = − m g cos α Lc sin(θ − θeq) − T_friction(θ, ω) + T_applied(t, θ, ω)}.
  * Each half-swing is integrated with a constant friction sign; an event on {@code ω = 0}
  * stops the integration, and the stick test decides whether the body rests (net torque at
- * rest within the static torque) or swings back. See the package documentation.
+ * rest within the static torque) or swings back. The equation, its event and the stick test
+ * are {@link SwingEquation}'s (with the energy integrals in its state), integrated by
+ * {@link SwingIntegration}; the identification integrates the same equation with its
+ * sensitivities.
+ * See the package documentation.
  *
  * <p>The simulator is immutable and thread-safe: the {@code withX} methods return cheap copies
  * and every {@code simulate} call keeps its own state, so one instance may serve many parallel
@@ -225,6 +229,15 @@ public final class SwingSimulator {
         if (!Double.isFinite(omega0)) {
             throw new IllegalArgumentException("omega0 must be a finite number, got " + omega0 + " rad/s");
         }
-        return new SwingIntegration(model, tolerance, theta0, omega0, times).run(theta0, omega0);
+        final SwingSampler sampler = new SwingSampler(times.length);
+        sampler.start(times, 0, times.length);
+        final SwingIntegration integration = new SwingIntegration(new SwingEquation(model, true), tolerance,
+                null, sampler);
+        integration.run(theta0, omega0);
+        final double[] y = integration.finalState();
+        final SwingEnergy energy = new SwingEnergy(model.kineticEnergy(omega0) + model.potentialEnergy(theta0),
+                model.kineticEnergy(y[1]), model.potentialEnergy(y[0]), y[2], y[3], y[4], y[5]);
+        return new SwingRun(times, sampler.angles(), sampler.velocities(), integration.turningPoints(),
+                integration.stopped(), integration.stopTime(), integration.restAngle(), energy, model.smoothed());
     }
 }

@@ -17,6 +17,14 @@
  *
  * <h2>The equation and its discontinuity</h2>
  * {@code J0 θ'' = − m g cos α Lc sin(θ − θeq) − b ω − Tc sgn ω − c ω|ω| + T_applied}.
+ * It is defined once, in {@link dev.penduline.physics.motion.SwingEquation}: the right-hand side
+ * of a half-swing, the reversal event and its settings, the stick test, and the accelerations
+ * and partial derivatives that the identification's sensitivities need.
+ * {@link dev.penduline.physics.motion.SwingIntegration} integrates it half-swing by half-swing
+ * for both the simulator and the identification; a
+ * {@link dev.penduline.physics.motion.SwingCompanion} (the identification's sensitivities)
+ * rides along as a secondary equation over the same steps, outside the error control, and a
+ * {@link dev.penduline.physics.motion.SwingSampler} records the samples.
  * The Coulomb term jumps by {@code 2 Tc} when ω changes sign. An adaptive integrator that
  * steps across the jump sees a right-hand side that is not smooth: its error estimate fails,
  * it shrinks the step again and again, and the reversal time comes out wrong by up to a
