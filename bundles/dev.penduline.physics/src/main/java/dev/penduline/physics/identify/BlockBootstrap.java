@@ -15,13 +15,19 @@ import java.util.stream.IntStream;
  * random are laid end to end and added back to the fitted trajectory, and the fit is repeated
  * from the optimum. The spread of the refits is the resampling σ. Block length: the larger of
  * n^(1/3) (the order that is optimal for variance estimation, Hall, Horowitz &amp; Jing,
- * Biometrika 82, 1995, from memory) and three correlation times {@code (1 + ρ1)/(1 − ρ1)} of
- * the residuals, at most n/10 ("common practice").
+ * Biometrika 82, 1995, from memory) and ten correlation times {@code (1 + ρ1)/(1 − ρ1)} of
+ * the residuals, at most n/5. Blocks cut the correlation at their joints, so the variance is
+ * underestimated by about one correlation time over the block length: at three correlation
+ * times that was a σ some 15 % small on AR(1) noise of ρ = 0.8 (measured by the coverage test),
+ * at ten it is about 5 %.
  *
  * <p>Replicate r draws from its own generator seeded by (seed, r), so the answer does not
  * depend on how many threads ran the refits or in which order.
  */
 final class BlockBootstrap {
+
+    /** Block length in correlation times of the residuals. */
+    private static final double CORRELATION_TIMES = 10;
 
     private BlockBootstrap() {
     }
@@ -72,8 +78,8 @@ final class BlockBootstrap {
         }
         mean /= n;
         final double rho = Math.max(0, Math.min(0.999, RecordSignals.lag1(residuals, from, to)));
-        final int length = (int) Math.max(1, Math.min(n / 10.0,
-                Math.ceil(Math.max(Math.cbrt(n), 3 * (1 + rho) / (1 - rho)))));
+        final int length = (int) Math.max(1, Math.min(n / 5.0,
+                Math.ceil(Math.max(Math.cbrt(n), CORRELATION_TIMES * (1 + rho) / (1 - rho)))));
         final double[] y = d.angles().clone();
         int i = 0;
         while (i < n) {

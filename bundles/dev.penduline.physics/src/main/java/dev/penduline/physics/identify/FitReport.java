@@ -40,7 +40,7 @@ final class FitReport {
         final ParameterLayout layout = point.layout();
         final double[] full = o.full();
         final int n = problem.samples();
-        final Uncertainty u = Uncertainty.of(o.jacobian(), layout, full, o.rss(), n);
+        final Uncertainty u = Uncertainty.of(o.jacobian(), layout, full, o.rss(), n, o.residuals());
         final List<FitWarning> warnings = new ArrayList<>();
         final FrictionTorques friction = friction(full, point.stiction());
         final List<ParameterEstimate> physical = new ArrayList<>();

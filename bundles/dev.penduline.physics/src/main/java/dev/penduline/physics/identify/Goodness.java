@@ -21,7 +21,10 @@ import java.util.Locale;
  * @param sessions      the check of each record, in the problem's order
  * @param rms           residual rms over all records (rad)
  * @param floor         noise floor over all records, the sample-weighted rms of the floors (rad)
- * @param ratio         the largest per-record ratio of residual rms to noise floor
+ * @param ratio         the largest per-record ratio of residual rms to noise floor, each divided by
+ *                      {@code 1 + 3 u} with u the floor's relative standard error
+ *                      ({@link NoiseFloor.Estimate#relativeError()}), so that a roughly known floor
+ *                      is not taken for a misfit
  * @param lag1          lag-1 autocorrelation of all residuals
  * @param limit         the ratio above which the model is said not to describe a record
  * @param passed        whether every record's ratio is within the limit
@@ -39,7 +42,7 @@ public record Goodness(List<SessionGoodness> sessions, double rms, double floor,
      * @param name   the record
      * @param rms    its residual rms (rad)
      * @param noise  its noise floor
-     * @param ratio  rms / noise floor
+     * @param ratio  rms / noise floor / (1 + 3 u), u the floor's relative standard error
      * @param lag1   lag-1 autocorrelation of its residuals
      */
     public record SessionGoodness(String name, double rms, NoiseFloor.Estimate noise, double ratio, double lag1) {
@@ -79,7 +82,9 @@ public record Goodness(List<SessionGoodness> sessions, double rms, double floor,
                 sum += rss;
             }
             final double rms = Math.sqrt(rss / size);
-            final double ratio = rms / noise.sigma();
+            // the floor's own uncertainty widens the limit: a short or correlated still segment
+            // measures the noise only roughly
+            final double ratio = rms / noise.sigma() / (1 + 3 * noise.relativeError());
             if (ratio > worst || Double.isNaN(ratio) && residuals != null) {
                 worst = ratio;
             }
@@ -106,8 +111,9 @@ public record Goodness(List<SessionGoodness> sessions, double rms, double floor,
         for (SessionGoodness s : sessions) {
             if (s.ratio() > limit || Double.isNaN(s.ratio())) {
                 lines.add(String.format(Locale.ROOT, "%s: residual rms %.3g° is %.3g times its noise floor %.3g°"
-                        + " (%s), residual lag-1 correlation %.2f", s.name(), Math.toDegrees(s.rms()), s.ratio(),
-                        Math.toDegrees(s.noise().sigma()), s.noise().method(), s.lag1()));
+                        + " (%s, known to ±%.0f %%), residual lag-1 correlation %.2f", s.name(),
+                        Math.toDegrees(s.rms()), s.rms() / s.noise().sigma(), Math.toDegrees(s.noise().sigma()),
+                        s.noise().method(), 100 * s.noise().relativeError(), s.lag1()));
             }
         }
         return lines;

@@ -44,9 +44,21 @@ public final class NoiseFloor {
      * @param quantum     encoder step found in the record (rad), 0 when not quantised
      * @param stillLag1   lag-1 autocorrelation of the still segment (the sensor's own correlation), NaN when short
      * @param method      which look set the floor: "still segment", "high-pass" or "encoder step"
+     * @param samples     effective number of independent samples behind the floor,
+     *                    {@code n (1 − ρ1)/(1 + ρ1)} for the still segment
      */
     public record Estimate(double sigma, double still, double highPass, double quantum, double stillLag1,
-            String method) {
+            String method, double samples) {
+
+        /**
+         * The relative standard error of the floor, {@code 1/√(2 n_eff)} (the standard error of a
+         * standard deviation from n_eff independent normal samples).
+         *
+         * @return the relative error (dimensionless)
+         */
+        public double relativeError() {
+            return 1 / Math.sqrt(2 * Math.max(1, samples));
+        }
     }
 
     /**
@@ -89,7 +101,12 @@ public final class NoiseFloor {
             sigma = q / Math.sqrt(12);
             method = "encoder step";
         }
-        return new Estimate(sigma, stillSigma, high, q, stillLag1, method);
+        double effective = y.length;
+        if (method.equals("still segment")) {
+            final double rho = Math.max(0, Math.min(0.99, stillLag1));
+            effective = still * (1 - rho) / (1 + rho);
+        }
+        return new Estimate(sigma, stillSigma, high, q, stillLag1, method, effective);
     }
 
     /** Noise standard deviation from the MAD of fourth differences (rad); NaN for short records. */

@@ -35,6 +35,27 @@ record Uncertainty(double[] sigma, List<String> names, int[] indices, double[][]
     private static final double RANK_TOLERANCE = 1e-12;
 
     static Uncertainty of(RealMatrix jacobian, ParameterLayout layout, double[] full, double rss, int rows) {
+        return of(jacobian, layout, full, rss, rows, null);
+    }
+
+    /**
+     * The standard errors, in the sandwich form when the residuals are given.
+     *
+     * <p>The classical {@code σ²(JᵀJ)⁻¹} holds for independent residuals of equal variance.
+     * Residuals of a swing record are often neither: a filtering sensor correlates them, and an
+     * encoder's rounding makes their variance depend on where the angle sits between counts.
+     * The sandwich {@code (JᵀJ)⁻¹ M (JᵀJ)⁻¹} with M the covariance of the score sums
+     * {@code Σ J_iᵀ r_i} allows for both (Huber 1967; White, Econometrica 48, 1980; for
+     * correlation Newey &amp; West, Econometrica 55, 1987). M is estimated by batch means: the
+     * score summed over consecutive blocks of ten correlation times of the residuals
+     * ({@code (1 + ρ1)/(1 − ρ1)}), at least one sample (then it is White's estimator), and the
+     * outer products of the block sums added up; blocks cut the correlation at their joints, so
+     * the bias is about one correlation time in ten. Scaled by n/(n − p), as the classical form.
+     *
+     * @param residuals measured − model (rad), or null for the classical form
+     */
+    static Uncertainty of(RealMatrix jacobian, ParameterLayout layout, double[] full, double rss, int rows,
+            double[] residuals) {
         final double[] sigma = new double[layout.size()];
         Arrays.fill(sigma, Double.NaN);
         final List<Integer> active = new ArrayList<>();
@@ -81,8 +102,12 @@ record Uncertainty(double[] sigma, List<String> names, int[] indices, double[][]
         final double[] singular = svd.getSingularValues();
         // the normal matrix squares the Jacobian's singular values
         deficient |= singular[q - 1] < RANK_TOLERANCE * singular[0];
-        final RealMatrix inverse = svd.getSolver().getInverse();
-        final double variance = rss / dof;
+        RealMatrix inverse = svd.getSolver().getInverse();
+        double variance = rss / dof;
+        if (residuals != null && residuals.length == n) {
+            inverse = sandwich(inverse, jacobian, active, norms, residuals).scalarMultiply((double) n / dof);
+            variance = 1;
+        }
         final double[][] correlation = new double[q][q];
         final List<String> names = new ArrayList<>();
         final int[] indices = new int[q];
@@ -97,5 +122,38 @@ record Uncertainty(double[] sigma, List<String> names, int[] indices, double[][]
             }
         }
         return new Uncertainty(sigma, List.copyOf(names), indices, correlation, deficient);
+    }
+
+    /** Block length of the batch means, in correlation times of the residuals. */
+    private static final double CORRELATION_TIMES = 10;
+
+    /** A⁻¹ M A⁻¹ on the equilibrated active columns, M from batch means of the score. */
+    private static RealMatrix sandwich(RealMatrix inverse, RealMatrix jacobian, List<Integer> active, double[] norms,
+            double[] residuals) {
+        final int q = active.size();
+        final int n = residuals.length;
+        final double rho = Math.max(0, Math.min(0.99, RecordSignals.lag1(residuals, 0, n)));
+        final int block = (int) Math.max(1, Math.min(n / 20.0, Math.ceil(CORRELATION_TIMES * (1 + rho) / (1 - rho))));
+        final double[][] meat = new double[q][q];
+        final double[] sum = new double[q];
+        for (int start = 0; start < n; start += block) {
+            Arrays.fill(sum, 0);
+            for (int r = start; r < Math.min(n, start + block); r++) {
+                for (int a = 0; a < q; a++) {
+                    sum[a] += jacobian.getEntry(r, active.get(a)) / norms[a] * residuals[r];
+                }
+            }
+            for (int a = 0; a < q; a++) {
+                for (int b = 0; b <= a; b++) {
+                    meat[a][b] += sum[a] * sum[b];
+                }
+            }
+        }
+        for (int a = 0; a < q; a++) {
+            for (int b = 0; b < a; b++) {
+                meat[b][a] = meat[a][b];
+            }
+        }
+        return inverse.multiply(MatrixUtils.createRealMatrix(meat)).multiply(inverse);
     }
 }
