@@ -26,11 +26,14 @@ package dev.penduline.physics.swing;
  *                              when not stopped or when the mechanism is unknown
  * @param stictionUpperBound    {@code K |sin x_prev|} (N·m); NaN when not stopped or when the
  *                              mechanism is unknown
+ * @param stictionResolution    {@code K |sin 2σ|}, σ the rest offset's uncertainty: the least
+ *                              static torque a rest could show against that uncertainty (N·m);
+ *                              NaN when not stopped, the mechanism or σ unknown
  * @param note                  a sentence for the report
  */
 public record StopInfo(boolean stopped, double time, double timeUncertainty, double restAngle, double restOffset,
         double restOffsetUncertainty, double previousOffset, double stictionLowerBound, double stictionUpperBound,
-        String note) {
+        double stictionResolution, String note) {
 
     /**
      * A record that ends still moving.
@@ -39,7 +42,7 @@ public record StopInfo(boolean stopped, double time, double timeUncertainty, dou
      */
     static StopInfo moving() {
         final double nan = Double.NaN;
-        return new StopInfo(false, nan, nan, nan, nan, nan, nan, nan, nan,
-                "the body is still moving at the end of the record");
+        return new StopInfo(false, nan, nan, nan, nan, nan, nan, nan, nan, nan,
+                "the body is still moving at the end of the record, or still for less than a period");
     }
 }

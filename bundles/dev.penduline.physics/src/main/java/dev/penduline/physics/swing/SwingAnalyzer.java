@@ -223,33 +223,35 @@ public final class SwingAnalyzer {
         final double x = s.level() - offset.value();
         final double sigma = Math.hypot(offset.uncertainty(), s.levelUncertainty());
         final double previous = s.previousAngle() - offset.value();
+        final double k = mechanism == null ? Double.NaN : mechanism.gravityStiffness();
+        double lower = Double.NaN;
+        double upper = Double.NaN;
+        double resolution = Double.NaN;
         String note = "at rest from the last reversal at " + fmt(s.time()) + " s, " + fmt(x) + " rad (± " + fmt(sigma)
                 + " rad) from the equilibrium";
         if (offset.method() == ZeroOffset.Method.SETTLED_TAIL) {
-            return new StopInfo(true, s.time(), s.timeUncertainty(), s.level(), x, sigma, previous, Double.NaN,
-                    Double.NaN, note + "; the equilibrium was read from this rest, so the stop cannot bound stiction");
+            note += "; the equilibrium was read from this rest, so the stop cannot bound stiction";
+        } else if (!(k > 0)) {
+            note += "; give the mechanism for the band of static friction the stop allows";
+        } else {
+            upper = k * Math.abs(Math.sin(previous));
+            final String above = "; it moved on from the reversal before, " + fmt(previous)
+                    + " rad out, so stiction is below K|sin x_prev| = " + fmt(upper) + " N·m";
+            if (!Double.isFinite(sigma)) {
+                note += "; the equilibrium's uncertainty is not known, so no lower end is given" + above;
+            } else {
+                resolution = k * Math.sin(Math.min(0.5 * Math.PI, 2 * sigma));
+                if (Math.abs(x) > 2 * sigma) {
+                    lower = k * Math.abs(Math.sin(x));
+                    note += ": held there, so stiction is at least K|sin x| = " + fmt(lower) + " N·m" + above;
+                } else {
+                    note += ", within twice its uncertainty: the stop shows no evidence of stiction above what that"
+                            + " uncertainty allows (K|sin 2σ| = " + fmt(resolution) + " N·m)" + above;
+                }
+            }
         }
-        if (mechanism == null || !(mechanism.gravityStiffness() > 0)) {
-            return new StopInfo(true, s.time(), s.timeUncertainty(), s.level(), x, sigma, previous, Double.NaN,
-                    Double.NaN, note + "; give the mechanism for the band of static friction the stop allows");
-        }
-        final double k = mechanism.gravityStiffness();
-        final double upper = k * Math.abs(Math.sin(previous));
-        final String above = "; it moved on from the reversal before, " + fmt(previous) + " rad out, so stiction is below"
-                + " K|sin x_prev| = " + fmt(upper) + " N·m";
-        if (!Double.isFinite(sigma)) {
-            return new StopInfo(true, s.time(), s.timeUncertainty(), s.level(), x, sigma, previous, Double.NaN, upper,
-                    note + "; the equilibrium's uncertainty is not known, so no lower end is given" + above);
-        }
-        if (!(Math.abs(x) > 2 * sigma)) {
-            final double allowed = k * Math.sin(Math.min(0.5 * Math.PI, 2 * sigma));
-            return new StopInfo(true, s.time(), s.timeUncertainty(), s.level(), x, sigma, previous, Double.NaN, upper,
-                    note + ", within twice its uncertainty: the stop shows no evidence of stiction above what that"
-                            + " uncertainty allows (K|sin 2σ| = " + fmt(allowed) + " N·m)" + above);
-        }
-        final double lower = k * Math.abs(Math.sin(x));
         return new StopInfo(true, s.time(), s.timeUncertainty(), s.level(), x, sigma, previous, lower, upper,
-                note + ": held there, so stiction is at least K|sin x| = " + fmt(lower) + " N·m" + above);
+                resolution, note);
     }
 
     private static void check(double[] t, double[] theta) {
