@@ -9,8 +9,9 @@ import dev.penduline.records.swing.SwingRecord;
 
 /**
  * Analyses one swing record: release, zero offset, turning points, cycles, decay envelopes,
- * the decrement regression, a first verdict on the dominant loss and, when the mechanism is
- * known, first friction estimates. The use case behind {@code penduline analyze}.
+ * the decrement regression, a first look at the dominant loss (the fit decides), the stop and,
+ * when the mechanism is known, first friction estimates and the band of static friction the stop
+ * allows. The use case behind {@code penduline analyze} and the Swing Chart.
  */
 public final class SwingSessionAnalysis {
 

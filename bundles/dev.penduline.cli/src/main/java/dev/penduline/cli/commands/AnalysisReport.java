@@ -17,7 +17,7 @@ import dev.penduline.records.swing.SwingRecord;
 import dev.penduline.services.MechanismSource;
 import dev.penduline.services.present.Figures;
 
-/** The readable report of {@code penduline analyze}: the verdict first, then the evidence. */
+/** The readable report of {@code penduline analyze}: the first look from the decay, then the evidence. */
 final class AnalysisReport {
 
     private final SwingRecord record;
@@ -36,8 +36,8 @@ final class AnalysisReport {
         out.printf(Locale.ROOT, "  %d samples at %s Hz; SHA-256 %s%n", record.size(),
                 Figures.significant(AnalyzeCommand.sampleRate(record.times())), record.sha256().substring(0, 16) + "…");
         out.println();
-        out.printf(Locale.ROOT, "Verdict: %s (Coulomb %.0f %%, viscous %.0f %%, drag %.0f %% of the mean decrement)%n",
-                verdictText(v), 100 * v.coulombShare(), 100 * v.viscousShare(), 100 * v.dragShare());
+        out.printf(Locale.ROOT, "%s: %s (Coulomb %.0f %%, viscous %.0f %%, drag %.0f %% of the mean decrement)%n",
+                LossVerdict.HEADING, v.reading(), 100 * v.coulombShare(), 100 * v.viscousShare(), 100 * v.dragShare());
         for (String e : v.evidence()) {
             out.println("  - " + e);
         }
@@ -47,14 +47,7 @@ final class AnalysisReport {
         out.printf(Locale.ROOT, "Offset    the sensor reads %s° at the hanging equilibrium (%s)%n",
                 Figures.measured(Unit.DEGREE.fromSi(s.offset().value()), Unit.DEGREE.fromSi(s.offset().uncertainty())),
                 s.offset().method().name().toLowerCase(Locale.ROOT).replace('_', ' '));
-        StopInfo stop = s.stop();
-        if (stop.stopped()) {
-            out.printf(Locale.ROOT, "Stop      at rest from %s s, %s° from the equilibrium: stiction at least %s N·m%n",
-                    Figures.significant(stop.time()), deg(stop.restOffset()),
-                    Figures.significant(stop.stictionLowerBound()));
-        } else {
-            out.println("Stop      still swinging at the end of the record");
-        }
+        printStop(out);
         out.println();
         printCycles(out);
         out.println();
@@ -87,6 +80,31 @@ final class AnalysisReport {
         out.println(Caution.TEXT);
     }
 
+    private void printStop(PrintWriter out) {
+        StopInfo stop = s.stop();
+        if (!stop.stopped()) {
+            out.println("Stop      still swinging at the end of the record (or still for less than a period)");
+            return;
+        }
+        out.printf(Locale.ROOT, "Stop      at rest from the last reversal at %s s (± %s s), %s° (± %s°) from the equilibrium%n",
+                Figures.significant(stop.time()), Figures.significant(stop.timeUncertainty()), deg(stop.restOffset()),
+                deg(stop.restOffsetUncertainty()));
+        boolean lower = Double.isFinite(stop.stictionLowerBound());
+        boolean upper = Double.isFinite(stop.stictionUpperBound());
+        if (lower && upper) {
+            out.printf(Locale.ROOT, "          stiction between %s N·m (held at rest) and %s N·m (moved on from the"
+                    + " reversal before, %s° out)%n", Figures.significant(stop.stictionLowerBound()),
+                    Figures.significant(stop.stictionUpperBound()), deg(stop.previousOffset()));
+        } else if (upper && Double.isFinite(stop.stictionResolution())) {
+            out.printf(Locale.ROOT, "          within twice its uncertainty of the equilibrium: the stop shows no evidence of"
+                    + " stiction above what that allows (< K|sin 2σ| = %s N·m); below %s N·m (moved on from the"
+                    + " reversal before, %s° out)%n", Figures.significant(stop.stictionResolution()),
+                    Figures.significant(stop.stictionUpperBound()), deg(stop.previousOffset()));
+        } else {
+            out.println("          " + stop.note());
+        }
+    }
+
     private void printCycles(PrintWriter out) {
         List<SwingCycle> cycles = s.cycles();
         out.printf("Cycles (%d):%n", cycles.size());
@@ -108,16 +126,6 @@ final class AnalysisReport {
         out.printf(Locale.ROOT, "  viscous   b  = %s N·m·s/rad%n", Figures.measured(e.viscous(), e.viscousError()));
         out.printf(Locale.ROOT, "  Coulomb   Tc = %s N·m%n", Figures.measured(e.coulomb(), e.coulombError()));
         out.printf(Locale.ROOT, "  drag      c  = %s N·m·s²/rad²%n", Figures.measured(e.drag(), e.dragError()));
-    }
-
-    private static String verdictText(LossVerdict v) {
-        return switch (v.kind()) {
-            case COULOMB -> "dry (Coulomb) friction dominates";
-            case VISCOUS -> "viscous damping dominates";
-            case DRAG -> "air drag dominates";
-            case MIXED -> "mixed losses, led by " + v.leading().name().toLowerCase(Locale.ROOT);
-            default -> "undetermined (too few swings to tell)";
-        };
     }
 
     private static String deg(double rad) {

@@ -29,7 +29,10 @@ import dev.penduline.services.MechanismSource;
 import dev.penduline.services.SessionRecords;
 import dev.penduline.services.SwingSessionAnalysis;
 
-/** {@code penduline analyze RECORD.csv}: release, offset, cycles, decay envelopes and a first verdict. */
+/**
+ * {@code penduline analyze RECORD.csv}: release, offset, cycles, decay envelopes, a first look from
+ * the decay at the dominant loss, and where the body stopped.
+ */
 public final class AnalyzeCommand implements Command {
 
     private static final Set<String> OPTIONS = MechanismOptions.with(RecordOptions.with("mechanism"));
@@ -52,9 +55,11 @@ public final class AnalyzeCommand implements Command {
                 Reads a swing-test record (never modifying it), finds the still segment and the
                 release, the sensor's zero offset, the turning points and cycles, fits the decay
                 envelopes (linear: dry friction; geometric: viscous; reciprocal: drag) and the
-                regression of the decrement on amplitude, and gives a first verdict on which loss
-                dominates. With the mechanism it also compares the periods with the undamped
-                prediction and gives first estimates of the friction terms in SI.
+                regression of the decrement on amplitude, and takes a first look at which loss
+                dominates (the fit decides). It finds where the body stopped: the last reversal,
+                after which it does not move again. With the mechanism it also compares the
+                periods with the undamped prediction, gives first estimates of the friction terms
+                in SI and the band of static friction the stop allows.
 
                 """ + RecordOptions.USAGE + """
 
@@ -117,9 +122,9 @@ public final class AnalyzeCommand implements Command {
     }
 
     /**
-     * The verdict's dominant term as the JSON word: the leading loss when the verdict is mixed.
+     * The first look's dominant term as the JSON word: the leading loss when it is mixed.
      *
-     * @param v the verdict
+     * @param v the first look from the decay
      * @return viscous, coulomb or drag
      */
     static String dominant(LossVerdict v) {
@@ -183,8 +188,14 @@ public final class AnalyzeCommand implements Command {
         s.estimates().ifPresent(e -> estimates(e, j));
         StopInfo stop = s.stop();
         j.name("stop").beginObject().field("stopped", stop.stopped()).field("time_s", stop.time())
+                .field("time_uncertainty_s", stop.timeUncertainty())
                 .field("rest_angle_deg", Unit.DEGREE.fromSi(stop.restOffset()))
-                .field("stiction_lower_bound_n_m", stop.stictionLowerBound()).endObject();
+                .field("rest_angle_uncertainty_deg", Unit.DEGREE.fromSi(stop.restOffsetUncertainty()))
+                .field("previous_reversal_deg", Unit.DEGREE.fromSi(stop.previousOffset()))
+                .field("stiction_lower_bound_n_m", stop.stictionLowerBound())
+                .field("stiction_upper_bound_n_m", stop.stictionUpperBound())
+                .field("stiction_resolution_n_m", stop.stictionResolution())
+                .field("note", stop.note()).endObject();
         j.name("warnings").beginArray();
         warnings.forEach(j::value);
         j.endArray().endObject().finish();

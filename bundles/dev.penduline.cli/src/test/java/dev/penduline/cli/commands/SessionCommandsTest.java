@@ -2,6 +2,7 @@ package dev.penduline.cli.commands;
 
 import static org.junit.jupiter.api.Assertions.assertArrayEquals;
 import static org.junit.jupiter.api.Assertions.assertEquals;
+import static org.junit.jupiter.api.Assertions.assertFalse;
 import static org.junit.jupiter.api.Assertions.assertTrue;
 
 import java.io.PrintWriter;
@@ -18,11 +19,13 @@ import org.junit.jupiter.api.io.TempDir;
 
 import dev.penduline.cli.ExitCode;
 import dev.penduline.cli.PendulineCommandLine;
+import dev.penduline.physics.swing.LossVerdict;
 
 /**
  * The record commands end to end on records made by {@code demo-record}, whose truth is the
  * simulator's settings (the simulator itself is checked against closed forms in
- * dev.penduline.physics.motion).
+ * dev.penduline.physics.motion), and {@code analyze}'s stop on an invented record made outside the
+ * project (SciPy solve_ivp reference, releng/reference/make_stop_records.py).
  */
 class SessionCommandsTest {
 
@@ -33,6 +36,15 @@ class SessionCommandsTest {
     private StringWriter err;
 
     private static final String[] ROD = {"--mass", "2", "--centroid-distance", "0.4", "--pivot-inertia", "0.48"};
+
+    /**
+     * Invented records made outside the project (SciPy solve_ivp reference,
+     * releng/reference/make_stop_records.py), with their truth, in the physics bundle's test resources.
+     */
+    private static final Path STOP_RECORDS = Path.of("..", "dev.penduline.physics", "src", "test", "resources",
+            "stop-records");
+    /** The inspection-hatch sample, made by Penduline's own simulator: self-consistency only. */
+    private static final Path HATCH = Path.of("..", "..", "samples", "inspection-hatch");
 
     @BeforeEach
     void clear() {
@@ -123,5 +135,55 @@ class SessionCommandsTest {
         Path record = Files.writeString(dir.resolve("bad.csv"), "time_s,angle_deg\n0,1\n0.01,1\n0.02,x\n");
         assertEquals(ExitCode.USAGE_OR_INPUT, run("analyze", record.toString()));
         assertTrue(err.toString().contains("bad.csv:4") && err.toString().contains("angle_deg"), err.toString());
+    }
+
+    /** The truth.csv row of a record, split at the commas. */
+    private static String[] truth(String name) throws Exception {
+        return Files.readAllLines(STOP_RECORDS.resolve("truth.csv")).stream().filter(l -> l.startsWith(name + ","))
+                .findFirst().orElseThrow().split(",");
+    }
+
+    @Test
+    void jsonGivesTheStopAndBothEndsOfTheStictionBand() throws Exception {
+        String[] truth = truth("lid-250hz");
+        assertEquals(ExitCode.OK, run("analyze", STOP_RECORDS.resolve("lid-250hz.csv").toString(), "--mass", truth[1],
+                "--centroid-distance", truth[2], "--pivot-inertia", truth[3], "--json"), err.toString());
+        String stop = out.toString().substring(out.toString().indexOf("\"stop\""));
+        assertTrue(stop.contains("\"stopped\": true"), stop);
+        double period = Double.parseDouble(truth[15]);
+        double stiction = Double.parseDouble(truth[6]);
+        double k = Double.parseDouble(truth[1]) * 9.80665 * Double.parseDouble(truth[2]);
+        // SciPy solve_ivp reference, releng/reference/make_stop_records.py: stick instant, rest, previous reversal
+        assertEquals(Double.parseDouble(truth[12]), number(stop, "time_s"), 0.1 * period, stop);
+        assertEquals(Math.toDegrees(Double.parseDouble(truth[13])), number(stop, "rest_angle_deg"), 0.02, stop);
+        assertEquals(k * Math.abs(Math.sin(Double.parseDouble(truth[14]))), number(stop, "stiction_upper_bound_n_m"),
+                0.05 * stiction, stop);
+        assertTrue(number(stop, "stiction_lower_bound_n_m") < stiction, stop);
+        assertTrue(number(stop, "stiction_upper_bound_n_m") > stiction, stop);
+    }
+
+    @Test
+    void aRestWithinTheUncertaintyShowsNoStictionAndTheDecayIsAFirstLook() {
+        // release-10deg.csv comes to rest 0.015° from the equilibrium (the simulator's truth), a sixth of an
+        // encoder count: the stop cannot show stiction there
+        assertEquals(ExitCode.OK, run("analyze", HATCH.resolve("records/release-10deg.csv").toString(), "--mechanism",
+                HATCH.resolve("hatch.penduline").toString()), err.toString());
+        String report = out.toString();
+        assertTrue(report.startsWith("Swing record"), report);
+        assertTrue(report.contains("\n" + LossVerdict.HEADING + ": "), report);
+        assertFalse(report.contains("Verdict"), report);
+        assertTrue(report.contains("no evidence of stiction above what that allows (< K|sin 2σ| = "), report);
+        assertFalse(report.contains("at least 0 N·m"), report);
+        assertTrue(report.contains("moved on from the reversal before"), report);
+    }
+
+    @Test
+    void jsonGivesNullNotZeroForALowerEndTheStopCannotShow() {
+        assertEquals(ExitCode.OK, run("analyze", HATCH.resolve("records/release-10deg.csv").toString(), "--mechanism",
+                HATCH.resolve("hatch.penduline").toString(), "--json"), err.toString());
+        String stop = out.toString().substring(out.toString().indexOf("\"stop\""));
+        assertTrue(stop.contains("\"stiction_lower_bound_n_m\": null"), stop);
+        assertTrue(number(stop, "stiction_upper_bound_n_m") > 0, stop);
+        assertTrue(number(stop, "stiction_resolution_n_m") > 0, stop);
     }
 }

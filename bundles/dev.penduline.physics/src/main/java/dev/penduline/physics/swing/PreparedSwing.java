@@ -16,8 +16,7 @@ public final class PreparedSwing {
     private final List<MeasuredTurningPoint> turningPoints;
     private final SavitzkyGolay filter;
     private final double periodEstimate;
-    private final int settledFrom;
-    private final double settledLevel;
+    private final StopFinder.Stop stop;
     private final double noiseBand;
 
     PreparedSwing(double[] times, double[] angles, double[] velocities, Release release, ZeroOffset offset,
@@ -30,8 +29,7 @@ public final class PreparedSwing {
         this.turningPoints = List.copyOf(turningPoints);
         this.filter = filter;
         this.periodEstimate = outline.period();
-        this.settledFrom = outline.settledFrom();
-        this.settledLevel = outline.settledLevel();
+        this.stop = outline.stop();
         this.noiseBand = outline.noiseBand();
     }
 
@@ -121,21 +119,27 @@ public final class PreparedSwing {
     }
 
     /**
-     * Index (into {@link #times()}) of the first sample of the settled tail.
+     * Index (into {@link #times()}) of the first sample at or after the stop: the last reversal,
+     * after which the body does not move again.
      *
      * @return the index, −1 when the record does not settle
      */
     public int settledFrom() {
-        return settledFrom;
+        return stop == null ? -1 : stop.index();
     }
 
     /**
-     * Median angle of the settled tail.
+     * The rest reading after the stop: the mean of the readings over two periods from it.
      *
      * @return angle in the sensor's frame (rad), NaN when not settled
      */
     public double settledLevel() {
-        return settledLevel;
+        return stop == null ? Double.NaN : stop.level();
+    }
+
+    /** The stop as found, null when the body is still moving at the end of the record. */
+    StopFinder.Stop stop() {
+        return stop;
     }
 
     /**

@@ -4,11 +4,10 @@ package dev.penduline.physics.swing;
  * Fits the release instant tr of a body let go from rest: before tr the reading is the still
  * level L, after it {@code L − a τ² + c τ⁴} with {@code τ = t − tr} (the Taylor series of the
  * motion from rest; for a cosine swing {@code c = a ωn²/12}). For a trial tr the model is linear in
- * (L, a, c), so the residual is a function of tr alone: it is scanned on a grid, refined by golden
- * section, and the uncertainty read from where the residual has grown by one residual variance
- * (the profile of the least-squares criterion, e.g. Bates &amp; Watts, Nonlinear Regression
- * Analysis, §6.1). Fitting the level with the parabola, instead of taking it from the still
- * segment alone, keeps a level that quantisation rounded to a whole count from biasing tr.
+ * (L, a, c), so the residual is a function of tr alone: it is minimised and the uncertainty read
+ * from its profile by {@link ProfileScan}. Fitting the level with the parabola, instead of taking
+ * it from the still segment alone, keeps a level that quantisation rounded to a whole count from
+ * biasing tr.
  */
 final class ReleaseFit {
 
@@ -35,57 +34,8 @@ final class ReleaseFit {
             return null;
         }
         final ReleaseFit f = new ReleaseFit(t, theta, from, to, motionSamples >= 8 ? 3 : 2);
-        final int grid = 200;
-        final double step = (hi - lo) / grid;
-        double best = lo;
-        double bestRss = Double.POSITIVE_INFINITY;
-        for (int k = 0; k <= grid; k++) {
-            final double tr = lo + k * step;
-            final double r = f.rss(tr);
-            if (r < bestRss) {
-                bestRss = r;
-                best = tr;
-            }
-        }
-        double a = Math.max(lo, best - step);
-        double b = Math.min(hi, best + step);
-        final double golden = 0.5 * (Math.sqrt(5) - 1);
-        double c = b - golden * (b - a);
-        double d = a + golden * (b - a);
-        double fc = f.rss(c);
-        double fd = f.rss(d);
-        for (int i = 0; i < 50; i++) {
-            if (fc < fd) {
-                b = d;
-                d = c;
-                fd = fc;
-                c = b - golden * (b - a);
-                fc = f.rss(c);
-            } else {
-                a = c;
-                c = d;
-                fc = fd;
-                d = a + golden * (b - a);
-                fd = f.rss(d);
-            }
-        }
-        final double tr = 0.5 * (a + b);
-        final double rssMin = f.rss(tr);
-        final int dof = to - from - f.terms - 1;
-        final double variance = dof > 0 ? rssMin / dof : 0;
-        final double sigma = 0.5 * (f.reach(tr, rssMin + variance, -1, step) + f.reach(tr, rssMin + variance, 1, step));
-        return new double[] {tr, sigma, to - from};
-    }
-
-    /** Distance from tr in a direction to where the residual first reaches the level. */
-    private double reach(double tr, double level, int direction, double step) {
-        final double h = step / 4;
-        for (int k = 1; k <= 4000; k++) {
-            if (rss(tr + direction * k * h) >= level) {
-                return k * h;
-            }
-        }
-        return 4000 * h;
+        final double[] fit = ProfileScan.minimise(f::rss, lo, hi, to - from - f.terms - 1);
+        return new double[] {fit[0], fit[1], to - from};
     }
 
     private double rss(double tr) {

@@ -215,26 +215,43 @@ public final class SwingAnalyzer {
     }
 
     private StopInfo stop(PreparedSwing swing) {
-        if (swing.settledFrom() < 0) {
-            return new StopInfo(false, Double.NaN, Double.NaN, Double.NaN, Double.NaN,
-                    "the body is still moving at the end of the record");
+        final StopFinder.Stop s = swing.stop();
+        if (s == null) {
+            return StopInfo.moving();
         }
-        final double time = swing.times()[swing.settledFrom()];
-        final double rest = swing.settledLevel();
-        final double x = rest - swing.offset().value();
-        final double sigma = Double.isFinite(swing.offset().uncertainty())
-                ? Math.hypot(swing.offset().uncertainty(), swing.release().noise()) : Double.NaN;
-        if (mechanism == null) {
-            return new StopInfo(true, time, rest, x, Double.NaN, "settled at " + fmt(x)
-                    + " rad from the equilibrium; give the mechanism for a stiction bound");
+        final ZeroOffset offset = swing.offset();
+        final double x = s.level() - offset.value();
+        final double sigma = Math.hypot(offset.uncertainty(), s.levelUncertainty());
+        final double previous = s.previousAngle() - offset.value();
+        final double k = mechanism == null ? Double.NaN : mechanism.gravityStiffness();
+        double lower = Double.NaN;
+        double upper = Double.NaN;
+        double resolution = Double.NaN;
+        String note = "at rest from the last reversal at " + fmt(s.time()) + " s, " + fmt(x) + " rad (± " + fmt(sigma)
+                + " rad) from the equilibrium";
+        if (offset.method() == ZeroOffset.Method.SETTLED_TAIL) {
+            note += "; the equilibrium was read from this rest, so the stop cannot bound stiction";
+        } else if (!(k > 0)) {
+            note += "; give the mechanism for the band of static friction the stop allows";
+        } else {
+            upper = k * Math.abs(Math.sin(previous));
+            final String above = "; it moved on from the reversal before, " + fmt(previous)
+                    + " rad out, so stiction is below K|sin x_prev| = " + fmt(upper) + " N·m";
+            if (!Double.isFinite(sigma)) {
+                note += "; the equilibrium's uncertainty is not known, so no lower end is given" + above;
+            } else {
+                resolution = k * Math.sin(Math.min(0.5 * Math.PI, 2 * sigma));
+                if (Math.abs(x) > 2 * sigma) {
+                    lower = k * Math.abs(Math.sin(x));
+                    note += ": held there, so stiction is at least K|sin x| = " + fmt(lower) + " N·m" + above;
+                } else {
+                    note += ", within twice its uncertainty: the stop shows no evidence of stiction above what that"
+                            + " uncertainty allows (K|sin 2σ| = " + fmt(resolution) + " N·m)" + above;
+                }
+            }
         }
-        if (!(Math.abs(x) > 2 * sigma)) {
-            return new StopInfo(true, time, rest, x, 0, "settled within the uncertainty of the equilibrium ("
-                    + fmt(sigma) + " rad): no evidence of stiction");
-        }
-        final double bound = mechanism.gravityStiffness() * Math.abs(Math.sin(x));
-        return new StopInfo(true, time, rest, x, bound, "held " + fmt(x) + " rad from the equilibrium, so the"
-                + " static friction torque is at least K|sin x| = " + fmt(bound) + " N·m");
+        return new StopInfo(true, s.time(), s.timeUncertainty(), s.level(), x, sigma, previous, lower, upper,
+                resolution, note);
     }
 
     private static void check(double[] t, double[] theta) {

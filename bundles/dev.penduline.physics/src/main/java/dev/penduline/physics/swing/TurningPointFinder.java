@@ -36,14 +36,15 @@ final class TurningPointFinder {
                     + " rad) by more than the noise band " + hysteresis + " rad: no swing to analyse");
         }
         double period = period(t, crossings);
-        final int settled = settledTail(t, theta, band, period);
-        if (settled > 0) {
-            centre = RobustStatistics.median(theta, 0, settled);
+        // with a single crossing, the first comes about a quarter period after the release
+        final double rough = Double.isFinite(period) ? period : 4 * (t[crossings.get(0)] - t[0]);
+        final StopFinder.Stop stop = StopFinder.find(t, theta, release.quantum(), rough);
+        if (stop != null && stop.index() > 0) {
+            centre = RobustStatistics.median(theta, 0, stop.index());
             hysteresis = 1.5 * band + 0.002 * Math.abs(start - centre);
             crossings = crossings(theta, centre, hysteresis, start);
             period = period(t, crossings);
         }
-        final double settledLevel = settled >= 0 ? RobustStatistics.median(theta, settled, n) : Double.NaN;
         final List<MeasuredTurningPoint> points = new ArrayList<>();
         final double halfWindow = Double.isFinite(period) ? period / 12 : 5 * RobustStatistics.medianStep(t);
         if (release.fromRest()) {
@@ -62,19 +63,25 @@ final class TurningPointFinder {
             final int to = last ? n : crossings.get(k + 1);
             final double side = Math.signum(theta[from] - centre);
             final int idx = argExtreme(theta, from, to, side);
-            if (last) {
-                final int margin = (int) Math.ceil(halfWindow / RobustStatistics.medianStep(t));
-                if (settled >= 0 && idx >= settled - margin) {
-                    points.add(new MeasuredTurningPoint(t[settled], settledLevel, Double.NaN, Kind.STOP));
-                    break;
-                }
-                if (!reverses(theta, idx, side, band)) {
-                    break;
-                }
+            if (stop != null && t[idx] > stop.time() - 0.25 * rough) {
+                // the extreme lies in the final arrival or the rest: the stop takes its place
+                break;
+            }
+            if (last && stop == null && !reverses(theta, idx, side, band)) {
+                break;
             }
             points.add(refine(t, theta, idx, side, halfWindow, from, to, release.quantum(), period, centre));
         }
-        return new SwingOutline(points, period, settled, settledLevel, band);
+        if (stop != null) {
+            final MeasuredTurningPoint lastListed = points.isEmpty() ? null : points.get(points.size() - 1);
+            if (lastListed == null || lastListed.time() < stop.previousTime() - rough / 8) {
+                // the last half-swing was too small for the crossings: the stop search found its start
+                points.add(new MeasuredTurningPoint(stop.previousTime(), stop.previousAngle(), Double.NaN,
+                        Kind.REVERSAL));
+            }
+            points.add(new MeasuredTurningPoint(stop.time(), stop.level(), Double.NaN, Kind.STOP));
+        }
+        return new SwingOutline(points, period, stop, band);
     }
 
     /** Indices where the angle passes beyond centre ± h on the side opposite to the last one. */
@@ -105,29 +112,6 @@ final class TurningPointFinder {
         return 2 * RobustStatistics.medianInPlace(half);
     }
 
-    /** Start of the run at the end of the record that stays within the band of its median. */
-    private static int settledTail(double[] t, double[] theta, double band, double period) {
-        final int n = theta.length;
-        final int m = Math.max(10, n / 50);
-        if (n < 2 * m) {
-            return -1;
-        }
-        double level = RobustStatistics.median(theta, n - m, n);
-        int from = n;
-        for (int pass = 0; pass < 2; pass++) {
-            from = n;
-            while (from > 0 && Math.abs(theta[from - 1] - level) <= band) {
-                from--;
-            }
-            if (n - from < m) {
-                return -1;
-            }
-            level = RobustStatistics.median(theta, from, n);
-        }
-        final double minimum = Double.isFinite(period) ? 0.5 * period : 0.05 * (t[n - 1] - t[0]);
-        return t[n - 1] - t[from] >= minimum && from > 0 ? from : -1;
-    }
-
     private static int argExtreme(double[] theta, int from, int to, double side) {
         int best = from;
         for (int i = from; i < to; i++) {
@@ -147,7 +131,7 @@ final class TurningPointFinder {
         return false;
     }
 
-    private static MeasuredTurningPoint refine(double[] t, double[] theta, int idx, double side, double halfWindow,
+    static MeasuredTurningPoint refine(double[] t, double[] theta, int idx, double side, double halfWindow,
             int segFrom, int segTo, double quantum, double period, double centre) {
         for (double hw = halfWindow; hw <= 2.01 * halfWindow; hw *= 2) {
             final MeasuredTurningPoint p = vertex(t, theta, idx, side, hw, segFrom, segTo);
@@ -220,7 +204,7 @@ final class TurningPointFinder {
     }
 
     /** Last index with t[i] ≤ time (0 when none). */
-    private static int lowerIndex(double[] t, double time) {
+    static int lowerIndex(double[] t, double time) {
         int lo = 0;
         int hi = t.length - 1;
         if (t[0] > time) {

@@ -1,5 +1,6 @@
 package dev.penduline.physics.swing;
 
+import java.util.Arrays;
 import java.util.List;
 
 /**
@@ -16,7 +17,9 @@ import java.util.List;
  *
  * <p>Why not the rest angle: a body held by stiction stops anywhere within
  * {@code ±asin(Ts/K)} of the equilibrium; its rest angle says where friction held it, not
- * where gravity would.
+ * where gravity would. The stop enters a run only as the reversal it is: the end of a half-swing
+ * of about the usual length after a listed reversal. A run across a gap (a small last half-swing
+ * that the turning-point search did not list) is left out, so the rest cannot pull the estimate.
  */
 final class ZeroOffsetEstimator {
 
@@ -25,11 +28,8 @@ final class ZeroOffsetEstimator {
 
     static ZeroOffset estimate(List<MeasuredTurningPoint> points, double settledLevel, double noise) {
         final int n = points.size();
-        if (n >= 3) {
-            final double[] runs = new double[n - 2];
-            for (int i = 0; i + 2 < n; i++) {
-                runs[i] = 0.25 * (points.get(i).angle() + 2 * points.get(i + 1).angle() + points.get(i + 2).angle());
-            }
+        final double[] runs = runs(points);
+        if (runs.length > 0) {
             final double value = RobustStatistics.median(runs, 0, runs.length);
             final double spread = runs.length >= 3
                     ? RobustStatistics.MAD_TO_SIGMA * RobustStatistics.mad(runs, 0, runs.length, value)
@@ -37,7 +37,8 @@ final class ZeroOffsetEstimator {
             // the median's standard error is about 1.25 σ/√n for Gaussian scatter
             final double uncertainty = Math.max(1.2533 * spread / Math.sqrt(runs.length), noise / Math.sqrt(n));
             String note = "from the symmetry of " + n + " turning points ((p0 + 2 p1 + p2)/4 over "
-                    + runs.length + " runs, which cancels the alternating dry-friction shift)";
+                    + runs.length + " runs of consecutive half-swings, which cancels the alternating dry-friction"
+                    + " shift)";
             if (Double.isFinite(settledLevel)) {
                 note += "; the body settled at " + settledLevel + " rad, " + (settledLevel - value)
                         + " rad from it: with dry friction or stiction the rest angle is not the equilibrium";
@@ -58,5 +59,32 @@ final class ZeroOffsetEstimator {
         }
         throw new IllegalArgumentException("a single turning point and no settled tail: the equilibrium cannot"
                 + " be estimated from this record");
+    }
+
+    /**
+     * The runs (p0 + 2 p1 + p2)/4 of three turning points whose two half-swings both last about
+     * as long as the median half-swing (within a quarter of it). A run across a gap, where a
+     * small half-swing went unseen, or one that ends at a rest not reached by a half-swing of its
+     * own, is left out: its points are not consecutive reversals and would pull the estimate.
+     */
+    private static double[] runs(List<MeasuredTurningPoint> points) {
+        final int n = points.size();
+        if (n < 3) {
+            return new double[0];
+        }
+        final double[] durations = new double[n - 1];
+        for (int i = 0; i + 1 < n; i++) {
+            durations[i] = points.get(i + 1).time() - points.get(i).time();
+        }
+        final double typical = RobustStatistics.median(durations, 0, durations.length);
+        final double[] runs = new double[n - 2];
+        int count = 0;
+        for (int i = 0; i + 2 < n; i++) {
+            if (Math.abs(durations[i] / typical - 1) <= 0.25 && Math.abs(durations[i + 1] / typical - 1) <= 0.25) {
+                runs[count++] = 0.25 * (points.get(i).angle() + 2 * points.get(i + 1).angle()
+                        + points.get(i + 2).angle());
+            }
+        }
+        return Arrays.copyOf(runs, count);
     }
 }

@@ -24,6 +24,10 @@
  * <li>The zero offset from the symmetry of the swings, not from the rest angle: dry friction
  * shifts each half-swing's centre by ±Tc/K and stiction holds the body anywhere in its dead
  * band.</li>
+ * <li>The stop ({@link dev.penduline.physics.swing.StopInfo}): the last reversal after which the
+ * body does not move again, found from where the smoothed angle stops spanning more than the
+ * noise over half a period and timed by a fit of the last cycle; the rest angle and the reversal
+ * before it bound the static friction from below and above.</li>
  * <li>Energy balance per half-swing links a0, a1, a2 to Tc, b, c (see
  * {@link dev.penduline.physics.swing.DecrementRegression}).</li>
  * </ol>

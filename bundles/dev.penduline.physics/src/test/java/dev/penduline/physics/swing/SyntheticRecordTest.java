@@ -14,8 +14,9 @@ import dev.penduline.physics.motion.TurningPoint;
 /**
  * Messy records made by the event-driven simulator with known parameters (still segment, release between
  * samples, zero offset of 3°, Gaussian noise of 0.03°, 4096 counts/rev quantisation, seed 42), analysed as a
- * test rig's record would be. The simulator is the independent reference here: it integrates the equation of
- * motion (DOMAIN §1) with Hipparchus' Dormand–Prince integrator and knows nothing of the analysis.
+ * test rig's record would be. The simulator integrates the equation of motion with Hipparchus' Dormand–Prince
+ * integrator and knows nothing of the analysis, but it is Penduline's own: these checks show self-consistency
+ * (the records made outside the project are in StopReferenceRecordsTest).
  *
  * <p>Tolerances: release within 3 ms (0.6 of a 5 ms sample step) and within 4 of its own standard
  * uncertainties; offset within 0.01°; turning-point amplitudes within 0.05° (a third of an encoder count);
@@ -84,11 +85,39 @@ class SyntheticRecordTest {
         // Den Hartog, Mechanical Vibrations, Coulomb damping: 4 Tc / k per cycle (small angles; 20° adds ~1 %)
         assertEquals(4 * tc / K, a.envelope(DecayEnvelope.Model.LINEAR).orElseThrow().ratePerCycle(), 0.02 * 4 * tc / K);
         assertEquals(tc, a.estimates().orElseThrow().coulomb(), 0.03 * tc);
-        assertTrue(a.stop().stopped());
-        final SwingRun truth = SyntheticSwingRecord.of(new FrictionTorques(0, tc, 0.05, 0), Math.toRadians(20)).truth();
-        assertEquals(truth.restAngle(), a.stop().restAngle(), Math.toRadians(0.05));
-        // DOMAIN §3, stiction row: K |sin x| at rest cannot exceed Ts
-        assertTrue(a.stop().stictionLowerBound() > 0 && a.stop().stictionLowerBound() <= 0.05 * 1.05);
+        final SyntheticSwingRecord record = SyntheticSwingRecord.of(new FrictionTorques(0, tc, 0.05, 0),
+                Math.toRadians(20));
+        final StopInfo stop = a.stop();
+        assertTrue(stop.stopped());
+        final SwingRun truth = record.truth();
+        assertEquals(truth.restAngle(), stop.restAngle(), Math.toRadians(0.05));
+        // self-consistency with the simulator that made the record: the stop within a tenth of a period
+        assertEquals(record.releaseTime() + truth.stopTime(), stop.time(), 0.1 * record.mechanism().smallAnglePeriod(),
+                "stop time; " + stop.note());
+        // at rest K |sin x| cannot exceed Ts; at the reversal before, K |sin x_prev| did
+        assertTrue(stop.stictionLowerBound() > 0 && stop.stictionLowerBound() <= 0.05 * 1.05, stop.note());
+        final List<TurningPoint> reversals = truth.turningPoints();
+        final double previous = reversals.get(reversals.size() - 2).angle() - record.mechanism().equilibriumAngle();
+        assertEquals(K * Math.abs(Math.sin(previous)), stop.stictionUpperBound(), K * Math.toRadians(0.05));
+        assertTrue(stop.stictionUpperBound() > 0.05, stop.note());
+    }
+
+    @Test
+    void aRestWithinTheUncertaintyOfTheEquilibriumShowsNoStiction() {
+        // released from 8.126° the simulator brings this arm to rest within 0.001° of the equilibrium
+        final SyntheticSwingRecord record = SyntheticSwingRecord.of(new FrictionTorques(0.004, 0.03, 0.035, 0),
+                Math.toRadians(8.126)).withDuration(25);
+        final SwingRun truth = record.truth();
+        assertTrue(Math.abs(truth.restAngle() - record.mechanism().equilibriumAngle()) < Math.toRadians(0.001));
+        final double[][] s = record.samples();
+        final StopInfo stop = new SwingAnalyzer().withMechanism(record.mechanism()).analyse(s[0], s[1]).stop();
+        // self-consistency with the simulator: the stop, and no lower end where none can be shown
+        assertEquals(record.releaseTime() + truth.stopTime(), stop.time(), 0.1 * record.mechanism().smallAnglePeriod());
+        assertTrue(Math.abs(stop.restOffset()) <= 2 * stop.restOffsetUncertainty(), stop.note());
+        assertTrue(Double.isNaN(stop.stictionLowerBound()), stop.note());
+        assertTrue(stop.note().contains("no evidence of stiction"), stop.note());
+        assertTrue(!stop.note().contains("at least 0"), stop.note());
+        assertTrue(stop.stictionUpperBound() > 0.035, stop.note());
     }
 
     @Test

@@ -12,8 +12,9 @@ import dev.penduline.physics.units.Unit;
 import dev.penduline.services.present.Figures;
 
 /**
- * The few lines under the Swing Chart: the verdict first, then the release, the sensor's offset
- * and the first estimates — the head of {@code penduline analyze}'s report, worded for a view.
+ * The few lines under the Swing Chart: the first look from the decay (not a verdict: the fit in
+ * the Friction view decides), then the release, the sensor's offset and the first estimates — the
+ * head of {@code penduline analyze}'s report, worded for a view.
  */
 final class AnalysisSummary {
 
@@ -23,8 +24,8 @@ final class AnalysisSummary {
     static List<String> lines(SwingAnalysis a, boolean withMechanism) {
         List<String> out = new ArrayList<>();
         LossVerdict v = a.verdict();
-        out.add(String.format(Locale.ROOT, "Verdict: %s (Coulomb %s, viscous %s, drag %s of the mean decrement)",
-                verdict(v), Figures.percent(v.coulombShare()), Figures.percent(v.viscousShare()),
+        out.add(String.format(Locale.ROOT, "%s: %s (Coulomb %s, viscous %s, drag %s of the mean decrement)",
+                LossVerdict.HEADING, v.reading(), Figures.percent(v.coulombShare()), Figures.percent(v.viscousShare()),
                 Figures.percent(v.dragShare())));
         out.add("Release at " + Figures.measured(a.release().time(), a.release().uncertainty()) + " s, "
                 + deg(a.initialAngle())
@@ -49,16 +50,6 @@ final class AnalysisSummary {
             out.add("First friction estimates need the mechanism's inertia: add parts to the mechanism file.");
         }
         return out;
-    }
-
-    private static String verdict(LossVerdict v) {
-        return switch (v.kind()) {
-            case COULOMB -> "dry (Coulomb) friction dominates";
-            case VISCOUS -> "viscous damping dominates";
-            case DRAG -> "air drag dominates";
-            case MIXED -> "mixed losses, led by " + v.leading().name().toLowerCase(Locale.ROOT);
-            case UNDETERMINED -> "undetermined (too few swings to tell)";
-        };
     }
 
     private static String deg(double rad) {

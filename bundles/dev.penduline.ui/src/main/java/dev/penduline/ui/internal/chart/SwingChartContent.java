@@ -15,7 +15,7 @@ import java.util.Optional;
  *                      and angle (°)
  * @param releaseTime   the release instant (s), NaN when unknown
  * @param predicted     true when the curve is a prediction, not a record
- * @param summary       the short summary under the chart (verdict, release, offset, estimates)
+ * @param summary       the short summary under the chart (first look from the decay, release, offset, estimates)
  * @param warnings      what the user should know about the record or the analysis
  * @param error         what went wrong, when nothing could be drawn
  */

@@ -1,6 +1,7 @@
 /**
  * The Swing Chart view: a test session's record, angle (°) against time (s), with the turning
- * points and release the analysis found, and the verdict, offset and first estimates below.
+ * points and release the analysis found, and the first look from the decay, offset and first
+ * estimates below.
  * Start from {@link dev.penduline.ui.internal.chart.SwingChartPart}; the data comes from
  * {@link dev.penduline.ui.internal.chart.ChartSubject}, which calls {@code SessionRecords},
  * {@code SwingSessionAnalysis} and, for a mechanism without sessions, {@code SwingPrediction}.
