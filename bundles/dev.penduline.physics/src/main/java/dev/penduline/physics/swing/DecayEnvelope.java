@@ -16,7 +16,7 @@ package dev.penduline.physics.swing;
  */
 public record DecayEnvelope(Model model, double initialAmplitude, double ratePerCycle, double rSquared, int points) {
 
-    /** The envelope shapes and the loss each one is the signature of (DOMAIN §3). */
+    /** The envelope shapes and the loss each one is the signature of (see the package documentation). */
     public enum Model {
         /** {@code A_n = A_0 − d n}: a constant decrement, the signature of dry (Coulomb) friction. */
         LINEAR,

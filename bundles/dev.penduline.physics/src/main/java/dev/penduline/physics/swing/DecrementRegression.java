@@ -4,7 +4,7 @@ import java.util.List;
 
 /**
  * The per-half-swing decrement as a quadratic in the amplitude, {@code ΔA ≈ a0 + a1 Ā + a2 Ā²}
- * (DOMAIN §3), fitted by least squares with every coefficient kept ≥ 0.
+ * (per half-swing, from the energy balance), fitted by least squares with every coefficient kept ≥ 0.
  *
  * <p>The regressand is the {@link HalfSwing#equivalentDecrement() energy-equivalent decrement}
  * and the regressor the half-swing's mean amplitude Ā. Energy balance over a half-swing of

@@ -38,7 +38,8 @@ class SanityChecksTest {
     @Test
     void inertiaBelowThePointMassBoundNamesTheCutOut() {
         // 2 kg at 1 m less a 1 kg ring of radius 1 m centred there: M = 1 kg, Lc = 1 m, but
-        // J0 = 2 − (1 + 1) = 0 < M Lc² = 1 kg·m² — impossible for a real body (DOMAIN §2, J0 ≥ m Lc²).
+        // J0 = 2 − (1 + 1) = 0 < M Lc² = 1 kg·m² — impossible for a real body (parallel-axis
+        // theorem: J0 = Jcg + m Lc² with Jcg ≥ 0, so J0 ≥ m Lc²).
         final Part solid = Part.of("weight", new PointMass(), 2, new Vector3(0, -1, 0));
         final Part ring = Part.of("groove", new ThinRing(1, Axis.Z), 1, new Vector3(0, -1, 0)).withCutout(true);
         final IllegalArgumentException e = assertThrows(IllegalArgumentException.class,

@@ -35,7 +35,7 @@ class PeriodCheckTest {
 
     @Test
     void aWrongInertiaShowsBeforeAnyFit() {
-        // the analysis is told J0 is 10 % too large; T ∝ sqrt(J0) (DOMAIN §1: T0 = 2π sqrt(J0 / (m g Lc)))
+        // the analysis is told J0 is 10 % too large; T ∝ sqrt(J0) (compound-pendulum period T0 = 2π sqrt(J0 / (m g Lc)), any dynamics text)
         final SwingAnalysis a = analyse(ARM.withPivotInertia(1.1 * ARM.pivotInertia()), Math.toRadians(15));
         assertEquals(Math.sqrt(1 / 1.1) - 1, a.periodCheck().medianRelativeDifference(), 3e-4);
         assertEquals(ARM.pivotInertia(), a.periodCheck().impliedPivotInertia(), 1e-3 * ARM.pivotInertia());
@@ -48,7 +48,7 @@ class PeriodCheckTest {
         final SwingAnalysis a = new SwingAnalyzer().analyse(s[0], s[1]);
         assertTrue(a.estimates().isEmpty());
         assertTrue(Double.isNaN(a.periodCheck().predictedSmallAnglePeriod()));
-        // DOMAIN §1: T0 = 2π sqrt(J0 / (m g Lc)) of the simulated arm
+        // compound-pendulum period T0 = 2π sqrt(J0 / (m g Lc)) of the simulated arm
         assertEquals(ARM.smallAnglePeriod(), a.periodCheck().measuredSmallAnglePeriod(), 2e-3 * ARM.smallAnglePeriod());
     }
 }

@@ -12,7 +12,7 @@ class ReleaseDetectorTest {
 
     @Test
     void findsTheJoinOfALevelAndAParabolaThroughNoiseAndASpike() {
-        // θ = L − a (t − tr)² after rest: the Taylor series of any motion released from rest (DOMAIN §1 at ω = 0)
+        // θ = L − a (t − tr)² after rest: the Taylor series of any motion released from rest (the equation of motion at ω = 0)
         final SplittableRandom random = new SplittableRandom(5);
         final double tr = 0.7321;
         final int n = 600;
