@@ -48,7 +48,7 @@ class FitWarningsTest {
 
     private static boolean warns(Object json, String fragment) {
         Object w = at(json, "warnings");
-        for (int i = 0; has(w, i); i++) {
+        for (int i = 0; at(w, i) != null; i++) {
             if (String.valueOf(at(w, i)).contains(fragment)) {
                 return true;
             }
@@ -65,13 +65,17 @@ class FitWarningsTest {
     }
 
     @Test
-    void aTermTheRecordDoesNotShowSitsOnItsBound() throws Exception {
-        // pure viscous truth (b = 0.02, Tc = 0): asked for Coulomb too, Tc ends at its bound 0
+    void aTermTheRecordDoesNotShowIsWarnedAbout() throws Exception {
+        // pure viscous truth (b = 0.02, Tc = 0): asked for Coulomb too, Tc ends on its bound 0 or
+        // within two standard errors of it, and either way the report says the term is not shown
         assertEquals(ExitCode.OK, fit(arm("0.5", "--session", record("viscous.csv"), "--terms", "viscous,coulomb",
                 "--resamples", "0", "--json")), err);
         Object json = JsonTree.parse(out);
-        assertTrue((Boolean) at(json, "terms", "coulomb", "on_bound"), out);
-        assertTrue(warns(json, "Tc sits on its bound 0"), out);
+        boolean onBound = (Boolean) at(json, "terms", "coulomb", "on_bound");
+        assertTrue(onBound ? warns(json, "Tc sits on its bound 0") : warns(json, "within two standard errors"), out);
+        double tc = number(json, "terms", "coulomb", "value");
+        double sigma = number(json, "terms", "coulomb", "sigma");
+        assertTrue(onBound || tc <= 2 * sigma, "Tc is not clear of zero: " + out);
         assertEquals(0.02, number(json, "terms", "viscous", "value"), 0.03 * 0.02);
     }
 

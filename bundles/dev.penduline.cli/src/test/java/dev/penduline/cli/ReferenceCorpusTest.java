@@ -218,7 +218,7 @@ class ReferenceCorpusTest {
     private static boolean roundingModelled(Object fit, int i) {
         String name = String.valueOf(at(fit, "sessions", i, "name"));
         Object warnings = at(fit, "warnings");
-        for (int w = 0; has(warnings, w); w++) {
+        for (int w = 0; at(warnings, w) != null; w++) {
             String text = String.valueOf(at(warnings, w));
             if (text.startsWith(name + ":") && text.contains("rounding is part of the fitted measurement model")) {
                 return true;

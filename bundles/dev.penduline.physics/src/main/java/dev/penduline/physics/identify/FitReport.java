@@ -180,6 +180,11 @@ final class FitReport {
                         : p.name() + " sits on its bound 0: the records show no such loss; drop the term (its"
                                 + " standard error is not meaningful)"));
             }
+            if (!p.onBound() && !p.name().equals("J0") && !p.name().equals("Ts") && !(p.value() > 2 * p.sigma())) {
+                warnings.add(new FitWarning(FitWarning.Kind.NOT_CLEAR_OF_ZERO, p.name() + " = " + format(p.value())
+                        + " " + p.unit() + " is within two standard errors (" + format(p.sigma()) + ") of zero: the"
+                        + " records do not show this loss clearly; consider dropping the term"));
+            }
             if (Double.isFinite(p.sigmaJacobian()) && p.sigmaResampling() > DISAGREEMENT * p.sigmaJacobian()) {
                 warnings.add(new FitWarning(FitWarning.Kind.UNCERTAINTY_DISAGREEMENT, "the resampling σ of " + p.name()
                         + " (" + format(p.sigmaResampling()) + " " + p.unit() + ") is more than " + DISAGREEMENT

@@ -14,6 +14,8 @@ public record FitWarning(Kind kind, String message) {
         STRONG_CORRELATION,
         /** A parameter sits on its lower bound (zero friction, or J0 = m Lc²). */
         ON_BOUND,
+        /** A friction term lies within two standard errors of zero. */
+        NOT_CLEAR_OF_ZERO,
         /** The fitted inertia differs from the calculated one by more than the limit. */
         INERTIA_MISMATCH,
         /** The optimiser did not converge. */

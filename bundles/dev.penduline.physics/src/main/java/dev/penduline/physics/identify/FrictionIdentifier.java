@@ -82,7 +82,7 @@ public final class FrictionIdentifier {
         final Set<FrictionTerm> terms = problem.terms();
         final FitSettings quick = settings.withResampling(0, settings.seed(), settings.parallel());
         final NestedFits nested = new NestedFits(problem, quick, control,
-                TermSelection.candidates(terms.contains(FrictionTerm.STICTION)));
+                TermSelection.candidates(terms.contains(FrictionTerm.STICTION)), true);
         return finish(problem, terms, nested.point(terms), settings, control);
     }
 
@@ -96,14 +96,26 @@ public final class FrictionIdentifier {
         PointFit point = guarded;
         final StageOutcome o0 = point.outcome();
         if (o0.status() == FitStatus.CONVERGED) {
+            // the spread runs the cheap stage from the optimum and from friction halved and
+            // doubled; only a start that ends clearly lower there goes on to the full stage
             final FitSettings quick = settings.withResampling(0, settings.seed(), settings.parallel());
-            final PointFit spread = StagedFit.run(problem, terms, quick, control,
+            final List<StageOutcome> tried = StagedFit.firstStage(problem, terms, quick, control,
                     List.of(o0.full(), scaledFriction(o0.full(), 0.5), scaledFriction(o0.full(), 2)));
-            if (spread.outcome().status() == FitStatus.CONVERGED
-                    && spread.outcome().rss() < o0.rss() * (1 - NestedFits.GUARD_TOLERANCE)) {
-                point = new PointFit(spread.layout(), spread.outcome(), spread.data(), spread.stiction(),
-                        spread.band(), point.iterations() + spread.iterations(),
-                        point.evaluations() + spread.evaluations());
+            StageOutcome lowest = tried.get(0);
+            for (StageOutcome t : tried.subList(1, tried.size())) {
+                if (t.status() == FitStatus.CONVERGED
+                        && t.rss() < lowest.rss() * (1 - NestedFits.GUARD_TOLERANCE)) {
+                    lowest = t;
+                }
+            }
+            if (lowest != tried.get(0)) {
+                final PointFit spread = StagedFit.refine(problem, terms, quick, control, lowest.full());
+                if (spread.outcome().status() == FitStatus.CONVERGED
+                        && spread.outcome().rss() < o0.rss() * (1 - NestedFits.GUARD_TOLERANCE)) {
+                    point = new PointFit(spread.layout(), spread.outcome(), spread.data(), spread.stiction(),
+                            spread.band(), point.iterations() + spread.iterations(),
+                            point.evaluations() + spread.evaluations());
+                }
             }
         }
         point = withEncoderRounding(problem, point, settings, control);

@@ -31,16 +31,30 @@ final class NestedFits {
     private final FitSettings settings;
     private final FitControl control;
     private final List<Set<FrictionTerm>> family;
+    private final boolean cheapSubsets;
     private final Map<Set<FrictionTerm>, PointFit> points = new LinkedHashMap<>();
+    private final Map<Set<FrictionTerm>, Double> costs = new LinkedHashMap<>();
 
     /**
      * @param family the term sets that may serve as subsets (candidates), smaller ones first
      */
     NestedFits(FrictionProblem problem, FitSettings settings, FitControl control, List<Set<FrictionTerm>> family) {
+        this(problem, settings, control, family, false);
+    }
+
+    /**
+     * @param family       the term sets that may serve as subsets, smaller ones first
+     * @param cheapSubsets fit the subsets of an asked-for set only through the cheap motion
+     *                     stage (enough for a seed); the guard then holds the set against every
+     *                     sample's residual at each subset's point, one model evaluation each
+     */
+    NestedFits(FrictionProblem problem, FitSettings settings, FitControl control, List<Set<FrictionTerm>> family,
+            boolean cheapSubsets) {
         this.problem = problem;
         this.settings = settings;
         this.control = control;
         this.family = List.copyOf(family);
+        this.cheapSubsets = cheapSubsets;
     }
 
     /**
@@ -50,14 +64,20 @@ final class NestedFits {
      * @return the guarded point fit
      */
     PointFit point(Set<FrictionTerm> terms) {
+        return point(terms, false);
+    }
+
+    private PointFit point(Set<FrictionTerm> terms, boolean asSubset) {
         final PointFit known = points.get(terms);
         if (known != null) {
             return known;
         }
         final List<PointFit> subsets = new ArrayList<>();
+        final List<Double> subsetCosts = new ArrayList<>();
         for (Set<FrictionTerm> s : family) {
             if (terms.containsAll(s) && !terms.equals(s)) {
-                subsets.add(point(s));
+                subsets.add(point(s, true));
+                subsetCosts.add(costs.get(s));
             }
         }
         final List<double[]> seeds = new ArrayList<>();
@@ -66,42 +86,55 @@ final class NestedFits {
                 seeds.add(p.outcome().full());
             }
         }
-        PointFit fit = StagedFit.run(problem, terms, settings, control, seeds);
-        for (PointFit sub : subsets) {
+        final boolean cheap = cheapSubsets && asSubset;
+        PointFit fit = StagedFit.run(problem, terms, settings, control, seeds, cheap);
+        final EnumSet<FrictionTerm> key = EnumSet.copyOf(terms);
+        points.put(key, fit);
+        if (cheap) {
+            // a seed only: its cost over every sample is what the richer set is held against
+            costs.put(key, fit.outcome().status() == FitStatus.CONVERGED
+                    ? StagedFit.cost(problem, terms, fit.outcome().full(), fit.stiction(), settings)
+                    : Double.NaN);
+            return fit;
+        }
+        costs.put(key, fit.outcome().status() == FitStatus.CONVERGED ? fit.outcome().rss() : Double.NaN);
+        for (int k = 0; k < subsets.size(); k++) {
             if (fit.outcome().status() == FitStatus.CANCELLED) {
                 break;
             }
-            if (violates(fit, sub)) {
-                final PointFit again = StagedFit.refine(problem, terms, settings, control, sub.outcome().full());
+            if (violates(fit, subsetCosts.get(k))) {
+                final PointFit again = StagedFit.refine(problem, terms, settings, control,
+                        subsets.get(k).outcome().full());
                 if (StagedFit.better(again.outcome(), fit.outcome())) {
                     fit = again;
                 }
             }
         }
-        for (PointFit sub : subsets) {
-            if (violates(fit, sub)) {
-                fit = failed(fit, terms, sub);
+        for (int k = 0; k < subsets.size(); k++) {
+            if (violates(fit, subsetCosts.get(k))) {
+                fit = failed(fit, terms, subsetCosts.get(k));
                 break;
             }
         }
-        points.put(EnumSet.copyOf(terms), fit);
+        points.put(key, fit);
+        costs.put(key, fit.outcome().status() == FitStatus.CONVERGED ? fit.outcome().rss() : Double.NaN);
         return fit;
     }
 
-    /** Whether a fit ends worse than a converged subset's. */
-    private static boolean violates(PointFit fit, PointFit subset) {
-        if (subset.outcome().status() != FitStatus.CONVERGED) {
+    /** Whether a fit ends worse than a subset's cost over every sample (NaN: the subset failed). */
+    private static boolean violates(PointFit fit, double subsetCost) {
+        if (Double.isNaN(subsetCost)) {
             return false;
         }
-        return !(fit.outcome().rss() <= subset.outcome().rss() * (1 + GUARD_TOLERANCE));
+        return !(fit.outcome().rss() <= subsetCost * (1 + GUARD_TOLERANCE));
     }
 
-    private static PointFit failed(PointFit fit, Set<FrictionTerm> terms, PointFit subset) {
+    private static PointFit failed(PointFit fit, Set<FrictionTerm> terms, double subsetCost) {
         final StageOutcome o = fit.outcome();
         final int n = o.residuals() == null ? 1 : o.residuals().length;
         final String message = String.format(Locale.ROOT, "optimiser failure: the terms %s fit worse (rms %.4g rad)"
                 + " than the smaller set they contain (rms %.4g rad), even when started from its optimum",
-                terms, Math.sqrt(o.rss() / n), Math.sqrt(subset.outcome().rss() / n));
+                terms, Math.sqrt(o.rss() / n), Math.sqrt(subsetCost / n));
         final StageOutcome marked = new StageOutcome(o.full(), FitStatus.FAILED, message, o.iterations(),
                 o.evaluations(), o.rss(), o.residuals(), o.jacobian());
         return new PointFit(fit.layout(), marked, fit.data(), fit.stiction(), fit.band(), fit.iterations(),

@@ -53,6 +53,17 @@ final class StagedFit {
      */
     static PointFit run(FrictionProblem problem, Set<FrictionTerm> terms, FitSettings settings,
             FitControl control, List<double[]> seeds) {
+        return run(problem, terms, settings, control, seeds, false);
+    }
+
+    /**
+     * The staged fit, or only its cheap part.
+     *
+     * @param motionOnly stop after the motion stage (decimated, the final rest left out): the
+     *                   point serves as a seed and a guard for a richer set, not as a result
+     */
+    static PointFit run(FrictionProblem problem, Set<FrictionTerm> terms, FitSettings settings,
+            FitControl control, List<double[]> seeds, boolean motionOnly) {
         final Plan plan = new Plan(problem, terms);
         final Tally tally = new Tally();
         double[] current = plan.initial;
@@ -87,7 +98,48 @@ final class StagedFit {
         if (!plan.thinned) {
             return stiction(plan, best, settings, control, tally);
         }
+        if (motionOnly) {
+            return tally.point(plan.layout, best, plan.motion, plan.start.stiction(), null);
+        }
         return refine(plan, best.full(), settings, control, tally);
+    }
+
+    /**
+     * The residual sum of squares of a full vector over every sample (one model evaluation).
+     *
+     * @param stiction holding torque (N·m), 0 meaning "as Coulomb"
+     */
+    static double cost(FrictionProblem problem, Set<FrictionTerm> terms, double[] full, double stiction,
+            FitSettings settings) {
+        final Plan plan = new Plan(problem, terms);
+        final JointModel model = new JointModel(plan.layout, full, plan.all, plan.stiffness, stiction,
+                settings.integrationTolerance(), null);
+        final double[] values = new double[model.rows()];
+        model.evaluate(full, values, null);
+        final double[] target = model.target().toArray();
+        double sum = 0;
+        for (int i = 0; i < values.length; i++) {
+            sum += (target[i] - values[i]) * (target[i] - values[i]);
+        }
+        return sum;
+    }
+
+    /**
+     * The cheap first stage (motion, decimated; the full stage when there is nothing to thin)
+     * from each of several starts, for a spread of starts around an optimum.
+     *
+     * @param starts full vectors (SI), used as they are
+     * @return the outcome of each start, in order
+     */
+    static List<StageOutcome> firstStage(FrictionProblem problem, Set<FrictionTerm> terms, FitSettings settings,
+            FitControl control, List<double[]> starts) {
+        final Plan plan = new Plan(problem, terms);
+        final List<StageOutcome> outcomes = new ArrayList<>();
+        for (double[] from : starts) {
+            outcomes.add(LevenbergStage.run(plan.thinned ? "spread" : "full", plan.layout, from,
+                    plan.thinned ? plan.motion : plan.all, plan.stiffness, plan.start.stiction(), settings, control));
+        }
+        return outcomes;
     }
 
     /**
