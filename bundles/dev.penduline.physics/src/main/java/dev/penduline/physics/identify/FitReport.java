@@ -4,6 +4,7 @@ import java.util.ArrayList;
 import java.util.List;
 import java.util.Locale;
 import java.util.Set;
+import java.util.stream.Stream;
 
 import dev.penduline.physics.MechanismProperties;
 import dev.penduline.physics.motion.FrictionTorques;
@@ -22,7 +23,7 @@ final class FitReport {
 
     static FrictionFit build(FrictionProblem problem, Set<FrictionTerm> terms, PointFit point, double[] resampled,
             int resamplesUsed, FitSettings settings) {
-        return build(problem, terms, point, null, resampled, resamplesUsed, settings, false);
+        return build(problem, terms, point, null, resampled, resamplesUsed, settings, null);
     }
 
     /**
@@ -31,11 +32,13 @@ final class FitReport {
      * @param replicates the full vectors of the resampling refits (for the σ of the energy shares); may be
      *                   null when only their spread is known
      * @param resampled  standard deviation of each full entry over the refits, or null
-     * @param judge      whether this is a reported fit, to be held against the noise floor, given a
-     *                   verdict and a stop band (candidates of a comparison are not)
+     * @param floors     the records' noise floors when this is a reported fit, to be held against
+     *                   them, given a verdict and a stop band; null for a candidate of a comparison
      */
     static FrictionFit build(FrictionProblem problem, Set<FrictionTerm> terms, PointFit point,
-            List<double[]> replicates, double[] resampled, int resamplesUsed, FitSettings settings, boolean judge) {
+            List<double[]> replicates, double[] resampled, int resamplesUsed, FitSettings settings,
+            List<NoiseFloor.Estimate> floors) {
+        final boolean judge = floors != null;
         final StageOutcome o = point.outcome();
         final ParameterLayout layout = point.layout();
         final double[] full = o.full();
@@ -82,11 +85,16 @@ final class FitReport {
                 : EnergyAccount.of(level, friction, full, problem.sessions(), settings.integrationTolerance());
         final List<double[]> shares = new ArrayList<>();
         if (judge && replicates != null && o.status() == FitStatus.CONVERGED) {
-            for (double[] r : replicates) {
+            // one simulation per refit; independent, so they run on all cores when allowed
+            Stream<double[]> each = replicates.stream();
+            if (settings.parallel()) {
+                each = each.parallel();
+            }
+            shares.addAll(each.map(r -> {
                 final EnergyShares e = EnergyAccount.of(level, friction(r, point.stiction()), r, problem.sessions(),
                         settings.integrationTolerance());
-                shares.add(new double[] {e.viscous(), e.coulomb(), e.drag()});
-            }
+                return new double[] {e.viscous(), e.coulomb(), e.drag()};
+            }).toList());
             if (shares.size() >= 2) {
                 final double[] sigma = BlockBootstrap.spread(shares, 3);
                 energy = energy.withSigmas(sigma[0], sigma[1], sigma[2]);
@@ -98,7 +106,7 @@ final class FitReport {
         StictionBand stopBand = null;
         String stopNote = null;
         if (judge) {
-            goodness = Goodness.of(problem.sessions(), o.residuals(), settings.misfitRatio());
+            goodness = Goodness.of(problem.sessions(), floors, o.residuals(), settings.misfitRatio());
             if (status == FitStatus.CONVERGED && !goodness.passed()) {
                 status = FitStatus.MISFIT;
                 message = "the model does not describe the records: the residuals are clearly above the noise floor";

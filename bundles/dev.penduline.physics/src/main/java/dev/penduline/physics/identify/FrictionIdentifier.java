@@ -81,9 +81,10 @@ public final class FrictionIdentifier {
         Objects.requireNonNull(control, "control");
         final Set<FrictionTerm> terms = problem.terms();
         final FitSettings quick = settings.withResampling(0, settings.seed(), settings.parallel());
+        final List<NoiseFloor.Estimate> floors = NoiseFloor.of(problem.sessions());
         final NestedFits nested = new NestedFits(problem, quick, control,
-                TermSelection.candidates(terms.contains(FrictionTerm.STICTION)), true);
-        return finish(problem, terms, nested.point(terms), settings, control);
+                TermSelection.candidates(terms.contains(FrictionTerm.STICTION)), true, floors);
+        return finish(problem, terms, nested.point(terms), settings, control, floors);
     }
 
     /**
@@ -92,11 +93,12 @@ public final class FrictionIdentifier {
      * uncertainty and the σ of the energy shares, held against the noise floor, judged.
      */
     static FrictionFit finish(FrictionProblem problem, Set<FrictionTerm> terms, PointFit guarded,
-            FitSettings settings, FitControl control) {
+            FitSettings settings, FitControl control, List<NoiseFloor.Estimate> floors) {
         PointFit point = guarded;
         final StageOutcome o0 = point.outcome();
-        if (o0.status() == FitStatus.CONVERGED) {
-            // the spread runs the cheap stage from the optimum and from friction halved and
+        if (o0.status() == FitStatus.CONVERGED
+                && !StagedFit.atNoise(o0, problem.samples(), NoiseFloor.variance(problem.sessions(), floors))) {
+            // at the noise floor no start can do clearly better; above it, the spread runs the cheap stage from the optimum and from friction halved and
             // doubled; only a start that ends clearly lower there goes on to the full stage
             final FitSettings quick = settings.withResampling(0, settings.seed(), settings.parallel());
             final List<StageOutcome> tried = StagedFit.firstStage(problem, terms, quick, control,
@@ -134,10 +136,10 @@ public final class FrictionIdentifier {
                         o.residuals(), o.jacobian());
                 return FitReport.build(problem, terms, new PointFit(point.layout(), cancelled, point.data(),
                         point.stiction(), point.band(), point.iterations(), point.evaluations()), null, null, 0,
-                        settings, true);
+                        settings, floors);
             }
         }
-        return FitReport.build(problem, terms, point, replicates, resampled, used, settings, true);
+        return FitReport.build(problem, terms, point, replicates, resampled, used, settings, floors);
     }
 
     /** Relative accuracy of the noise scale found by the profile over σ. */

@@ -57,19 +57,22 @@ public record Goodness(List<SessionGoodness> sessions, double rms, double floor,
      * Holds the residuals of a fit against the noise floors of its records.
      *
      * @param sessions  the records, in the order of the residuals
+     * @param floors    their noise floors, in the same order
      * @param residuals measured − model, all sessions concatenated (rad); null when the fit has none
      * @param limit     misfit limit of the rms-to-floor ratio
      * @return the check; passed when there are no residuals to judge (a cancelled fit)
      */
-    static Goodness of(List<ReleaseSession> sessions, double[] residuals, double limit) {
+    static Goodness of(List<ReleaseSession> sessions, List<NoiseFloor.Estimate> floors, double[] residuals,
+            double limit) {
         final List<SessionGoodness> rows = new ArrayList<>();
         double sum = 0;
         double floorSquares = 0;
         int n = 0;
         double worst = 0;
         int row = 0;
-        for (ReleaseSession s : sessions) {
-            final NoiseFloor.Estimate noise = NoiseFloor.of(s);
+        for (int k = 0; k < sessions.size(); k++) {
+            final ReleaseSession s = sessions.get(k);
+            final NoiseFloor.Estimate noise = floors.get(k);
             final int size = s.size();
             double rss = Double.NaN;
             double lag1 = Double.NaN;

@@ -32,14 +32,16 @@ final class NestedFits {
     private final FitControl control;
     private final List<Set<FrictionTerm>> family;
     private final boolean cheapSubsets;
+    private final double noiseVariance;
     private final Map<Set<FrictionTerm>, PointFit> points = new LinkedHashMap<>();
     private final Map<Set<FrictionTerm>, Double> costs = new LinkedHashMap<>();
 
     /**
      * @param family the term sets that may serve as subsets (candidates), smaller ones first
      */
-    NestedFits(FrictionProblem problem, FitSettings settings, FitControl control, List<Set<FrictionTerm>> family) {
-        this(problem, settings, control, family, false);
+    NestedFits(FrictionProblem problem, FitSettings settings, FitControl control, List<Set<FrictionTerm>> family,
+            List<NoiseFloor.Estimate> floors) {
+        this(problem, settings, control, family, false, floors);
     }
 
     /**
@@ -49,12 +51,13 @@ final class NestedFits {
      *                     sample's residual at each subset's point, one model evaluation each
      */
     NestedFits(FrictionProblem problem, FitSettings settings, FitControl control, List<Set<FrictionTerm>> family,
-            boolean cheapSubsets) {
+            boolean cheapSubsets, List<NoiseFloor.Estimate> floors) {
         this.problem = problem;
         this.settings = settings;
         this.control = control;
         this.family = List.copyOf(family);
         this.cheapSubsets = cheapSubsets;
+        this.noiseVariance = NoiseFloor.variance(problem.sessions(), floors);
     }
 
     /**
@@ -72,6 +75,16 @@ final class NestedFits {
         if (known != null) {
             return known;
         }
+        if (cheapSubsets && !asSubset) {
+            // an asked-for set that fits to the noise floor from the analysis' start has no
+            // local minimum to escape: no smaller set can fit clearly better
+            final PointFit direct = StagedFit.run(problem, terms, settings, control, List.of(), false, noiseVariance);
+            if (direct.outcome().status() == FitStatus.CANCELLED
+                    || StagedFit.atNoise(direct.outcome(), problem.samples(), noiseVariance)) {
+                points.put(EnumSet.copyOf(terms), direct);
+                return direct;
+            }
+        }
         final List<PointFit> subsets = new ArrayList<>();
         final List<Double> subsetCosts = new ArrayList<>();
         for (Set<FrictionTerm> s : family) {
@@ -87,7 +100,7 @@ final class NestedFits {
             }
         }
         final boolean cheap = cheapSubsets && asSubset;
-        PointFit fit = StagedFit.run(problem, terms, settings, control, seeds, cheap);
+        PointFit fit = StagedFit.run(problem, terms, settings, control, seeds, cheap, noiseVariance);
         final EnumSet<FrictionTerm> key = EnumSet.copyOf(terms);
         points.put(key, fit);
         if (cheap) {

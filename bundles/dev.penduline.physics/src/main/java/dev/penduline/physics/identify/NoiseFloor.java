@@ -1,5 +1,7 @@
 package dev.penduline.physics.identify;
 
+import java.util.List;
+
 import dev.penduline.physics.swing.RobustStatistics;
 
 /**
@@ -107,6 +109,35 @@ public final class NoiseFloor {
             effective = still * (1 - rho) / (1 + rho);
         }
         return new Estimate(sigma, stillSigma, high, q, stillLag1, method, effective);
+    }
+
+    /**
+     * The noise floor of several records as one variance per sample: the sample-weighted mean of
+     * their squared floors.
+     *
+     * @param sessions the records
+     * @param floors   their floors, in order
+     * @return the variance (rad²)
+     */
+    static double variance(List<ReleaseSession> sessions, List<Estimate> floors) {
+        double sum = 0;
+        int n = 0;
+        for (int k = 0; k < sessions.size(); k++) {
+            final double sigma = floors.get(k).sigma();
+            sum += sigma * sigma * sessions.get(k).size();
+            n += sessions.get(k).size();
+        }
+        return sum / n;
+    }
+
+    /**
+     * The floors of several records, in order.
+     *
+     * @param sessions the records
+     * @return one estimate per record
+     */
+    static List<Estimate> of(List<ReleaseSession> sessions) {
+        return sessions.stream().map(NoiseFloor::of).toList();
     }
 
     /** Noise standard deviation from the MAD of fourth differences (rad); NaN for short records. */

@@ -53,17 +53,31 @@ final class StagedFit {
      */
     static PointFit run(FrictionProblem problem, Set<FrictionTerm> terms, FitSettings settings,
             FitControl control, List<double[]> seeds) {
-        return run(problem, terms, settings, control, seeds, false);
+        return run(problem, terms, settings, control, seeds, false, Double.NaN);
+    }
+
+    /**
+     * Residual rms, in noise floors, at or below which a start has reached what any model can:
+     * the seeds are then not tried (they could not do clearly better).
+     */
+    static final double NOISE_LEVEL = Goodness.NOTICE_RATIO;
+
+    /** Whether a stage's residual per sample is at the noise floor (NaN floor: never). */
+    static boolean atNoise(StageOutcome o, int rows, double noiseVariance) {
+        return o.status() == FitStatus.CONVERGED && o.rss() / rows <= NOISE_LEVEL * NOISE_LEVEL * noiseVariance;
     }
 
     /**
      * The staged fit, or only its cheap part.
      *
-     * @param motionOnly stop after the motion stage (decimated, the final rest left out): the
-     *                   point serves as a seed and a guard for a richer set, not as a result
+     * @param motionOnly    stop after the motion stage (decimated, the final rest left out): the
+     *                      point serves as a seed and a guard for a richer set, not as a result
+     * @param noiseVariance the records' noise floor as a variance per sample (rad²); when the
+     *                      analysis' start already fits to the floor the seeds are skipped; NaN
+     *                      tries them always
      */
     static PointFit run(FrictionProblem problem, Set<FrictionTerm> terms, FitSettings settings,
-            FitControl control, List<double[]> seeds, boolean motionOnly) {
+            FitControl control, List<double[]> seeds, boolean motionOnly, double noiseVariance) {
         final Plan plan = new Plan(problem, terms);
         final Tally tally = new Tally();
         double[] current = plan.initial;
@@ -94,6 +108,9 @@ final class StagedFit {
             if (best == null || better(moving, best)) {
                 best = moving;
             }
+            if (atNoise(best, rows(firstData), noiseVariance)) {
+                break;
+            }
         }
         if (!plan.thinned) {
             return stiction(plan, best, settings, control, tally);
@@ -102,6 +119,15 @@ final class StagedFit {
             return tally.point(plan.layout, best, plan.motion, plan.start.stiction(), null);
         }
         return refine(plan, best.full(), settings, control, tally);
+    }
+
+    /** Samples in a stage's data. */
+    static int rows(List<StageSamples> data) {
+        int n = 0;
+        for (StageSamples d : data) {
+            n += d.size();
+        }
+        return n;
     }
 
     /**

@@ -56,7 +56,8 @@ final class TermSelection {
         }
         final List<Set<FrictionTerm>> sets = candidates(stops);
         final FitSettings quick = settings.withResampling(0, settings.seed(), settings.parallel());
-        final NestedFits nested = new NestedFits(problem, quick, control, sets);
+        final List<NoiseFloor.Estimate> floors = NoiseFloor.of(problem.sessions());
+        final NestedFits nested = new NestedFits(problem, quick, control, sets, floors);
         final List<FrictionFit> fits = new ArrayList<>();
         for (Set<FrictionTerm> terms : sets) {
             fits.add(FitReport.build(problem, terms, nested.point(terms), null, 0, quick));
@@ -91,7 +92,7 @@ final class TermSelection {
         }
         final int selected = best >= 0 ? best : fallback;
         final FrictionFit chosen = FrictionIdentifier.finish(problem, sets.get(selected),
-                nested.point(sets.get(selected)), settings, control);
+                nested.point(sets.get(selected)), settings, control, floors);
         return new ModelComparison(scores, selected, effective, rho, n, chosen);
     }
 
