@@ -98,8 +98,9 @@ public final class FrictionIdentifier {
         final StageOutcome o0 = point.outcome();
         if (o0.status() == FitStatus.CONVERGED
                 && !StagedFit.atNoise(o0, problem.samples(), NoiseFloor.variance(problem.sessions(), floors))) {
-            // at the noise floor no start can do clearly better; above it, the spread runs the cheap stage from the optimum and from friction halved and
-            // doubled; only a start that ends clearly lower there goes on to the full stage
+            // at the noise floor no start can do clearly better; above it, the spread runs the
+            // cheap stage from the optimum and from friction halved and doubled; only a start
+            // that ends clearly lower there goes on to the full stage
             final FitSettings quick = settings.withResampling(0, settings.seed(), settings.parallel());
             final List<StageOutcome> tried = StagedFit.firstStage(problem, terms, quick, control,
                     List.of(o0.full(), scaledFriction(o0.full(), 0.5), scaledFriction(o0.full(), 2)));
