@@ -27,6 +27,7 @@ import org.eclipse.swt.widgets.Table;
 import org.eclipse.swt.widgets.TableItem;
 import org.eclipse.ui.IWorkbenchWindow;
 
+import dev.penduline.physics.identify.ParameterEstimate;
 import dev.penduline.model.Estimate;
 import dev.penduline.model.FitResult;
 import dev.penduline.model.Mechanism;
@@ -167,9 +168,11 @@ final class FrictionViewScenario {
             }
         }
         assertNotNull(row, "no row " + symbol + " in the estimates table");
-        double sigma = Math.max(e.isSetStandardError() ? e.getStandardError() : 0,
-                e.isSetResamplingError() ? e.getResamplingError() : 0);
-        // Two significant digits of the larger standard error.
+        // the σ to quote by the fit's own rule (the resampling σ only when clearly larger)
+        double sigma = new ParameterEstimate(symbol, "", e.getValue(),
+                e.isSetStandardError() ? e.getStandardError() : Double.NaN,
+                e.isSetResamplingError() ? e.getResamplingError() : Double.NaN, true, false).sigma();
+        // Two significant digits of that standard error.
         BigDecimal sigmaShown = new BigDecimal(row.getText(2));
         assertEquals(sigma, sigmaShown.doubleValue(), 0.05 * sigma, symbol + " σ shown");
         // The value rounded to the decimal place of that standard error (GUM §7.2.6).

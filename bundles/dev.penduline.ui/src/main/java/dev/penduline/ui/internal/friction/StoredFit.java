@@ -178,7 +178,7 @@ public record StoredFit(String id, String computedAt, String status, String verd
             }
             double sj = e.isSetStandardError() ? e.getStandardError() : Double.NaN;
             double sr = e.isSetResamplingError() ? e.getResamplingError() : Double.NaN;
-            // The quoted σ follows the physics layer's rule (the larger of the two), not one of ours.
+            // The quoted σ follows the physics layer's rule (ParameterEstimate.sigma), not one of ours.
             double sigma = new ParameterEstimate(e.getParameter(), "", e.getValue(), sj, sr, true, false).sigma();
             rows.add(new EstimateRow(inertia ? "inertia, fitted" : TermWords.quantity(e.getParameter()),
                     e.getParameter(), Figures.value(e.getValue(), sigma), orDash(sigma), orDash(sj), orDash(sr),
