@@ -18,6 +18,9 @@ final class FitReport {
     /** A resampling σ this many times the Jacobian's says the residuals are far from white. */
     private static final double DISAGREEMENT = 3;
 
+    /** Integration tolerance of the refits' energy shares, which feed only their σ. */
+    private static final double SHARE_TOLERANCE = 1e-6;
+
     private FitReport() {
     }
 
@@ -90,9 +93,11 @@ final class FitReport {
             if (settings.parallel()) {
                 each = each.parallel();
             }
+            // the spread of the shares needs them to a few parts in 1e5, not to the fit's tolerance
+            final double coarse = Math.max(settings.integrationTolerance(), SHARE_TOLERANCE);
             shares.addAll(each.map(r -> {
                 final EnergyShares e = EnergyAccount.of(level, friction(r, point.stiction()), r, problem.sessions(),
-                        settings.integrationTolerance());
+                        coarse);
                 return new double[] {e.viscous(), e.coulomb(), e.drag()};
             }).toList());
             if (shares.size() >= 2) {
