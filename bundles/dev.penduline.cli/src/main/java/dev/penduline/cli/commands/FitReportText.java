@@ -61,7 +61,7 @@ final class FitReportText {
         out.println("  model: " + termList(fit.terms()) + (outcome.automatic() ? " (chosen by BIC among the candidates)"
                 : " (as asked)"));
         out.println();
-        out.println("Estimates (± one standard error: the larger of the Jacobian and the bootstrap estimate):");
+        out.println("Estimates (± one standard error: the Jacobian's, or the bootstrap's when clearly larger):");
         for (FrictionTerm t : fit.terms()) {
             if (t == FrictionTerm.STICTION && fit.stiction() != null) {
                 out.printf(Locale.ROOT, "  %-9s Ts = between %s and %s %s%n", "stiction",

@@ -67,13 +67,23 @@
  * iterations, evaluations and the best point reached — never in a hang.
  *
  * <h2>Uncertainty</h2>
- * Two estimates, both reported: σ²(JᵀJ)⁻¹ with σ² = RSS/(n − p) at the optimum (Hipparchus'
- * covariance is unscaled, hence the explicit σ²), honest for white noise; and the spread of
- * block-bootstrap refits (Künsch 1989), honest also when residuals are autocorrelated, as they
- * are whenever the model misses something. Quote the larger
- * ({@link dev.penduline.physics.identify.ParameterEstimate#sigma()}). Correlations above 0.95
- * involving a physical parameter are warned about; with one session and two friction terms
- * the warning says that releases at different amplitudes are what separate them.
+ * Two estimates, both reported: from the Jacobian at the optimum, in the sandwich form
+ * {@code (JᵀJ)⁻¹ M (JᵀJ)⁻¹} with M from batch means of the score (White 1980; Newey &amp; West
+ * 1987), which allows for correlated residuals and for the unequal variance of rounded
+ * readings; and the spread of block-bootstrap refits (Künsch 1989). The bootstrap σ is quoted
+ * when it exceeds the Jacobian's by more than its own sampling error
+ * ({@link dev.penduline.physics.identify.ParameterEstimate#sigma()}). The coverage of the quoted σ
+ * is tested in both directions on white, AR(1) and quantised records. Correlations above 0.95
+ * involving a physical parameter are warned about, with the test that would separate them.
+ *
+ * <h2>Trust</h2>
+ * Nested term sets seed each other and a guard refuses a richer set that fits worse than one it
+ * contains ({@code NestedFits}); the residuals are held against each record's model-free noise
+ * floor ({@link dev.penduline.physics.identify.NoiseFloor}, {@link dev.penduline.physics.identify.Goodness}),
+ * and above it the status is {@link dev.penduline.physics.identify.FitStatus#MISFIT}; the verdict
+ * names a dominant loss only with a clear lead ({@link dev.penduline.physics.identify.FrictionVerdict});
+ * a coarsely quantised record is fitted with its rounding in the measurement model
+ * ({@code EncoderRounding}).
  *
  * <h2>Model comparison</h2>
  * Candidate sets V, C, V+C, V+D, V+C+D (and, when a record ends at rest, each with Coulomb
@@ -87,9 +97,9 @@
  *
  * <h2>Units and traps</h2>
  * SI throughout: s, rad, N·m, kg·m². Traps: undithered encoder quantisation makes a
- * deterministic error that neither σ can see (b about 0.2 % off at 4096 counts/rev in our
- * tests); a record starting after the release has no held segment, so θ0 and offset correlate
- * strongly (the warning is suppressed for nuisance-only pairs); one release cannot separate
+ * deterministic error (b about 0.2 % off at 4096 counts/rev in our tests) unless the rounding
+ * is modelled, as the fit does when the noise is below one count; a record starting after the
+ * release has no held segment, so θ0 and offset correlate strongly (the warning is suppressed for nuisance-only pairs); one release cannot separate
  * viscous from Coulomb friction unless its amplitude range is wide.
  *
  * <p>Caution: results are estimates to be confirmed by test; for doors, hatches, gates and

@@ -24,7 +24,7 @@ import dev.penduline.physics.motion.FrictionTorques;
  * 95.45 %, Abramowitz &amp; Stegun Table 26.1), neither clearly less (σ too small) nor clearly
  * more (σ too large). Acceptance: the count of covering intervals lies inside the central
  * 99 % of Binomial(N, p) (Hipparchus' binomial distribution), for each noise kind, with the
- * default σ of the report (the larger of the Jacobian's and the block bootstrap's).
+ * default σ of the report (the Jacobian's sandwich σ, or the block bootstrap's when clearly larger).
  */
 class UncertaintyHonestyTest {
 

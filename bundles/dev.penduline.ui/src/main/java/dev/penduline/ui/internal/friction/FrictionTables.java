@@ -40,7 +40,7 @@ final class FrictionTables {
         // Each row is laid out on its own so that a wide table in one row does not push the
         // other row's right-hand table out of sight.
         Composite first = row(area);
-        caption(first, "Estimates (± σ: the larger of the Jacobian and the bootstrap standard error)");
+        caption(first, "Estimates (± σ: the Jacobian's, or the bootstrap's when clearly larger)");
         caption(first, "Term sets compared (⇒ kept: lowest BIC, all terms clear of 0)");
         estimates = table(first);
         column(estimates, "quantity", SWT.LEFT, EstimateRow.class,
