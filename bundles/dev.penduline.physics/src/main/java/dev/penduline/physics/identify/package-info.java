@@ -99,7 +99,8 @@
  * SI throughout: s, rad, N·m, kg·m². Traps: undithered encoder quantisation makes a
  * deterministic error (b about 0.2 % off at 4096 counts/rev in our tests) unless the rounding
  * is modelled, as the fit does when the noise is below one count; a record starting after the
- * release has no held segment, so θ0 and offset correlate strongly (the warning is suppressed for nuisance-only pairs); one release cannot separate
+ * release has no held segment, so θ0 and offset correlate strongly (the warning is suppressed
+ * for nuisance-only pairs); one release cannot separate
  * viscous from Coulomb friction unless its amplitude range is wide.
  *
  * <p>Caution: results are estimates to be confirmed by test; for doors, hatches, gates and
