@@ -79,19 +79,11 @@ public record FrictionVerdict(Kind kind, FrictionTerm dominant, List<FrictionTer
         if (replicates.size() < 2) {
             return Double.NaN;
         }
-        final int a = index(first);
-        final int b = index(second);
-        double mean = 0;
+        final List<double[]> leads = new ArrayList<>();
         for (double[] r : replicates) {
-            mean += r[a] - r[b];
+            leads.add(new double[] {r[index(first)] - r[index(second)]});
         }
-        mean /= replicates.size();
-        double sum = 0;
-        for (double[] r : replicates) {
-            final double d = r[a] - r[b] - mean;
-            sum += d * d;
-        }
-        return Math.sqrt(sum / (replicates.size() - 1));
+        return BlockBootstrap.spread(leads, 1)[0];
     }
 
     static int index(FrictionTerm t) {

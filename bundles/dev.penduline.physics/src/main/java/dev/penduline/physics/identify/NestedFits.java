@@ -102,15 +102,14 @@ final class NestedFits {
         final boolean cheap = cheapSubsets && asSubset;
         PointFit fit = StagedFit.run(problem, terms, settings, control, seeds, cheap, noiseVariance);
         final EnumSet<FrictionTerm> key = EnumSet.copyOf(terms);
-        points.put(key, fit);
         if (cheap) {
+            points.put(key, fit);
             // a seed only: its cost over every sample is what the richer set is held against
             costs.put(key, fit.outcome().status() == FitStatus.CONVERGED
                     ? StagedFit.cost(problem, terms, fit.outcome().full(), fit.stiction(), settings)
                     : Double.NaN);
             return fit;
         }
-        costs.put(key, fit.outcome().status() == FitStatus.CONVERGED ? fit.outcome().rss() : Double.NaN);
         for (int k = 0; k < subsets.size(); k++) {
             if (fit.outcome().status() == FitStatus.CANCELLED) {
                 break;

@@ -34,6 +34,11 @@ final class StagedFit {
     /** Decimation of the motion stage: enough samples per period to resolve every term. */
     private static final int MOTION_SAMPLES_PER_PERIOD = 100;
 
+    /** The fitted friction terms and their places in the full vector, in the same order. */
+    private static final FrictionTerm[] DISSIPATIVE = {FrictionTerm.VISCOUS, FrictionTerm.COULOMB, FrictionTerm.DRAG};
+    private static final ParameterKind[] DISSIPATIVE_KINDS = {ParameterKind.VISCOUS, ParameterKind.COULOMB,
+        ParameterKind.DRAG};
+
     private StagedFit() {
     }
 
@@ -93,7 +98,7 @@ final class StagedFit {
         final List<double[]> starts = new ArrayList<>();
         starts.add(current);
         for (double[] seed : seeds) {
-            starts.add(seeded(seed, terms, plan.start, plan.initial));
+            starts.add(seeded(seed, terms, plan.start));
         }
         // with nothing to thin, the "motion" stage would be the full stage itself
         final String firstStage = plan.thinned ? "motion" : "full";
@@ -178,16 +183,7 @@ final class StagedFit {
      */
     static PointFit refine(FrictionProblem problem, Set<FrictionTerm> terms, FitSettings settings,
             FitControl control, double[] from) {
-        final Plan plan = new Plan(problem, terms);
-        final double[] x = from.clone();
-        final FrictionTerm[] order = {FrictionTerm.VISCOUS, FrictionTerm.COULOMB, FrictionTerm.DRAG};
-        final ParameterKind[] kinds = {ParameterKind.VISCOUS, ParameterKind.COULOMB, ParameterKind.DRAG};
-        for (int i = 0; i < order.length; i++) {
-            if (!terms.contains(order[i])) {
-                x[ParameterLayout.index(kinds[i])] = 0;
-            }
-        }
-        return refine(plan, x, settings, control, new Tally());
+        return refine(new Plan(problem, terms), withinSet(from, terms), settings, control, new Tally());
     }
 
     private static PointFit refine(Plan plan, double[] from, FitSettings settings, FitControl control, Tally tally) {
@@ -356,21 +352,25 @@ final class StagedFit {
      * analysis' value for this set (never from exactly zero, where the projection onto the bound
      * could keep them), terms outside the set zeroed.
      */
-    private static double[] seeded(double[] seed, Set<FrictionTerm> terms, FrictionTorques start, double[] fallback) {
-        final double[] x = seed.clone();
-        final FrictionTerm[] order = {FrictionTerm.VISCOUS, FrictionTerm.COULOMB, FrictionTerm.DRAG};
-        final ParameterKind[] kinds = {ParameterKind.VISCOUS, ParameterKind.COULOMB, ParameterKind.DRAG};
+    private static double[] seeded(double[] seed, Set<FrictionTerm> terms, FrictionTorques start) {
+        final double[] x = withinSet(seed, terms);
         final double[] given = {start.viscous(), start.coulomb(), start.drag()};
-        for (int i = 0; i < order.length; i++) {
-            final int at = ParameterLayout.index(kinds[i]);
-            if (!terms.contains(order[i])) {
-                x[at] = 0;
-            } else if (!(x[at] > 0)) {
+        for (int i = 0; i < DISSIPATIVE.length; i++) {
+            final int at = ParameterLayout.index(DISSIPATIVE_KINDS[i]);
+            if (terms.contains(DISSIPATIVE[i]) && !(x[at] > 0)) {
                 x[at] = 0.5 * given[i];
             }
         }
-        if (x.length != fallback.length) {
-            return fallback.clone();
+        return x;
+    }
+
+    /** A copy of a full vector with the friction terms outside a set at zero. */
+    private static double[] withinSet(double[] full, Set<FrictionTerm> terms) {
+        final double[] x = full.clone();
+        for (int i = 0; i < DISSIPATIVE.length; i++) {
+            if (!terms.contains(DISSIPATIVE[i])) {
+                x[ParameterLayout.index(DISSIPATIVE_KINDS[i])] = 0;
+            }
         }
         return x;
     }
