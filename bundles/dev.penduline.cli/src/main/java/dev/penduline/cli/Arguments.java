@@ -10,7 +10,7 @@ import java.util.Set;
 /**
  * The options of one command: {@code --name VALUE}, {@code --name=VALUE}, repeatable options,
  * flags and positional arguments. Unknown options and missing values are usage errors that name
- * the option; numbers are checked where they are read.
+ * the option; every number is checked against its option's rule in {@link OptionRules}.
  */
 public final class Arguments {
 
@@ -122,27 +122,44 @@ public final class Arguments {
     }
 
     /**
-     * A numeric option.
+     * A numeric option, checked against its rule in {@link OptionRules}.
      *
      * @param name     the option without dashes
-     * @param fallback the value when absent
+     * @param fallback the value when absent (not checked)
      * @return the number
-     * @throws UsageException when the value is not a finite number
+     * @throws UsageException when the value is not a finite number or is outside the option's range
      */
     public double number(String name, double fallback) throws UsageException {
         String v = value(name);
         if (v == null) {
             return fallback;
         }
+        double d;
         try {
-            double d = Double.parseDouble(v.trim());
-            if (!Double.isFinite(d)) {
-                throw new NumberFormatException();
-            }
-            return d;
+            d = Double.parseDouble(v.strip());
         } catch (NumberFormatException e) {
-            throw new UsageException("option --" + name + ": '" + v + "' is not a number");
+            d = Double.NaN;
         }
+        if (!Double.isFinite(d)) {
+            throw new UsageException("option --" + name + ": '" + OptionRules.shown(v) + "' is not a number: give "
+                    + OptionRules.of(name).describe());
+        }
+        return OptionRules.check(name, v, d);
+    }
+
+    /**
+     * A whole-number option (counts, iterations, seeds), checked against its rule.
+     *
+     * @param name     the option without dashes
+     * @param fallback the value when absent
+     * @return the number
+     * @throws UsageException when the value is not a whole number inside the option's range
+     */
+    public long whole(String name, long fallback) throws UsageException {
+        if (!OptionRules.of(name).whole()) {
+            throw new IllegalStateException("--" + name + " is not a whole-number option");
+        }
+        return has(name) ? (long) number(name, fallback) : fallback;
     }
 
     /**

@@ -14,6 +14,8 @@ import dev.penduline.cli.commands.FitCommand;
 import dev.penduline.cli.commands.ImportPartsCommand;
 import dev.penduline.cli.commands.InertiaCommand;
 import dev.penduline.cli.commands.SimulateCommand;
+import dev.penduline.cli.internal.FaultReport;
+import dev.penduline.cli.internal.PrintableWriter;
 
 /** Dispatches {@code penduline COMMAND ...} to its {@link Command}; prints help and versions. */
 public final class PendulineCommandLine {
@@ -48,6 +50,17 @@ public final class PendulineCommandLine {
      * @return the exit code
      */
     public ExitCode run(String[] args, PrintWriter out, PrintWriter err) {
+        PrintWriter shownOut = new PrintWriter(new PrintableWriter(out), true);
+        PrintWriter shownErr = new PrintWriter(new PrintableWriter(err), true);
+        try {
+            return dispatch(args, shownOut, shownErr);
+        } finally {
+            shownOut.flush();
+            shownErr.flush();
+        }
+    }
+
+    private ExitCode dispatch(String[] args, PrintWriter out, PrintWriter err) {
         if (args.length == 0) {
             printHelp(out);
             return ExitCode.USAGE_OR_INPUT;
@@ -71,8 +84,15 @@ public final class PendulineCommandLine {
                 try {
                     return command.run(new ArrayList<>(List.of(args).subList(1, args.length)), out, err);
                 } catch (UsageException e) {
+                    out.flush();
                     err.println(PROGRAM + " " + command.name() + ": " + e.getMessage());
                     return ExitCode.USAGE_OR_INPUT;
+                } catch (RuntimeException | StackOverflowError | OutOfMemoryError e) {
+                    // the last line of defence: any failure no check foresaw is a diagnosis and a log, never a trace
+                    out.flush();
+                    err.println(PROGRAM + " " + command.name() + ": " + FaultReport.diagnose(command.name(),
+                            Arrays.copyOfRange(args, 1, args.length), Version.current(), e));
+                    return ExitCode.COMPUTATION_FAILED;
                 }
             }
         }

@@ -56,6 +56,7 @@ public final class DemoRecords {
     public static SwingRun write(MechanismSource mechanism, FrictionTorques friction, Settings s, Path target)
             throws InputException {
         MechanismProperties p = mechanism.properties();
+        SwingPrediction.requireSwing(p, friction, s.theta0(), 0);
         MechanismProperties aboutEquilibrium = new MechanismProperties(p.mass(), p.centroidDistance(),
                 p.pivotInertia(), 0, p.gravity(), p.axisTilt());
         int n = (int) Math.floor(s.duration() * s.sampleRate()) + 1;

@@ -4,6 +4,7 @@ import java.nio.file.Path;
 import java.util.ArrayList;
 import java.util.EnumSet;
 import java.util.List;
+import java.util.Locale;
 import java.util.Optional;
 import java.util.Set;
 
@@ -21,6 +22,7 @@ import dev.penduline.physics.identify.ReleaseSession;
 import dev.penduline.physics.identify.SessionGuess;
 import dev.penduline.physics.motion.FrictionTorques;
 import dev.penduline.physics.swing.FrictionEstimates;
+import dev.penduline.physics.swing.PeriodCheck;
 import dev.penduline.physics.swing.SwingAnalysis;
 import dev.penduline.records.swing.SwingImportOptions;
 import dev.penduline.records.swing.SwingRecord;
@@ -119,12 +121,17 @@ public final class FrictionIdentification {
             throw new InputException("no records to fit");
         }
         MechanismProperties p = mechanism.properties();
+        Optional<String> still = SwingPrediction.noRestoringTorque(p);
+        if (still.isPresent()) {
+            throw new InputException(mechanism.label() + ": " + still.get());
+        }
         MechanismProperties aboutEquilibrium = new MechanismProperties(p.mass(), p.centroidDistance(),
                 p.pivotInertia(), 0, p.gravity(), p.axisTilt());
         List<ReleaseSession> releases = new ArrayList<>();
         List<String> warnings = new ArrayList<>();
         for (SessionInput s : sessions) {
             SwingAnalysis a = s.analysis();
+            requirePlausiblePeriod(s);
             double[] t = s.record().times();
             releases.add(new ReleaseSession(s.name(), t, s.record().angles(),
                     new SessionGuess(a.initialAngle(), a.release().time(), a.offset().value())));
@@ -149,6 +156,25 @@ public final class FrictionIdentification {
         }
         ModelComparison comparison = identifier.compare(problem, control);
         return new Outcome(mechanism, sessions, comparison.best(), Optional.of(comparison), true, warnings);
+    }
+
+    /** How far the measured small-angle period may be from the mechanism's before a fit is pointless. */
+    static final double PERIOD_RATIO_LIMIT = 3;
+
+    /**
+     * Refuses a record whose swings take a time unrelated to the mechanism's period: a fit could
+     * only bend the inertia to match, so the cause is named instead (a wrong time unit, another
+     * mechanism's record, or a parts list far off).
+     */
+    private static void requirePlausiblePeriod(SessionInput s) throws InputException {
+        PeriodCheck p = s.analysis().periodCheck();
+        double ratio = p.measuredSmallAnglePeriod() / p.predictedSmallAnglePeriod();
+        if (Double.isFinite(ratio) && (ratio > PERIOD_RATIO_LIMIT || ratio < 1 / PERIOD_RATIO_LIMIT)) {
+            throw new InputException(String.format(Locale.ROOT, "%s: its swings have a small-angle period of %.4g s, %.3g "
+                    + "times the mechanism's %.4g s: check the record's time unit (--time-unit), that the record belongs to "
+                    + "this mechanism, and the parts list (mass, centroid, inertia)", s.file(), p.measuredSmallAnglePeriod(),
+                    ratio, p.predictedSmallAnglePeriod()));
+        }
     }
 
     /**

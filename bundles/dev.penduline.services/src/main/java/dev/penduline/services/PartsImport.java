@@ -7,6 +7,7 @@ import java.nio.file.Files;
 import java.nio.file.NoSuchFileException;
 import java.nio.file.Path;
 import java.util.List;
+import java.util.Optional;
 
 import dev.penduline.model.Mechanism;
 import dev.penduline.model.ShapeAxis;
@@ -25,6 +26,7 @@ import dev.penduline.physics.inertia.PointMass;
 import dev.penduline.physics.inertia.SlenderRod;
 import dev.penduline.physics.inertia.Sphere;
 import dev.penduline.physics.inertia.ThinRing;
+import dev.penduline.records.PlainText;
 import dev.penduline.records.RecordFormatException;
 import dev.penduline.records.parts.PartsList;
 import dev.penduline.records.parts.PartsListReader;
@@ -66,6 +68,10 @@ public final class PartsImport {
      * @throws InputException when the target exists or cannot be written
      */
     public static void write(String name, PartsList parts, Path target) throws InputException {
+        Optional<String> badName = PlainText.nameProblem(name);
+        if (badName.isPresent()) {
+            throw new InputException("the mechanism's name " + badName.get());
+        }
         if (Files.exists(target)) {
             throw new InputException(target + ": already exists; choose another name or remove it first");
         }

@@ -21,6 +21,7 @@ import dev.penduline.model.TestSession;
 import dev.penduline.model.TimeUnit;
 import dev.penduline.model.naming.NamedElements;
 import dev.penduline.physics.units.Unit;
+import dev.penduline.records.PlainText;
 import dev.penduline.records.RecordFormatException;
 import dev.penduline.records.swing.ColumnChoice;
 import dev.penduline.records.swing.SwingImportOptions;
@@ -92,6 +93,11 @@ public final class SessionRecords {
                 : project.resolve(RECORDS_FOLDER).resolve(source.getFileName());
         String relative = project.relativize(stored).toString().replace('\\', '/');
         String sessionName = name != null ? name : source.getFileName().toString().replaceFirst("\\.[^.]*$", "");
+        Optional<String> badName = PlainText.nameProblem(sessionName);
+        if (badName.isPresent()) {
+            throw new InputException("the session's name " + (name != null ? "" : "(the record's file name) ") + badName.get()
+                    + (name != null ? "" : "; give another with --name"));
+        }
         TestSession session = NamedElements.addSession(mechanism, sessionName, relative);
         store(session, record.mapping());
         session.setContentHash(record.sha256());
@@ -99,7 +105,7 @@ public final class SessionRecords {
             session.setReleaseAngle(releaseAngle);
         }
         if (notes != null) {
-            session.setNotes(notes);
+            session.setNotes(PlainText.note(notes));
         }
         MechanismStore.check(mechanism, mechanismFile);
         boolean copied = !stored.equals(source) && copyInto(source, stored, record.sha256());

@@ -1,5 +1,8 @@
 package dev.penduline.services;
 
+import java.util.Locale;
+import java.util.Optional;
+
 import dev.penduline.physics.MechanismProperties;
 import dev.penduline.physics.motion.FrictionTorques;
 import dev.penduline.physics.motion.SwingRun;
@@ -36,12 +39,65 @@ public final class SwingPrediction {
             throw new InputException("duration × rate asks for more than 50 million samples; lower the rate");
         }
         MechanismProperties p = mechanism.properties();
+        requireSwing(p, friction, theta0, omega0);
         MechanismProperties aboutEquilibrium = new MechanismProperties(p.mass(), p.centroidDistance(),
                 p.pivotInertia(), 0, p.gravity(), p.axisTilt());
         try {
             return new SwingSimulator(aboutEquilibrium, friction).simulate(theta0, omega0, duration, sampleRate);
         } catch (IllegalArgumentException e) {
             throw new InputException(e.getMessage(), e);
+        }
+    }
+
+    /**
+     * Why a mechanism cannot swing at all, if it cannot: its centroid on the pivot axis (no
+     * restoring torque, so no equilibrium to swing about) or no inertia about the pivot.
+     *
+     * @param p the mechanism
+     * @return the reason in words, empty when it can swing
+     */
+    public static Optional<String> noRestoringTorque(MechanismProperties p) {
+        double gyration = p.pivotInertia() > 0 && p.mass() > 0 ? Math.sqrt(p.pivotInertia() / p.mass()) : 0;
+        if (!(p.pivotInertia() > 0)) {
+            return Optional.of("the inertia about the pivot is 0: every part lies on the pivot axis, so there is nothing to "
+                    + "swing; check the parts' coordinates (the pivot axis is the z axis through the origin)");
+        }
+        if (!(Math.abs(p.centroidDistance()) > 1e-9 * gyration)) {
+            return Optional.of("the centroid lies on the pivot axis (Lc = 0): a body balanced on its pivot has no restoring "
+                    + "torque and does not swing; check the parts' coordinates (the pivot axis is the z axis through the origin)");
+        }
+        return Optional.empty();
+    }
+
+    /** The largest drag torque at the swing's natural speed, against the gravity torque m·g·Lc, that is still a swing. */
+    static final double DRAG_TO_GRAVITY_LIMIT = 1e4;
+
+    /**
+     * Refuses a drag coefficient so large that the body could only creep: at the speed a swing of
+     * this amplitude reaches (about ω_n·θ0, or the given start velocity) the drag torque would
+     * exceed the gravity torque m·g·Lc by {@value #DRAG_TO_GRAVITY_LIMIT} times. Such a motion
+     * is not a swing and the integration cannot follow it; a value that large is nearly always a
+     * unit mistake.
+     *
+     * @param p        the mechanism
+     * @param friction the friction torques
+     * @param theta0   release angle (rad)
+     * @param omega0   initial angular velocity (rad/s)
+     * @throws InputException naming the coefficient and the ratio
+     */
+    static void requireSwing(MechanismProperties p, FrictionTorques friction, double theta0, double omega0)
+            throws InputException {
+        Optional<String> still = noRestoringTorque(p);
+        if (still.isPresent()) {
+            throw new InputException(still.get());
+        }
+        double gravityTorque = p.mass() * p.gravity() * Math.abs(p.centroidDistance());
+        double speed = Math.max(p.naturalFrequency() * Math.abs(theta0), Math.abs(omega0));
+        double dragTorque = friction.drag() * speed * speed;
+        if (gravityTorque > 0 && dragTorque > DRAG_TO_GRAVITY_LIMIT * gravityTorque) {
+            throw new InputException(String.format(Locale.ROOT, "drag %.3g N·m·s²/rad² would brake this swing with "
+                    + "%.2g times the gravity torque m·g·Lc = %.3g N·m: the body could only creep, which is not a swing. "
+                    + "Check the value and its unit (N·m·s²/rad²)", friction.drag(), dragTorque / gravityTorque, gravityTorque));
         }
     }
 }

@@ -10,6 +10,7 @@ import dev.penduline.cli.Command;
 import dev.penduline.cli.ExitCode;
 import dev.penduline.cli.UsageException;
 import dev.penduline.physics.units.Unit;
+import dev.penduline.records.PlainText;
 import dev.penduline.services.InputException;
 import dev.penduline.services.SessionRecords;
 
@@ -61,6 +62,10 @@ public final class AddSessionCommand implements Command {
                     a.value("notes"));
         } catch (InputException e) {
             throw new UsageException(e.getMessage());
+        }
+        String notes = a.value("notes");
+        if (notes != null && !PlainText.note(notes).equals(notes)) {
+            err.println("note: control characters in --notes were replaced by U+FFFD (a mechanism file cannot hold them)");
         }
         for (String s : added.record().assumptions()) {
             err.println("assumed: " + s);

@@ -66,8 +66,8 @@ public final class DemoRecordCommand implements Command {
                     a.number("stiction", 0), a.number("drag", 0));
             DemoRecords.Settings settings = new DemoRecords.Settings(Unit.DEGREE.toSi(a.requiredNumber("theta0-deg")),
                     Unit.DEGREE.toSi(a.number("offset-deg", 0)), Unit.DEGREE.toSi(a.number("noise-deg", 0.02)),
-                    a.number("counts-per-rev", 4096), a.number("still-s", 1.5), a.number("duration", 60),
-                    a.number("rate", 500), (long) a.number("seed", 1));
+                    a.whole("counts-per-rev", 4096), a.number("still-s", 1.5), a.number("duration", 60),
+                    a.number("rate", 500), a.whole("seed", 1));
             DemoRecords.write(mechanism, friction, settings, Path.of(a.value("out")));
         } catch (IllegalArgumentException | InputException e) {
             throw new UsageException(e.getMessage());

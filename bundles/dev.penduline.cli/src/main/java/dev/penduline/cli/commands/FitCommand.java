@@ -87,18 +87,15 @@ public final class FitCommand implements Command {
         Optional<Set<FrictionTerm>> terms = terms(a.value("terms"));
         FitSettings settings = FitSettings.defaults();
         if (a.has("resamples") || a.has("seed")) {
-            settings = settings.withResampling((int) a.number("resamples", settings.resamples()),
-                    (long) a.number("seed", settings.seed()), settings.parallel());
+            settings = settings.withResampling((int) a.whole("resamples", settings.resamples()),
+                    a.whole("seed", settings.seed()), settings.parallel());
         }
         if (a.has("max-iterations")) {
-            int it = (int) a.number("max-iterations", settings.maxIterations());
+            int it = (int) a.whole("max-iterations", settings.maxIterations());
             settings = settings.withLimits(it, Math.max(2 * it, settings.maxEvaluations()));
         }
         if (a.has("verdict-margin")) {
             double pp = a.number("verdict-margin", 100 * settings.verdictMargin());
-            if (!(pp >= 0 && pp < 100)) {
-                throw new UsageException("--verdict-margin: give percentage points from 0 to below 100; got " + pp);
-            }
             settings = settings.withVerdictRules(pp / 100, settings.misfitRatio());
         }
         Outcome outcome;

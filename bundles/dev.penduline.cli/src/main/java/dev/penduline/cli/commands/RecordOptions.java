@@ -81,7 +81,7 @@ final class RecordOptions {
                 o = o.withAngleUnit(unit("angle-unit", v, Set.of("deg", "rad", "counts")));
             }
             if (a.has("counts-per-rev")) {
-                o = o.withCountsPerRevolution(a.number("counts-per-rev", Double.NaN));
+                o = o.withCountsPerRevolution(a.whole("counts-per-rev", 0));
             }
             if (a.has("delimiter")) {
                 o = o.withDelimiter(switch (a.value("delimiter").toLowerCase(Locale.ROOT)) {

@@ -31,7 +31,6 @@ public final class NoiseFloor {
 
     /** Still samples needed for the still-segment look. */
     static final int MIN_STILL = 30;
-    private static final double SQRT_70 = Math.sqrt(70);
 
     private NoiseFloor() {
     }
@@ -142,14 +141,7 @@ public final class NoiseFloor {
 
     /** Noise standard deviation from the MAD of fourth differences (rad); NaN for short records. */
     static double highPass(double[] y) {
-        if (y.length < 10) {
-            return Double.NaN;
-        }
-        final double[] d = new double[y.length - 4];
-        for (int i = 0; i < d.length; i++) {
-            d[i] = y[i + 4] - 4 * y[i + 3] + 6 * y[i + 2] - 4 * y[i + 1] + y[i];
-        }
-        return RobustStatistics.MAD_TO_SIGMA * RobustStatistics.mad(d, 0, d.length, 0) / SQRT_70;
+        return RobustStatistics.highPassSigma(y);
     }
 
     private static double standardDeviation(double[] y, int from, int to) {

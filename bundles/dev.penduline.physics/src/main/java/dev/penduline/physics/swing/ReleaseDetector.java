@@ -92,9 +92,12 @@ public final class ReleaseDetector {
             }
             if (departure < 0 || range == 0) {
                 throw new IllegalArgumentException("the angle never leaves its starting level by more than "
-                        + (threshold * sigma + q) + " rad: the record shows no release");
+                        + RobustStatistics.degrees(threshold * sigma + q) + ": the record shows no release");
             }
             if (departure < 3) {
+                // no still segment to measure the noise on: the first samples are already the swing
+                final double highPass = RobustStatistics.highPassSigma(theta);
+                sigma = Math.max(floor, Double.isFinite(highPass) ? highPass : sigma);
                 return new Release(t[0], 0, 0, theta[0], sigma, q, 0, false,
                         "no still segment: the record starts moving; release taken at the first sample");
             }

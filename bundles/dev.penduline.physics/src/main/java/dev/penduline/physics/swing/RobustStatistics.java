@@ -1,6 +1,7 @@
 package dev.penduline.physics.swing;
 
 import java.util.Arrays;
+import java.util.Locale;
 
 /**
  * Median and median absolute deviation (MAD), the robust location and spread used to read the
@@ -69,6 +70,36 @@ public final class RobustStatistics {
             }
         }
         return multiples >= 0.95 * jumps ? smallest : 0;
+    }
+
+    /**
+     * An angle in radians written in degrees with four significant figures, for messages.
+     *
+     * @param radians the angle (rad)
+     * @return e.g. {@code "12.35°"}
+     */
+    public static String degrees(double radians) {
+        return String.format(Locale.ROOT, "%.4g°", Math.toDegrees(radians));
+    }
+
+    /**
+     * The standard deviation of white noise on a smooth signal, from the MAD of its fourth
+     * differences: for white noise of σ a fourth difference has variance 70·σ² (the sum of the
+     * squared binomial weights 1, 4, 6, 4, 1), while a signal sampled many times per period
+     * contributes only (ω·Δt)⁴ of its amplitude.
+     *
+     * @param y the samples
+     * @return σ in the samples' unit, NaN for fewer than 10 samples
+     */
+    public static double highPassSigma(double[] y) {
+        if (y.length < 10) {
+            return Double.NaN;
+        }
+        final double[] d = new double[y.length - 4];
+        for (int i = 0; i < d.length; i++) {
+            d[i] = y[i + 4] - 4 * y[i + 3] + 6 * y[i + 2] - 4 * y[i + 1] + y[i];
+        }
+        return MAD_TO_SIGMA * mad(d, 0, d.length, 0) / Math.sqrt(70);
     }
 
     /** Median spacing of sample times. */

@@ -93,6 +93,7 @@ public final class SwingAnalyzer {
         for (MeasuredTurningPoint p : outline.points()) {
             points.add(p.withAmplitudeFrom(offset.value()));
         }
+        requireDecay(points, release.noise());
         final double step = RobustStatistics.medianStep(tt);
         final double period = Double.isFinite(outline.period()) ? outline.period() : tt[tt.length - 1] - tt[0];
         SavitzkyGolay filter = SavitzkyGolay.forSwing(step, period);
@@ -254,20 +255,43 @@ public final class SwingAnalyzer {
                 resolution, note);
     }
 
+    /** A free swing only loses energy: turning points that grow mean a driven body, or not an angle at all. */
+    private static void requireDecay(List<MeasuredTurningPoint> points, double noise) {
+        if (points.size() < 3) {
+            return;
+        }
+        final double first = points.get(0).amplitude();
+        final double last = points.get(points.size() - 1).amplitude();
+        if (Double.isFinite(first) && Double.isFinite(last) && last > 1.25 * first && last - first > 8 * noise) {
+            throw new IllegalArgumentException("the swing grows instead of decaying (amplitude " + RobustStatistics.degrees(first)
+                    + " at the first turning point, " + RobustStatistics.degrees(last) + " at the last): a free swing only loses "
+                    + "energy, so this is not a free release (a driven body?) or the angle column is not the angle");
+        }
+    }
+
     private static void check(double[] t, double[] theta) {
         if (t.length != theta.length) {
             throw new IllegalArgumentException("times and angles differ in length: " + t.length + " and "
                     + theta.length);
         }
+        double min = Double.POSITIVE_INFINITY;
+        double max = Double.NEGATIVE_INFINITY;
         for (int i = 0; i < t.length; i++) {
             if (!Double.isFinite(t[i]) || !Double.isFinite(theta[i])) {
                 throw new IllegalArgumentException("sample " + i + " is not finite: t = " + t[i] + " s, θ = "
                         + theta[i] + " rad");
             }
+            min = Math.min(min, theta[i]);
+            max = Math.max(max, theta[i]);
             if (i > 0 && !(t[i] > t[i - 1])) {
                 throw new IllegalArgumentException("times must increase: sample " + i + " at " + t[i]
                         + " s follows " + t[i - 1] + " s");
             }
+        }
+        if (max - min > 2 * Math.PI) {
+            throw new IllegalArgumentException("the angles span " + RobustStatistics.degrees(max - min) + ", more than a full turn: "
+                    + "a free swing spans less than 360° (twice its release angle at most); check the angle unit (degrees, "
+                    + "radians or counts) and the counts per revolution");
         }
     }
 

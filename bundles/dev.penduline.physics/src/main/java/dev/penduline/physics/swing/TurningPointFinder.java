@@ -32,8 +32,8 @@ final class TurningPointFinder {
         double hysteresis = 1.5 * band + 0.002 * Math.abs(start - centre);
         List<Integer> crossings = crossings(theta, centre, hysteresis, start);
         if (crossings.isEmpty()) {
-            throw new IllegalArgumentException("the angle never swings through its centre (" + centre
-                    + " rad) by more than the noise band " + hysteresis + " rad: no swing to analyse");
+            throw new IllegalArgumentException("the angle never swings through its centre (" + RobustStatistics.degrees(centre)
+                    + ") by more than the noise band " + RobustStatistics.degrees(hysteresis) + ": no swing to analyse");
         }
         double period = period(t, crossings);
         // with a single crossing, the first comes about a quarter period after the release

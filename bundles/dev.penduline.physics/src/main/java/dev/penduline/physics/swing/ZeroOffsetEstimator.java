@@ -40,8 +40,9 @@ final class ZeroOffsetEstimator {
                     + runs.length + " runs of consecutive half-swings, which cancels the alternating dry-friction"
                     + " shift)";
             if (Double.isFinite(settledLevel)) {
-                note += "; the body settled at " + settledLevel + " rad, " + (settledLevel - value)
-                        + " rad from it: with dry friction or stiction the rest angle is not the equilibrium";
+                note += "; the body settled at " + RobustStatistics.degrees(settledLevel) + ", "
+                        + RobustStatistics.degrees(settledLevel - value)
+                        + " from it: with dry friction or stiction the rest angle is not the equilibrium";
             }
             return new ZeroOffset(value, uncertainty, ZeroOffset.Method.SWING_SYMMETRY, note);
         }
@@ -55,7 +56,8 @@ final class ZeroOffsetEstimator {
             final double value = 0.5 * (points.get(0).angle() + points.get(1).angle());
             final double bias = 0.5 * Math.abs(points.get(0).angle() - points.get(1).angle());
             return new ZeroOffset(value, Double.NaN, ZeroOffset.Method.SINGLE_HALF_SWING,
-                    "midpoint of the only half-swing, biased by half its decrement (the half-swing spans " + 2 * bias + " rad)");
+                    "midpoint of the only half-swing, biased by half its decrement (the half-swing spans "
+                            + RobustStatistics.degrees(2 * bias) + ")");
         }
         throw new IllegalArgumentException("a single turning point and no settled tail: the equilibrium cannot"
                 + " be estimated from this record");

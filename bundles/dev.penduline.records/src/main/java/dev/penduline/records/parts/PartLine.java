@@ -3,6 +3,7 @@ package dev.penduline.records.parts;
 import java.util.EnumSet;
 import java.util.List;
 import java.util.Locale;
+import java.util.Optional;
 import java.util.OptionalDouble;
 import java.util.Set;
 
@@ -20,11 +21,14 @@ import dev.penduline.physics.inertia.Sphere;
 import dev.penduline.physics.inertia.TensorCheck;
 import dev.penduline.physics.inertia.ThinRing;
 import dev.penduline.physics.inertia.Vector3;
+import dev.penduline.records.PlainText;
 import dev.penduline.records.RecordFormatException;
 
 /** Turns one data line of a parts list into a {@link Part}. */
 final class PartLine {
 
+    /** The largest number of identical parts on one line. */
+    static final int MAX_QUANTITY = 1_000_000;
     private static final List<String> SHAPES = List.of("point", "rod", "box", "cylinder", "sphere", "ring", "tensor");
     private static final Set<PartsColumn> GEOMETRY = EnumSet.of(PartsColumn.LENGTH, PartsColumn.WIDTH,
             PartsColumn.HEIGHT, PartsColumn.RADIUS, PartsColumn.INNER_RADIUS, PartsColumn.AXIS, PartsColumn.IXX,
@@ -42,6 +46,10 @@ final class PartLine {
         }
         final String name = row.text(PartsColumn.NAME)
                 .orElseThrow(() -> row.error(PartsColumn.NAME, "empty: every part needs a name"));
+        final Optional<String> bad = PlainText.nameProblem(name);
+        if (bad.isPresent()) {
+            throw row.error(PartsColumn.NAME, bad.get());
+        }
         final String kind = row.text(PartsColumn.SHAPE).map(s -> s.toLowerCase(Locale.ROOT))
                 .orElseThrow(() -> row.error(PartsColumn.SHAPE, "empty: use one of " + String.join(", ", SHAPES)));
         final String why = "by a " + kind;
@@ -165,12 +173,12 @@ final class PartLine {
         final String t = row.text(PartsColumn.QUANTITY).orElse("1");
         try {
             final int q = Integer.parseInt(t);
-            if (q >= 1) {
+            if (q >= 1 && q <= MAX_QUANTITY) {
                 return q;
             }
         } catch (NumberFormatException e) {
             // reported below with the file, line and column
         }
-        throw row.error(PartsColumn.QUANTITY, "'" + t + "' is not a whole number of at least 1");
+        throw row.error(PartsColumn.QUANTITY, "'" + t + "' is not a whole number from 1 to " + MAX_QUANTITY);
     }
 }

@@ -54,6 +54,22 @@ enum PartsColumn {
         return quantity;
     }
 
+    /**
+     * The largest magnitude a value of this column can have on a pivoted mechanism, in SI, with a
+     * wide margin (common practice, not a standard): 10 km for lengths and coordinates, 1 000 t for
+     * masses, 10⁵ kg/m³ for densities (the densest element is about 2.26·10⁴ kg/m³), 10¹² kg·m² for
+     * inertias. A larger value is a unit mistake, and it would overflow the inertia sums.
+     */
+    double maxMagnitude() {
+        return switch (quantity) {
+            case LENGTH -> 1e4;
+            case MASS -> 1e6;
+            case DENSITY -> 1e5;
+            case INERTIA -> 1e12;
+            default -> Double.MAX_VALUE;
+        };
+    }
+
     boolean isText() {
         return quantity == null;
     }

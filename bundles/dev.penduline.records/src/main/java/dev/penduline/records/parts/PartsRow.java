@@ -1,6 +1,7 @@
 package dev.penduline.records.parts;
 
 import java.util.List;
+import java.util.Locale;
 import java.util.Optional;
 import java.util.OptionalDouble;
 import java.util.regex.Pattern;
@@ -69,8 +70,10 @@ final class PartsRow {
             throw error(column, "'" + t.get() + "' is not a number");
         }
         final double v = header.slot(column).orElseThrow().unit().toSi(Double.parseDouble(t.get()));
-        if (!Double.isFinite(v)) {
-            throw error(column, "'" + t.get() + "' is out of range");
+        if (!Double.isFinite(v) || Math.abs(v) > column.maxMagnitude()) {
+            String limit = String.format(Locale.ROOT, "%.0e", column.maxMagnitude()).replace("e+0", "e");
+            throw error(column, "'" + t.get() + "' is out of range: at most " + limit + " " + column.quantity().siSymbol()
+                    + " in size (is the unit right?)");
         }
         return OptionalDouble.of(v);
     }

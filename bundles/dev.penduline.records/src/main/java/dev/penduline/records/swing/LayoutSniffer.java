@@ -11,6 +11,7 @@ import dev.penduline.physics.units.Quantity;
 import dev.penduline.physics.units.SuffixedName;
 import dev.penduline.physics.units.Unit;
 import dev.penduline.records.DelimitedLine;
+import dev.penduline.records.PlainText;
 import dev.penduline.records.RecordFormatException;
 
 /**
@@ -51,12 +52,22 @@ final class LayoutSniffer {
                     : "no header row: the first line holds numbers only");
         }
         final int headerLine = lines.get(0).number();
+        if (header) {
+            requireDistinctNames(first, file, headerLine);
+        }
         final ColumnChoice time = column(o.timeColumn(), header ? first : null, TIME_NAMES, Set.of(), 1, -1, "time",
                 file, headerLine, assumptions);
         final ColumnChoice angle = column(o.angleColumn(), header ? first : null, ANGLE_NAMES, COUNT_NAMES, 2,
                 time.index(), "angle", file, headerLine, assumptions);
         if (time.index() == angle.index()) {
             throw new RecordFormatException(file, headerLine, time.label(), "chosen as both the time and the angle column");
+        }
+        for (ColumnChoice c : List.of(time, angle)) {
+            final Optional<String> bad = c.name() == null ? Optional.empty() : PlainText.nameProblem(c.name());
+            if (bad.isPresent()) {
+                throw new RecordFormatException(file, headerLine, null, "the name of column " + c.index() + " " + bad.get()
+                        + ": fix the header in a copy of the record, or choose the columns by position");
+            }
         }
         final Unit timeUnit = unit(o.timeUnit(), time, Quantity.TIME, Unit.SECOND, file, headerLine, assumptions);
         Unit angleUnit = o.angleUnit();
@@ -131,6 +142,20 @@ final class LayoutSniffer {
         }
         assumptions.add("decimal separator '.' (no decimals seen in the first lines)");
         return '.';
+    }
+
+    /** Two columns of one name would make a choice by name silently take one of them. */
+    private static void requireDistinctNames(List<String> header, String file, int line) throws RecordFormatException {
+        for (int i = 0; i < header.size(); i++) {
+            String name = header.get(i).strip();
+            for (int j = i + 1; j < header.size() && !name.isEmpty(); j++) {
+                if (header.get(j).strip().equalsIgnoreCase(name)) {
+                    throw new RecordFormatException(file, line, header.get(j).strip(), "columns " + (i + 1) + " and " + (j + 1)
+                            + " have the same name: rename one in a copy of the record, or choose the columns by "
+                            + "position (--time-column N, --angle-column N)");
+                }
+            }
+        }
     }
 
     private static ColumnChoice column(ColumnChoice given, List<String> header, Set<String> names, Set<String> alsoNames,

@@ -10,6 +10,8 @@ import dev.penduline.records.RecordFormatException;
 final class RecordChecks {
 
     private static final int MAX_GAP_WARNINGS = 20;
+    /** The shortest median sampling step taken for a swing record (s): 1 MHz. */
+    static final double MIN_STEP_S = 1e-6;
 
     private RecordChecks() {
     }
@@ -54,6 +56,11 @@ final class RecordChecks {
         }
         if (gaps > MAX_GAP_WARNINGS) {
             warnings.add(file + ": " + (gaps - MAX_GAP_WARNINGS) + " more gaps not listed");
+        }
+        if (!(median >= MIN_STEP_S)) {
+            throw new RecordFormatException(file, 0, mapping.timeColumn().name(), "the median time step is "
+                    + SwingRecordReader.format(median) + " s, faster than any swing-test sampling (1 MHz at most, common "
+                    + "practice): check the time unit (--time-unit s, ms or us)");
         }
         if (median > 0.5 && mapping.timeUnit().equals(Unit.SECOND)) {
             warnings.add(file + ": the median step is " + SwingRecordReader.format(median)

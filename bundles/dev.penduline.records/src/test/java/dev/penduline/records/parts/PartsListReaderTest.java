@@ -177,7 +177,7 @@ class PartsListReaderTest {
                 .contains("column 'inner_radius_m'"));
         assertEquals("parts.csv:2: column 'cutout': 'maybe' is not true or false",
                 failure(h + "a,point,1,,0,0,0,,,,,maybe,\n").getMessage());
-        assertEquals("parts.csv:2: column 'quantity': '2.5' is not a whole number of at least 1",
+        assertEquals("parts.csv:2: column 'quantity': '2.5' is not a whole number from 1 to 1000000",
                 failure(h + "a,point,1,,0,0,0,,,,,,2.5\n").getMessage());
         assertTrue(failure(h + "a,point,NaN,,0,0,0,,,,,,\n").getMessage().contains("'NaN' is not a number"));
         assertTrue(failure(h + ",point,1,,0,0,0,,,,,,\n").getMessage().contains("column 'name': empty"));
