@@ -81,7 +81,12 @@ final class RecordOptions {
                 o = o.withAngleUnit(unit("angle-unit", v, Set.of("deg", "rad", "counts")));
             }
             if (a.has("counts-per-rev")) {
-                o = o.withCountsPerRevolution(a.whole("counts-per-rev", 0));
+                long cpr = a.whole("counts-per-rev", 0);
+                if (cpr < 4) {
+                    throw new UsageException("option --counts-per-rev: '" + cpr + "' is out of range for a record: an encoder "
+                            + "has at least 4 counts per revolution");
+                }
+                o = o.withCountsPerRevolution(cpr);
             }
             if (a.has("delimiter")) {
                 o = o.withDelimiter(switch (a.value("delimiter").toLowerCase(Locale.ROOT)) {
