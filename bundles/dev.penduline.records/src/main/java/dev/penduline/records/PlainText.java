@@ -27,6 +27,15 @@ public final class PlainText {
         return c < 0x20 || c == 0x7f || c >= 0x80 && c < 0xa0;
     }
 
+    /** Half of a surrogate pair without its other half: no character at all, and not writable as UTF-8. */
+    private static boolean isLoneSurrogate(String s, int i) {
+        char c = s.charAt(i);
+        if (Character.isHighSurrogate(c)) {
+            return i + 1 >= s.length() || !Character.isLowSurrogate(s.charAt(i + 1));
+        }
+        return Character.isLowSurrogate(c) && (i == 0 || !Character.isHighSurrogate(s.charAt(i - 1)));
+    }
+
     /**
      * Why a text cannot be a name, if it cannot.
      *
@@ -40,9 +49,7 @@ public final class PlainText {
                 return Optional.of(String.format(Locale.ROOT, "holds a control character (U+%04X) at position %d; names are plain text on "
                         + "one line", (int) c, i + 1));
             }
-            if (Character.isSurrogate(c) && !(Character.isHighSurrogate(c) && i + 1 < name.length()
-                    && Character.isLowSurrogate(name.charAt(i + 1)) || Character.isLowSurrogate(c) && i > 0
-                    && Character.isHighSurrogate(name.charAt(i - 1)))) {
+            if (isLoneSurrogate(name, i)) {
                 return Optional.of(String.format(Locale.ROOT, "holds a broken character (U+%04X) at position %d", (int) c, i + 1));
             }
         }
@@ -63,10 +70,7 @@ public final class PlainText {
             if (c == '\r' && i + 1 < note.length() && note.charAt(i + 1) == '\n') {
                 continue;
             }
-            boolean lone = Character.isSurrogate(c) && !(Character.isHighSurrogate(c) && i + 1 < note.length()
-                    && Character.isLowSurrogate(note.charAt(i + 1)) || Character.isLowSurrogate(c) && i > 0
-                    && Character.isHighSurrogate(note.charAt(i - 1)));
-            b.append(c != '\n' && c != '\t' && isControl(c) || lone ? REPLACEMENT : c);
+            b.append(c != '\n' && c != '\t' && isControl(c) || isLoneSurrogate(note, i) ? REPLACEMENT : c);
         }
         return b.toString();
     }

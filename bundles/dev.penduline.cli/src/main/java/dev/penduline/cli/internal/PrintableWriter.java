@@ -4,6 +4,8 @@ import java.io.FilterWriter;
 import java.io.IOException;
 import java.io.Writer;
 
+import dev.penduline.records.PlainText;
+
 /**
  * Passes text on with every control character other than line feed and tab written as a visible
  * escape (the escape character ESC becomes the six characters backslash, u, 0, 0, 1, b), so that a
@@ -28,7 +30,7 @@ public final class PrintableWriter extends FilterWriter {
      * @return true for C0 and C1 controls and DEL, except line feed and tab
      */
     public static boolean isControl(char c) {
-        return c < 0x20 && c != '\n' && c != '\t' || c == 0x7f || c >= 0x80 && c < 0xa0;
+        return c != '\n' && c != '\t' && PlainText.isControl(c);
     }
 
     /**

@@ -90,7 +90,7 @@ public final class NoiseFloor {
                 stillSigma = standardDeviation(y, 0, still);
             }
         }
-        final double high = highPass(y);
+        final double high = RobustStatistics.highPassSigma(y);
         final double q = RobustStatistics.quantum(y);
         double sigma = high;
         String method = "high-pass";
@@ -137,11 +137,6 @@ public final class NoiseFloor {
      */
     static List<Estimate> of(List<ReleaseSession> sessions) {
         return sessions.stream().map(NoiseFloor::of).toList();
-    }
-
-    /** Noise standard deviation from the MAD of fourth differences (rad); NaN for short records. */
-    static double highPass(double[] y) {
-        return RobustStatistics.highPassSigma(y);
     }
 
     private static double standardDeviation(double[] y, int from, int to) {
