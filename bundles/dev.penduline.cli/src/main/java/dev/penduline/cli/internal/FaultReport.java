@@ -56,7 +56,7 @@ public final class FaultReport {
         if (failure instanceof OutOfMemoryError) {
             long mb = Runtime.getRuntime().maxMemory() / (1024 * 1024);
             what = "ran out of memory (the heap limit of this run is " + mb + " MB): the input is larger than this run can "
-                    + "hold. See README 'Limits' for the largest record and how to raise the memory budget";
+                    + "hold; try a shorter record, or a larger heap (for example JAVA_TOOL_OPTIONS=-Xmx8g)";
         } else if (failure instanceof StackOverflowError) {
             what = "a computation nested too deeply and was stopped";
         } else {
