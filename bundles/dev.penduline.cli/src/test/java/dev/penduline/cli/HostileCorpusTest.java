@@ -22,6 +22,7 @@ import java.util.regex.Pattern;
 import java.util.stream.Stream;
 
 import org.junit.jupiter.api.DynamicTest;
+import org.junit.jupiter.api.Test;
 import org.junit.jupiter.api.TestFactory;
 
 /**
@@ -38,7 +39,7 @@ class HostileCorpusTest {
     private static final List<String> CLASSES = List.of("encoding", "structure", "numbers", "physics", "paths", "options", "sizes",
             "concurrency");
     /** What only a Java program's internals print: traces, exception class names, identity hash codes. */
-    private static final Pattern INTERNALS = Pattern.compile(
+    static final Pattern INTERNALS = Pattern.compile(
             "\tat |Exception in thread|Caused by:|\\bjava\\.[a-z]+\\.|\\b[A-Z]\\w+(Exception|Error)\\b|\\b[A-Za-z]\\w*@[0-9a-f]{5,}\\b");
     private static final int DEFAULT_LIMIT_S = 60;
     private static final int DEFAULT_HEAP_MB = 768;
@@ -53,6 +54,20 @@ class HostileCorpusTest {
         List<Entry> entries = entries();
         assertTrue(entries.size() >= 80, "the corpus holds at least 80 entries, has " + entries.size());
         return entries.stream().map(e -> DynamicTest.dynamicTest(e.kind() + "/" + e.name(), () -> run(e)));
+    }
+
+    /** The check of every answer must itself be able to fail: it catches what only Java prints, and nothing else. */
+    @Test
+    void theInternalsCheckCatchesTracesClassNamesAndIdentityHashesButNotMessages() {
+        for (String javaOnly : List.of("\tat dev.penduline.x.Y.run(Y.java:3)", "Exception in thread \"main\" boom",
+                "java.lang.IllegalStateException: x", "saw dev.penduline.model.impl.MechanismImpl@44ebcd03", "a NullPointerException",
+                "Caused by: x", "OutOfMemoryError")) {
+            assertTrue(INTERNALS.matcher(javaOnly).find(), javaOnly);
+        }
+        for (String message : List.of("penduline inertia: parts.csv:2: column 'mass_kg': 'abc' is not a number",
+                "warning: the centroid lies on the pivot axis (Lc = 0)", "Error: see the log at /tmp/x@host.log", "exceptions")) {
+            assertFalse(INTERNALS.matcher(message).find(), message);
+        }
     }
 
     static List<Entry> entries() throws IOException {
