@@ -1,7 +1,6 @@
 package dev.penduline.services;
 
 import java.io.IOException;
-import java.nio.file.NoSuchFileException;
 import java.nio.file.Path;
 import java.util.ArrayList;
 import java.util.List;
@@ -116,13 +115,15 @@ public final class MechanismLoader {
     }
 
     /**
-     * Reads a mechanism file without computing anything.
+     * Reads a mechanism file without computing anything. A named pipe, a device or a folder is
+     * refused without opening it.
      *
      * @param file the mechanism file
      * @return the mechanism
      * @throws InputException with file, line and column when it cannot be read
      */
     public static Mechanism readMechanism(Path file) throws InputException {
+        ReadableFiles.require(file, "a mechanism file (." + MechanismFormat.FILE_EXTENSION + ")");
         try {
             return MechanismFiles.load(file);
         } catch (MechanismFileException e) {
@@ -141,12 +142,8 @@ public final class MechanismLoader {
         PartsList list;
         try {
             list = new PartsListReader().read(file);
-        } catch (NoSuchFileException e) {
-            throw new InputException(file + ": no such file", e);
-        } catch (IOException e) {
-            throw new InputException(file + ": cannot be read (" + e.getMessage() + ")", e);
-        } catch (RecordFormatException e) {
-            throw new InputException(e.getMessage(), e);
+        } catch (IOException | RecordFormatException e) {
+            throw ReadableFiles.problem(file, e);
         }
         return summarise(file.toString(), list.parts(), list.warnings());
     }

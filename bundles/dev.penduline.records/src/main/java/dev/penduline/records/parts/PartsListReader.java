@@ -11,6 +11,7 @@ import java.util.List;
 
 import dev.penduline.physics.inertia.Part;
 import dev.penduline.records.DelimitedLine;
+import dev.penduline.records.InputFiles;
 import dev.penduline.records.RecordFormatException;
 
 /**
@@ -67,12 +68,14 @@ public final class PartsListReader {
     /**
      * Reads a parts list file (UTF-8).
      *
-     * @param file the file; it is opened for reading only
+     * @param file the file; it is opened for reading only, and only when it is a regular file (a named
+     *             pipe, a device or a folder is refused unopened, see {@link InputFiles})
      * @return the parts and warnings
      * @throws IOException            when the file cannot be read
      * @throws RecordFormatException  naming file, line and column of the first problem
      */
     public PartsList read(Path file) throws IOException, RecordFormatException {
+        InputFiles.requireRegularFile(file, "a parts list (a .csv file)");
         try (Reader in = Files.newBufferedReader(file, StandardCharsets.UTF_8)) {
             return read(in, file.toString());
         }

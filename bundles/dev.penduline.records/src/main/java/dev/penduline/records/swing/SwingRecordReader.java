@@ -17,6 +17,7 @@ import java.util.List;
 import java.util.Locale;
 
 import dev.penduline.records.DelimitedLine;
+import dev.penduline.records.InputFiles;
 import dev.penduline.records.RecordFormatException;
 import dev.penduline.records.swing.LayoutSniffer.SampleLine;
 
@@ -55,13 +56,15 @@ public final class SwingRecordReader {
     /**
      * Reads a record file (UTF-8).
      *
-     * @param file    the file; opened for reading only
+     * @param file    the file; opened for reading only, and only when it is a regular file (a named pipe, a
+     *                device or a folder is refused unopened, see {@link InputFiles})
      * @param options what the user said; the rest is detected
      * @return the record, with its path, hash, mapping, assumptions and warnings
      * @throws IOException           when the file cannot be read
      * @throws RecordFormatException naming file, line and column of the first problem
      */
     public SwingRecord read(Path file, SwingImportOptions options) throws IOException, RecordFormatException {
+        InputFiles.requireRegularFile(file, "a swing record (a .csv file)");
         try (InputStream in = Files.newInputStream(file, StandardOpenOption.READ)) {
             return read(in, file.toString(), options);
         }
