@@ -42,7 +42,9 @@ public enum MechanismRule {
     /** A fit's numbers are consistent (correlation matrix size and range, shares, errors). */
     FIT_NUMBERS,
     /** A fit refers to sessions, a hypothesis and terms that exist. */
-    FIT_REFERENCE;
+    FIT_REFERENCE,
+    /** No two sessions of a mechanism have one record (the same path, or the same content hash). */
+    RECORD_DUPLICATE;
 
     /** Diagnostic source of every rule. */
     public static final String SOURCE = "dev.penduline.model";

@@ -39,6 +39,7 @@ final class MechanismRules {
                 h -> "hypothesis '" + h.getName() + "'", Literals.FRICTION_HYPOTHESIS__ID, out);
         IdentifierRules.unique(m.getSessions(), TestSession::getId, SessionRules::label,
                 Literals.TEST_SESSION__ID, out);
+        SessionRules.duplicates(m.getSessions(), out);
         IdentifierRules.unique(m.getFitResults(), FitResult::getId, f -> "fit '" + f.getName() + "'",
                 Literals.FIT_RESULT__ID, out);
         if (axisUsable && Problems.positive(m.getGravity())) {

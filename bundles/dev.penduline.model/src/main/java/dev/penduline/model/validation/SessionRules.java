@@ -1,5 +1,11 @@
 package dev.penduline.model.validation;
 
+import java.util.ArrayDeque;
+import java.util.Deque;
+import java.util.HashMap;
+import java.util.List;
+import java.util.Locale;
+import java.util.Map;
 import java.util.regex.Pattern;
 
 import dev.penduline.model.AngleUnit;
@@ -66,6 +72,48 @@ final class SessionRules {
             out.error(MechanismRule.RECORD_COLUMNS, s, Literals.TEST_SESSION__RELEASE_ANGLE,
                     who + ": release angle must be within ±π rad (got " + s.getReleaseAngle() + " rad)");
         }
+    }
+
+    /**
+     * Warns of sessions that share one record, by path (as written, {@code .} and {@code x/..} aside)
+     * or by content hash: a fit would count the same release twice. A warning, not an error, so that a
+     * hand-edited file still loads and the user can remove the extra session.
+     *
+     * @param sessions the sessions of one mechanism
+     * @param out      where the problems go
+     */
+    static void duplicates(List<TestSession> sessions, Problems out) {
+        final Map<String, TestSession> byPath = new HashMap<>();
+        final Map<String, TestSession> byHash = new HashMap<>();
+        for (TestSession s : sessions) {
+            final String path = Problems.blank(s.getRecordPath()) || recordPathProblem(s.getRecordPath()) != null ? null
+                    : normalised(s.getRecordPath());
+            final TestSession samePath = path == null ? null : byPath.putIfAbsent(path, s);
+            final String hash = Problems.blank(s.getContentHash()) ? null : s.getContentHash().toLowerCase(Locale.ROOT);
+            final TestSession sameHash = hash == null ? null : byHash.putIfAbsent(hash, s);
+            if (samePath != null) {
+                out.warning(MechanismRule.RECORD_DUPLICATE, s, Literals.TEST_SESSION__RECORD_PATH, label(s)
+                        + ": has the same record as " + label(samePath) + " (" + path + "); a fit would count that release"
+                        + " twice: remove one of the two sessions");
+            } else if (sameHash != null) {
+                out.warning(MechanismRule.RECORD_DUPLICATE, s, Literals.TEST_SESSION__CONTENT_HASH, label(s) + ": its record "
+                        + s.getRecordPath() + " has the same content (SHA-256) as the record of " + label(sameHash) + " ("
+                        + sameHash.getRecordPath() + "); a fit would count that release twice: remove one of the two sessions");
+            }
+        }
+    }
+
+    /** A relative record path with {@code .}, empty and {@code x/..} segments taken out. */
+    private static String normalised(String path) {
+        final Deque<String> kept = new ArrayDeque<>();
+        for (String segment : path.split("/")) {
+            if (segment.equals("..")) {
+                kept.pollLast();
+            } else if (!segment.isEmpty() && !segment.equals(".")) {
+                kept.addLast(segment);
+            }
+        }
+        return String.join("/", kept);
     }
 
     /**

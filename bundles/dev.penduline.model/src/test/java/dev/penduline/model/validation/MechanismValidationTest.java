@@ -152,6 +152,47 @@ class MechanismValidationTest {
         assertTrue(SessionRules.recordPathProblem(path) != null, path);
     }
 
+    /** A second session of a record the hatch already has, as a hand-edited file would hold it. */
+    private static TestSession secondSession(Mechanism m, String name, String path, String hash) {
+        final TestSession s = NamedElements.addSession(m, name, path);
+        s.setTimeColumnName("t");
+        s.setAngleColumnName("angle");
+        s.setAngleUnit(AngleUnit.DEGREE);
+        s.setContentHash(hash);
+        return s;
+    }
+
+    @Test
+    void twoSessionsOfOneRecordPathAreAWarningNamingBoth() {
+        final Mechanism m = InspectionHatch.create();
+        secondSession(m, "Again", "./records/x/../release-30.csv", "1".repeat(64));
+        assertEquals(List.of(), MechanismValidation.errors(m));
+        assertEquals(List.of("session 'Again': has the same record as session 'Release at 30°' (records/release-30.csv);"
+                + " a fit would count that release twice: remove one of the two sessions"), MechanismValidation.problems(m));
+        final Diagnostic leaf = MechanismValidation.validate(m).getChildren().get(0);
+        assertEquals(Diagnostic.WARNING, leaf.getSeverity());
+        assertEquals(MechanismRule.RECORD_DUPLICATE.code(), leaf.getCode());
+    }
+
+    @Test
+    void twoSessionsOfOneContentUnderTwoNamesAreAWarning() {
+        final Mechanism m = InspectionHatch.create();
+        final String hash = m.getSessions().get(0).getContentHash();
+        secondSession(m, "Copy", "records/copy-of-30.csv", hash);
+        assertEquals(List.of("session 'Copy': its record records/copy-of-30.csv has the same content (SHA-256) as the record"
+                + " of session 'Release at 30°' (records/release-30.csv); a fit would count that release twice: remove one of"
+                + " the two sessions"), MechanismValidation.problems(m));
+    }
+
+    @Test
+    void sessionsOfDifferentRecordsAreNoDuplicates() {
+        final Mechanism m = InspectionHatch.create();
+        secondSession(m, "Other", "records/release-45.csv", "2".repeat(64));
+        secondSession(m, "Unhashed", "records/release-50.csv", null);
+        assertEquals(List.of("session 'Unhashed': has no content hash, so a change to the record file would go unnoticed"),
+                MechanismValidation.problems(m));
+    }
+
     @Test
     void duplicateIdentifiersAreReported() {
         final Mechanism m = InspectionHatch.create();
