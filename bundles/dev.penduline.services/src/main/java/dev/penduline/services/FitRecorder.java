@@ -14,6 +14,7 @@ import dev.penduline.model.PendulineFactory;
 import dev.penduline.model.SessionFit;
 import dev.penduline.model.Setting;
 import dev.penduline.model.TermSetScore;
+import dev.penduline.model.TestSession;
 import dev.penduline.model.naming.NamedElements;
 import dev.penduline.physics.identify.CandidateScore;
 import dev.penduline.physics.identify.CorrelationTable;
@@ -51,8 +52,27 @@ public final class FitRecorder {
         String when = computedAt.truncatedTo(ChronoUnit.SECONDS).toString();
         FitResult r = NamedElements.addFitResult(m, "Fit " + when, when);
         fill(r, outcome);
+        keepFittedContent(m, outcome);
         MechanismStore.save(m, mechanismFile);
         return r.getId();
+    }
+
+    /**
+     * The fit was made on the records' content as read: a session whose record changed (and was
+     * accepted, see {@link FrictionIdentification#sessionsOf(Path, MechanismSource, boolean)}) gets
+     * that content's hash, so the stored fit and the stored hash agree.
+     */
+    private static void keepFittedContent(Mechanism m, FrictionIdentification.Outcome outcome) {
+        for (FrictionIdentification.SessionInput s : outcome.sessions()) {
+            if (s.change() == null) {
+                continue;
+            }
+            for (TestSession t : m.getSessions()) {
+                if (t.getId() != null && t.getId().equals(s.sessionId())) {
+                    t.setContentHash(s.record().sha256());
+                }
+            }
+        }
     }
 
     private static void fill(FitResult r, FrictionIdentification.Outcome outcome) {

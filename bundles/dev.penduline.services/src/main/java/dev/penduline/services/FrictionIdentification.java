@@ -36,9 +36,19 @@ import dev.penduline.records.swing.SwingRecord;
  */
 public final class FrictionIdentification {
 
-    /** One record to fit, with where it came from and its first analysis. */
+    /**
+     * One record to fit, with where it came from and its first analysis.
+     *
+     * @param name      the session's (or file's) name
+     * @param file      the record as the user knows it
+     * @param sessionId the session's identifier, null for a record given directly
+     * @param record    the record as read
+     * @param analysis  its first analysis
+     * @param warnings  what reading and analysing it found
+     * @param change    null, or that the session's record changed since it was added (its content was accepted)
+     */
     public record SessionInput(String name, String file, String sessionId, SwingRecord record, SwingAnalysis analysis,
-            List<String> warnings) {
+            List<String> warnings, String change) {
 
         /** Copies the list. */
         public SessionInput {
@@ -74,30 +84,62 @@ public final class FrictionIdentification {
         SwingRecord record = SessionRecords.read(file, options);
         SwingAnalysis analysis = SwingSessionAnalysis.analyse(record, Optional.of(mechanism));
         String name = file.getFileName().toString().replaceFirst("\\.[^.]*$", "");
-        return new SessionInput(name, file.toString(), null, record, analysis, record.warnings());
+        return new SessionInput(name, file.toString(), null, record, analysis, record.warnings(), null);
     }
 
     /**
-     * Reads and analyses every test session of a mechanism file.
+     * Reads and analyses every test session of a mechanism file; a session whose record changed
+     * since it was added is refused.
      *
      * @param mechanismFile the mechanism file
      * @param mechanism     the mechanism loaded from it
      * @return the prepared inputs, in the file's order
-     * @throws InputException when the file has no sessions or a record cannot be read
+     * @throws InputException when the file has no sessions, a record cannot be read or has changed
      */
     public static List<SessionInput> sessionsOf(Path mechanismFile, MechanismSource mechanism) throws InputException {
+        return sessionsOf(mechanismFile, mechanism, false);
+    }
+
+    /**
+     * Reads and analyses every test session of a mechanism file. Every record is read (and
+     * checked against its stored hash) before any is analysed, so that changed records are named
+     * all at once and first.
+     *
+     * @param mechanismFile  the mechanism file
+     * @param mechanism      the mechanism loaded from it
+     * @param acceptChanged  true to fit a record whose content changed since its session was added (its
+     *                       {@link SessionInput#change()} says so; storing the fit stores the new hash), false to refuse it
+     * @return the prepared inputs, in the file's order
+     * @throws InputException when the file has no sessions, a record is missing, outside the project or
+     *                        unreadable, or has changed and that is not accepted
+     */
+    public static List<SessionInput> sessionsOf(Path mechanismFile, MechanismSource mechanism, boolean acceptChanged)
+            throws InputException {
         Mechanism m = MechanismLoader.readMechanism(mechanismFile);
         if (m.getSessions().isEmpty()) {
             throw new InputException(mechanismFile + ": has no test sessions; add records with 'penduline add-session'"
                     + " or give them with --session");
         }
-        List<SessionInput> inputs = new ArrayList<>();
+        List<SessionRecords.SessionRecord> read = new ArrayList<>();
+        List<String> changed = new ArrayList<>();
         for (TestSession s : m.getSessions()) {
             SessionRecords.SessionRecord sr = SessionRecords.readSession(mechanismFile, s);
+            SessionRecords.changeOf(s, sr.record()).ifPresent(changed::add);
+            read.add(sr);
+        }
+        if (!changed.isEmpty() && !acceptChanged) {
+            throw new InputException(mechanismFile + ": not fitted, " + String.join("; ", changed) + ". A raw record should"
+                    + " never change: restore it (from version control or the rig's copy), or, if the new content is right,"
+                    + " accept it with --accept-changed-records (the fit then uses it and stores its hash)");
+        }
+        List<SessionInput> inputs = new ArrayList<>();
+        for (SessionRecords.SessionRecord sr : read) {
+            TestSession s = sr.session();
             SwingAnalysis analysis = SwingSessionAnalysis.analyse(sr.record(), Optional.of(mechanism));
             List<String> warnings = new ArrayList<>(sr.warnings());
             warnings.addAll(sr.record().warnings());
-            inputs.add(new SessionInput(s.getName(), s.getRecordPath(), s.getId(), sr.record(), analysis, warnings));
+            inputs.add(new SessionInput(s.getName(), s.getRecordPath(), s.getId(), sr.record(), analysis, warnings,
+                    SessionRecords.changeOf(s, sr.record()).orElse(null)));
         }
         return inputs;
     }

@@ -3,7 +3,7 @@ package dev.penduline.services;
 import java.io.IOException;
 import java.io.InputStream;
 import java.nio.file.Files;
-import java.nio.file.NoSuchFileException;
+import java.nio.file.LinkOption;
 import java.nio.file.Path;
 import java.nio.file.StandardCopyOption;
 import java.security.MessageDigest;
@@ -54,12 +54,8 @@ public final class SessionRecords {
     public static SwingRecord read(Path file, SwingImportOptions options) throws InputException {
         try {
             return new SwingRecordReader().read(file, options);
-        } catch (NoSuchFileException e) {
-            throw new InputException(file + ": no such file", e);
-        } catch (IOException e) {
-            throw new InputException(file + ": cannot be read (" + e.getMessage() + ")", e);
-        } catch (RecordFormatException e) {
-            throw new InputException(e.getMessage(), e);
+        } catch (IOException | RecordFormatException e) {
+            throw ReadableFiles.problem(file, e);
         } catch (IllegalArgumentException e) {
             throw new InputException(file + ": " + e.getMessage(), e);
         }
@@ -86,12 +82,14 @@ public final class SessionRecords {
     public static Added addSession(Path mechanismFile, Path recordFile, SwingImportOptions options, String name,
             double releaseAngle, String notes) throws InputException {
         Mechanism mechanism = MechanismLoader.readMechanism(mechanismFile);
-        SwingRecord record = read(recordFile, options);
         Path project = mechanismFile.toAbsolutePath().getParent();
         Path source = recordFile.toAbsolutePath().normalize();
         Path stored = source.startsWith(project) ? source
                 : project.resolve(RECORDS_FOLDER).resolve(source.getFileName());
         String relative = project.relativize(stored).toString().replace('\\', '/');
+        requireInside(project, stored, relative);
+        SwingRecord record = read(recordFile, options);
+        requireNew(mechanism, mechanismFile, project, stored, record);
         String sessionName = name != null ? name : source.getFileName().toString().replaceFirst("\\.[^.]*$", "");
         Optional<String> badName = PlainText.nameProblem(sessionName);
         if (badName.isPresent()) {
@@ -120,8 +118,126 @@ public final class SessionRecords {
         return new Added(session, record, copied, stored);
     }
 
-    /** A session's record as read back, with warnings about it (e.g. a changed raw file). */
+    /**
+     * Refuses a record the mechanism already has as a session, by path or by content: two sessions of one
+     * record would count the same release twice in a fit.
+     */
+    private static void requireNew(Mechanism mechanism, Path mechanismFile, Path project, Path stored, SwingRecord record)
+            throws InputException {
+        for (TestSession s : mechanism.getSessions()) {
+            if (s.getRecordPath() == null) {
+                continue;
+            }
+            boolean samePath = project.resolve(s.getRecordPath()).normalize().equals(stored);
+            boolean sameContent = record.sha256().equalsIgnoreCase(s.getContentHash());
+            if (samePath || sameContent) {
+                throw new InputException(record.source() + ": " + (samePath ? "is already the record of session '"
+                        + s.getName() + "'" : "has the same content (SHA-256 " + shortHash(record.sha256())
+                        + ") as the record of session '" + s.getName() + "' (" + s.getRecordPath() + ")") + " in "
+                        + mechanismFile + "; a record is added once (a second session of it would count the same release"
+                        + " twice); nothing was changed");
+            }
+        }
+    }
+
+    /**
+     * Refuses a record path that leads out of the project folder through a symbolic link (the path itself, or a
+     * folder on the way): the project would then depend on a file it does not carry. Paths are checked as
+     * written; {@code ..} and absolute paths are refused by the mechanism file's validation.
+     *
+     * @param project the project folder (the mechanism file's folder)
+     * @param file    the record, inside the project folder as written
+     * @param shown   the record's path as the user knows it (relative to the project)
+     * @throws InputException naming the link, where it leads, and what to do
+     */
+    static void requireInside(Path project, Path file, String shown) throws InputException {
+        Path realProject;
+        try {
+            realProject = project.toRealPath();
+        } catch (IOException e) {
+            realProject = project;
+        }
+        Path current = project;
+        for (Path part : project.relativize(file)) {
+            current = current.resolve(part);
+            if (!Files.isSymbolicLink(current)) {
+                continue;
+            }
+            Path target;
+            try {
+                target = current.toRealPath();
+            } catch (IOException e) {
+                target = linkTarget(current);
+            }
+            if (!target.startsWith(realProject)) {
+                String link = project.relativize(current).toString().replace('\\', '/');
+                throw new InputException((link.equals(shown) ? shown : shown + ": " + link) + " is a symbolic link to "
+                        + target + ", outside the project folder " + project + "; copy the record into " + RECORDS_FOLDER
+                        + "/ instead");
+            }
+        }
+    }
+
+    /** Where a link points, as written in it (for a link that leads nowhere). */
+    private static Path linkTarget(Path link) {
+        try {
+            return link.getParent().resolve(Files.readSymbolicLink(link)).normalize();
+        } catch (IOException e) {
+            return link;
+        }
+    }
+
+    /**
+     * The first digits of a SHA-256, enough to tell two contents apart in a message.
+     *
+     * @param sha256 the hash in hexadecimal
+     * @return its first twelve digits and an ellipsis
+     */
+    public static String shortHash(String sha256) {
+        return sha256 == null ? "none" : sha256.length() <= 12 ? sha256 : sha256.substring(0, 12) + "…";
+    }
+
+    /**
+     * A session's record as read back, with warnings about it (e.g. a changed raw file).
+     *
+     * @param session  the session
+     * @param file     where its record lies
+     * @param record   the record as read now
+     * @param warnings what the reader and the check of the stored hash found
+     */
     public record SessionRecord(TestSession session, Path file, SwingRecord record, List<String> warnings) {
+
+        /**
+         * Whether the record's content differs from the one the session was added with.
+         *
+         * @return true when the stored SHA-256 is not the record's
+         */
+        public boolean changed() {
+            return changeOf(session, record).isPresent();
+        }
+    }
+
+    /**
+     * Where a session's record lies, checked before it is opened: inside the project folder even
+     * through symbolic links, present, and a regular file.
+     *
+     * @param mechanismFile the mechanism file
+     * @param session       the session
+     * @return the record file
+     * @throws InputException naming the session, the file and what to do
+     */
+    public static Path recordFile(Path mechanismFile, TestSession session) throws InputException {
+        Path project = mechanismFile.toAbsolutePath().getParent();
+        String relative = session.getRecordPath();
+        Path file = project.resolve(relative).normalize();
+        requireInside(project, file, relative);
+        if (!Files.exists(file)) {
+            throw new InputException("session '" + session.getName() + "': its record " + relative + " is missing (no such"
+                    + " file in " + project + "); put the record back (from version control or the rig's copy), or fit"
+                    + " other records with --session");
+        }
+        ReadableFiles.require(file, "a swing record (a .csv file)");
+        return file;
     }
 
     /**
@@ -131,36 +247,48 @@ public final class SessionRecords {
      * @param mechanismFile the mechanism file
      * @param session       the session
      * @return the record
-     * @throws InputException when the record cannot be read
+     * @throws InputException when the record is missing, outside the project, not a regular file or unreadable
      */
     public static SessionRecord readSession(Path mechanismFile, TestSession session) throws InputException {
-        Path project = mechanismFile.toAbsolutePath().getParent();
-        Path file = project.resolve(session.getRecordPath()).normalize();
+        Path file = recordFile(mechanismFile, session);
         SwingRecord record = read(file, optionsOf(session));
         List<String> warnings = new ArrayList<>();
-        if (session.getContentHash() != null && !session.getContentHash().equalsIgnoreCase(record.sha256())) {
-            warnings.add("session '" + session.getName() + "': " + session.getRecordPath()
-                    + " has changed since it was added (its SHA-256 differs from the one in the mechanism file)");
-        }
+        changeOf(session, record).ifPresent(warnings::add);
         return new SessionRecord(session, file, record, warnings);
     }
 
     /**
-     * The stored reading options of the session of a mechanism file whose record is the given
-     * file, so that a record the project carries is read as it was when it was added.
+     * Says so when a session's record has changed since it was added: its SHA-256 is not the stored one.
+     *
+     * @param session the session
+     * @param record  its record as read now
+     * @return the message (session, file, both hashes shortened), or empty when unchanged or no hash is stored
+     */
+    public static Optional<String> changeOf(TestSession session, SwingRecord record) {
+        String stored = session.getContentHash();
+        if (stored == null || stored.isBlank() || stored.equalsIgnoreCase(record.sha256())) {
+            return Optional.empty();
+        }
+        return Optional.of("session '" + session.getName() + "': " + session.getRecordPath() + " has changed since it was"
+                + " added: its SHA-256 is now " + shortHash(record.sha256()) + ", the mechanism file holds "
+                + shortHash(stored));
+    }
+
+    /**
+     * The session of a mechanism file whose record is the given file.
      *
      * @param mechanismFile the mechanism file
      * @param record        the record file
-     * @return the options, or empty when no session of the file refers to that record
+     * @return the session, or empty when no session of the file refers to that record
      * @throws InputException when the mechanism file cannot be read
      */
-    public static Optional<SwingImportOptions> optionsFor(Path mechanismFile, Path record) throws InputException {
+    public static Optional<TestSession> sessionFor(Path mechanismFile, Path record) throws InputException {
         Mechanism mechanism = MechanismLoader.readMechanism(mechanismFile);
         Path project = mechanismFile.toAbsolutePath().getParent();
         Path wanted = record.toAbsolutePath().normalize();
         for (TestSession s : mechanism.getSessions()) {
             if (s.getRecordPath() != null && project.resolve(s.getRecordPath()).normalize().equals(wanted)) {
-                return Optional.of(optionsOf(s));
+                return Optional.of(s);
             }
         }
         return Optional.empty();
@@ -227,7 +355,8 @@ public final class SessionRecords {
 
     private static boolean copyInto(Path source, Path target, String sha256) throws InputException {
         try {
-            if (Files.exists(target)) {
+            if (Files.exists(target, LinkOption.NOFOLLOW_LINKS)) {
+                ReadableFiles.require(target, "a swing record (a .csv file)");
                 if (sha256(target).equalsIgnoreCase(sha256)) {
                     return false;
                 }

@@ -13,6 +13,7 @@ import dev.penduline.cli.Command;
 import dev.penduline.cli.ExitCode;
 import dev.penduline.cli.UsageException;
 import dev.penduline.cli.json.JsonWriter;
+import dev.penduline.model.TestSession;
 import dev.penduline.physics.swing.DecayEnvelope;
 import dev.penduline.physics.swing.DecrementRegression;
 import dev.penduline.physics.swing.FrictionEstimates;
@@ -77,28 +78,44 @@ public final class AnalyzeCommand implements Command {
         Optional<MechanismSource> mechanism = MechanismOptions.optional(a);
         SwingRecord record;
         SwingAnalysis analysis;
+        Optional<String> change = Optional.empty();
         try {
             Path file = Path.of(a.positional().get(0));
             SwingImportOptions options = RecordOptions.from(a);
-            if (!RecordOptions.anyGiven(a) && a.has("mechanism") && a.value("mechanism").endsWith(".penduline")) {
-                // A record the project carries is read with the mapping stored with its session.
-                options = SessionRecords.optionsFor(Path.of(a.value("mechanism")), file).orElse(options);
+            Optional<TestSession> session = Optional.empty();
+            if (a.has("mechanism") && a.value("mechanism").endsWith(".penduline")) {
+                Path mechanismFile = Path.of(a.value("mechanism"));
+                session = SessionRecords.sessionFor(mechanismFile, file);
+                if (session.isPresent()) {
+                    // a session's record: inside the project even through links, and checked against its hash
+                    SessionRecords.recordFile(mechanismFile, session.get());
+                    if (!RecordOptions.anyGiven(a)) {
+                        // A record the project carries is read with the mapping stored with its session.
+                        options = SessionRecords.optionsOf(session.get());
+                    }
+                }
             }
             record = SessionRecords.read(file, options);
+            SwingRecord read = record;
+            change = session.flatMap(s -> SessionRecords.changeOf(s, read));
             analysis = SwingSessionAnalysis.analyse(record, mechanism);
         } catch (InputException e) {
             throw new UsageException(e.getMessage());
         }
+        // said first, before anything read from the record
+        change.ifPresent(c -> err.println("warning: " + c + "; what follows is the analysis of the new content"));
         for (String s : record.assumptions()) {
             err.println("assumed: " + s);
         }
-        List<String> warnings = new ArrayList<>(record.warnings());
+        List<String> warnings = new ArrayList<>();
+        change.ifPresent(warnings::add);
+        warnings.addAll(record.warnings());
         mechanism.ifPresent(m -> warnings.addAll(m.warnings()));
         warnings.addAll(analysis.warnings());
         if (a.flag("json")) {
             writeJson(record, analysis, warnings, new JsonWriter(out));
         } else {
-            for (String w : warnings) {
+            for (String w : change.isPresent() ? warnings.subList(1, warnings.size()) : warnings) {
                 err.println("warning: " + w);
             }
             new AnalysisReport(record, analysis, mechanism).print(out);

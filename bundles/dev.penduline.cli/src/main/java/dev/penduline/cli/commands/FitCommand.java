@@ -32,6 +32,9 @@ public final class FitCommand implements Command {
     private static final Set<String> OPTIONS = MechanismOptions.with(RecordOptions.with("session", "terms",
             "resamples", "max-iterations", "seed", "verdict-margin"));
 
+    /** The flag that lets a fit use a session's record whose content changed since it was added. */
+    static final String ACCEPT_CHANGED = "accept-changed-records";
+
     @Override
     public String name() {
         return "fit";
@@ -47,6 +50,7 @@ public final class FitCommand implements Command {
         return """
                 Usage: penduline fit (FILE | --mass KG --centroid-distance M --pivot-inertia KG_M2)
                                      [--session RECORD.csv ...] [--terms auto|LIST] [--fix-inertia] [--json]
+                                     [--accept-changed-records]
 
                 Fits the event-driven swing model to the whole measured trajectory of every record at
                 once (Levenberg-Marquardt; the friction terms and the pivot inertia are shared, each
@@ -71,13 +75,15 @@ public final class FitCommand implements Command {
                                            needs over the next to be called dominant (default 15);
                                            otherwise the verdict is "mixed"
                   --no-save                do not store the result in the mechanism file
+                  --accept-changed-records fit a session whose record changed since it was added (it is
+                                           refused otherwise) and store the new content's hash with the fit
                   --json                   print a JSON object instead of the report
                 """ + RecordOptions.USAGE;
     }
 
     @Override
     public ExitCode run(List<String> args, PrintWriter out, PrintWriter err) throws UsageException {
-        Arguments a = Arguments.parse(args, OPTIONS, Set.of("json", "fix-inertia", "no-save"));
+        Arguments a = Arguments.parse(args, OPTIONS, Set.of("json", "fix-inertia", "no-save", ACCEPT_CHANGED));
         if (a.positional().size() > 1) {
             throw new UsageException("at most one mechanism file; got " + a.positional());
         }
@@ -107,7 +113,14 @@ public final class FitCommand implements Command {
                     sessions.add(FrictionIdentification.prepare(Path.of(s), RecordOptions.from(a), mechanism));
                 }
             } else if (mechanismFile) {
-                sessions.addAll(FrictionIdentification.sessionsOf(Path.of(file), mechanism));
+                sessions.addAll(FrictionIdentification.sessionsOf(Path.of(file), mechanism, a.flag(ACCEPT_CHANGED)));
+                for (SessionInput s : sessions) {
+                    if (s.change() != null) {
+                        // said before any result: the fit is of content the session was not added with
+                        err.println("note: " + s.change() + "; fitting the new content as --" + ACCEPT_CHANGED + " asks"
+                                + (a.flag("no-save") ? "" : ", and storing its hash with the fit"));
+                    }
+                }
             } else {
                 throw new UsageException("which records? Give --session RECORD.csv (repeatable), or a mechanism "
                         + "file that has test sessions");
