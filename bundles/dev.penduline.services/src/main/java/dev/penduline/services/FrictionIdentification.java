@@ -128,7 +128,7 @@ public final class FrictionIdentification {
             read.add(sr);
         }
         if (!changed.isEmpty() && !acceptChanged) {
-            throw new InputException(mechanismFile + ": not fitted, " + String.join("; ", changed) + ". A raw record should"
+            throw new InputException(mechanismFile + ": not fitted, " + String.join("; ", changed) + "; a raw record should"
                     + " never change: restore it (from version control or the rig's copy), or, if the new content is right,"
                     + " accept it with --accept-changed-records (the fit then uses it and stores its hash)");
         }

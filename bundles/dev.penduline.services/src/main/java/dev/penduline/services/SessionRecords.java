@@ -230,7 +230,11 @@ public final class SessionRecords {
         Path project = mechanismFile.toAbsolutePath().getParent();
         String relative = session.getRecordPath();
         Path file = project.resolve(relative).normalize();
-        requireInside(project, file, relative);
+        try {
+            requireInside(project, file, relative);
+        } catch (InputException e) {
+            throw new InputException("session '" + session.getName() + "': " + e.getMessage(), e);
+        }
         if (!Files.exists(file)) {
             throw new InputException("session '" + session.getName() + "': its record " + relative + " is missing (no such"
                     + " file in " + project + "); put the record back (from version control or the rig's copy), or fit"

@@ -102,7 +102,8 @@ class SessionRecordsTest {
         Files.createSymbolicLink(link, target);
         TestSession s = session(0);
         InputException read = assertThrows(InputException.class, () -> SessionRecords.readSession(mechanism, s));
-        assertTrue(read.getMessage().startsWith("records/release.csv is a symbolic link to "), read.getMessage());
+        assertTrue(read.getMessage().startsWith("session 'release': records/release.csv is a symbolic link to "),
+                read.getMessage());
     }
 
     @Test
