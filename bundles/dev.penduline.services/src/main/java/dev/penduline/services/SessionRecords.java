@@ -89,7 +89,7 @@ public final class SessionRecords {
         String relative = project.relativize(stored).toString().replace('\\', '/');
         requireInside(project, stored, relative);
         SwingRecord record = read(recordFile, options);
-        requireNew(mechanism, mechanismFile, project, stored, record);
+        requireNew(mechanism, mechanismFile, project, stored.equals(source) ? stored : null, record);
         String sessionName = name != null ? name : source.getFileName().toString().replaceFirst("\\.[^.]*$", "");
         Optional<String> badName = PlainText.nameProblem(sessionName);
         if (badName.isPresent()) {
@@ -120,15 +120,17 @@ public final class SessionRecords {
 
     /**
      * Refuses a record the mechanism already has as a session, by path or by content: two sessions of one
-     * record would count the same release twice in a fit.
+     * record would count the same release twice in a fit. {@code inPlace} is the record when it lies in the
+     * project already, null when it is to be copied in (a different file under a session's name is then
+     * refused by the copy, as any clash of names).
      */
-    private static void requireNew(Mechanism mechanism, Path mechanismFile, Path project, Path stored, SwingRecord record)
+    private static void requireNew(Mechanism mechanism, Path mechanismFile, Path project, Path inPlace, SwingRecord record)
             throws InputException {
         for (TestSession s : mechanism.getSessions()) {
             if (s.getRecordPath() == null) {
                 continue;
             }
-            boolean samePath = project.resolve(s.getRecordPath()).normalize().equals(stored);
+            boolean samePath = project.resolve(s.getRecordPath()).normalize().equals(inPlace);
             boolean sameContent = record.sha256().equalsIgnoreCase(s.getContentHash());
             if (samePath || sameContent) {
                 throw new InputException(record.source() + ": " + (samePath ? "is already the record of session '"

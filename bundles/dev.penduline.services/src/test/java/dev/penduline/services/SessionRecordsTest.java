@@ -71,7 +71,9 @@ class SessionRecordsTest {
         add(record);
         byte[] before = Files.readAllBytes(mechanism);
         InputException again = assertThrows(InputException.class, () -> add(record));
-        assertTrue(again.getMessage().contains("is already the record of session 'release'"), again.getMessage());
+        // the record from elsewhere again: its copy would be the session's record, by content
+        assertTrue(again.getMessage().contains("has the same content (SHA-256 ")
+                && again.getMessage().contains("as the record of session 'release'"), again.getMessage());
         InputException inside = assertThrows(InputException.class, () -> add(project.resolve("records/release.csv")));
         assertTrue(inside.getMessage().contains("is already the record of session 'release'"), inside.getMessage());
         Path copy = Files.copy(record, outside.resolve("copy.csv"));
@@ -83,6 +85,15 @@ class SessionRecordsTest {
         assertFalse(Files.exists(project.resolve("records/copy.csv")), "nor is it copied");
         add(Files.writeString(outside.resolve("other.csv"), swing(12)));
         assertEquals(2, MechanismLoader.readMechanism(mechanism).getSessions().size());
+    }
+
+    @Test
+    void aDifferentRecordUnderASessionRecordsNameIsAClashOfNamesNotADuplicate() throws Exception {
+        add(Files.writeString(outside.resolve("release.csv"), swing(10)));
+        Path other = Files.createDirectories(dir.resolve("other"));
+        Path clash = Files.writeString(other.resolve("release.csv"), swing(14));
+        InputException e = assertThrows(InputException.class, () -> add(clash));
+        assertTrue(e.getMessage().contains("a different file of that name is already in the project"), e.getMessage());
     }
 
     @Test

@@ -9,7 +9,10 @@ import java.io.PrintWriter;
 import java.io.StringWriter;
 import java.nio.file.Files;
 import java.nio.file.Path;
+import java.nio.file.StandardOpenOption;
 import java.nio.file.attribute.FileTime;
+import java.security.MessageDigest;
+import java.util.HexFormat;
 import java.util.regex.Matcher;
 import java.util.regex.Pattern;
 
@@ -128,6 +131,46 @@ class SessionCommandsTest {
         assertTrue(err.toString().contains("already in the project"), err.toString());
         assertArrayEquals(before, Files.readAllBytes(mechanism));
         assertTrue(Files.exists(other));
+    }
+
+    @Test
+    void aChangedRecordIsToldFirstAndFitRefusesItUntilAccepted() throws Exception {
+        Path record = demo("release.csv", "15", "--viscous", "0.01");
+        Path project = Files.createDirectories(dir.resolve("rig"));
+        Path parts = Files.writeString(project.resolve("parts.csv"),
+                "name,shape,mass_kg,x_m,y_m,z_m,length_m,axis\narm,rod,2,0,-0.4,0,0.8,y\n");
+        Path mechanism = project.resolve("arm.penduline");
+        assertEquals(ExitCode.OK, run("import-parts", parts.toString(), "--to", mechanism.toString()), err.toString());
+        assertEquals(ExitCode.OK, run("add-session", mechanism.toString(), record.toString(), "--counts-per-rev", "4096"),
+                err.toString());
+        String added = Files.readString(mechanism);
+        Path copy = project.resolve("records/release.csv");
+        Files.writeString(copy, "# edited by hand\n", StandardOpenOption.APPEND);
+
+        clear();
+        assertEquals(ExitCode.USAGE_OR_INPUT, run("fit", mechanism.toString(), "--terms", "viscous", "--resamples", "0"));
+        assertTrue(err.toString().contains("session 'release': records/release.csv has changed since it was added")
+                && err.toString().contains("--accept-changed-records"), err.toString());
+        assertEquals("", out.toString(), "no result before the refusal");
+        assertEquals(added, Files.readString(mechanism));
+
+        clear();
+        assertEquals(ExitCode.OK, run("analyze", copy.toString(), "--mechanism", mechanism.toString()), err.toString());
+        assertTrue(err.toString().startsWith("warning: session 'release': records/release.csv has changed"), err.toString());
+
+        clear();
+        assertEquals(ExitCode.OK, run("fit", mechanism.toString(), "--terms", "viscous", "--resamples", "0",
+                "--accept-changed-records"), err.toString());
+        assertTrue(err.toString().startsWith("note: session 'release': records/release.csv has changed"), err.toString());
+        String sha = HexFormat.of().formatHex(MessageDigest.getInstance("SHA-256").digest(Files.readAllBytes(copy)));
+        String stored = Files.readString(mechanism);
+        assertTrue(stored.contains("<contentHash>" + sha + "</contentHash>"), stored);
+        assertTrue(stored.contains("<fitResult>"), stored);
+
+        clear();
+        assertEquals(ExitCode.OK, run("fit", mechanism.toString(), "--terms", "viscous", "--resamples", "0", "--no-save"),
+                err.toString());
+        assertFalse(err.toString().contains("changed"), "the accepted content is the session's now: " + err);
     }
 
     @Test
