@@ -264,6 +264,31 @@ public final class SessionRecords {
     }
 
     /**
+     * Checks every session's record without reading it as a record: where it lies (inside the
+     * project, present, a regular file) and whether its content still has the stored hash. For a
+     * command that does not need the records (the inertia), so the problems are warnings.
+     *
+     * @param mechanismFile the mechanism file
+     * @return one warning per session whose record is missing, outside, not a regular file, unreadable or changed
+     * @throws InputException when the mechanism file cannot be read
+     */
+    public static List<String> recordWarnings(Path mechanismFile) throws InputException {
+        List<String> warnings = new ArrayList<>();
+        for (TestSession s : MechanismLoader.readMechanism(mechanismFile).getSessions()) {
+            try {
+                Path file = recordFile(mechanismFile, s);
+                changeOf(s, sha256(file)).ifPresent(c -> warnings.add(c + " ('penduline fit' refuses it until told to"
+                        + " accept it)"));
+            } catch (InputException e) {
+                warnings.add(e.getMessage());
+            } catch (IOException e) {
+                warnings.add("session '" + s.getName() + "': " + s.getRecordPath() + " cannot be read (" + e.getMessage() + ")");
+            }
+        }
+        return warnings;
+    }
+
+    /**
      * Says so when a session's record has changed since it was added: its SHA-256 is not the stored one.
      *
      * @param session the session
@@ -271,13 +296,16 @@ public final class SessionRecords {
      * @return the message (session, file, both hashes shortened), or empty when unchanged or no hash is stored
      */
     public static Optional<String> changeOf(TestSession session, SwingRecord record) {
+        return changeOf(session, record.sha256());
+    }
+
+    private static Optional<String> changeOf(TestSession session, String now) {
         String stored = session.getContentHash();
-        if (stored == null || stored.isBlank() || stored.equalsIgnoreCase(record.sha256())) {
+        if (stored == null || stored.isBlank() || stored.equalsIgnoreCase(now)) {
             return Optional.empty();
         }
         return Optional.of("session '" + session.getName() + "': " + session.getRecordPath() + " has changed since it was"
-                + " added: its SHA-256 is now " + shortHash(record.sha256()) + ", the mechanism file holds "
-                + shortHash(stored));
+                + " added: its SHA-256 is now " + shortHash(now) + ", the mechanism file holds " + shortHash(stored));
     }
 
     /**

@@ -195,6 +195,24 @@ class SessionRecordsTest {
     }
 
     @Test
+    void theRecordChecksWithoutReadingTellEveryProblemAsAWarning() throws Exception {
+        add(Files.writeString(outside.resolve("release.csv"), swing(10)));
+        add(Files.writeString(outside.resolve("second.csv"), swing(12)));
+        add(Files.writeString(outside.resolve("third.csv"), swing(14)));
+        assertEquals(List.of(), SessionRecords.recordWarnings(mechanism));
+        Path records = project.resolve("records");
+        Files.writeString(records.resolve("release.csv"), "# edited\n", StandardOpenOption.APPEND);
+        Files.delete(records.resolve("second.csv"));
+        Files.delete(records.resolve("third.csv"));
+        Files.createSymbolicLink(records.resolve("third.csv"), outside.resolve("third.csv"));
+        List<String> w = SessionRecords.recordWarnings(mechanism);
+        assertEquals(3, w.size(), w.toString());
+        assertTrue(w.get(0).startsWith("session 'release': records/release.csv has changed since it was added"), w.get(0));
+        assertTrue(w.get(1).startsWith("session 'second': its record records/second.csv is missing"), w.get(1));
+        assertTrue(w.get(2).startsWith("session 'third': records/third.csv is a symbolic link to "), w.get(2));
+    }
+
+    @Test
     void anUnchangedRecordHasNoChange() throws Exception {
         add(Files.writeString(outside.resolve("release.csv"), swing(10)));
         MechanismSource lumped = MechanismLoader.lumped(2, 0.4, 0.43, 9.80665);

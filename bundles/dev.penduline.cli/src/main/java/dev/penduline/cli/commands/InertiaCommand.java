@@ -2,6 +2,7 @@ package dev.penduline.cli.commands;
 
 import java.io.PrintWriter;
 import java.nio.file.Path;
+import java.util.ArrayList;
 import java.util.List;
 import java.util.Set;
 
@@ -10,12 +11,14 @@ import dev.penduline.cli.Command;
 import dev.penduline.cli.ExitCode;
 import dev.penduline.cli.UsageException;
 import dev.penduline.cli.json.JsonWriter;
+import dev.penduline.model.persistence.MechanismFormat;
 import dev.penduline.physics.inertia.InertiaSummary;
 import dev.penduline.physics.inertia.PartContribution;
 import dev.penduline.physics.units.Unit;
 import dev.penduline.services.InputException;
 import dev.penduline.services.MechanismLoader;
 import dev.penduline.services.MechanismSource;
+import dev.penduline.services.SessionRecords;
 import dev.penduline.services.present.Figures;
 
 /** {@code penduline inertia FILE}: mass, centroid and inertia about the pivot, part by part. */
@@ -57,24 +60,31 @@ public final class InertiaCommand implements Command {
             loader = loader.withGravity(a.number("gravity", Double.NaN));
         }
         MechanismSource source;
+        List<String> warnings;
         try {
-            source = loader.load(Path.of(a.positional().get(0)));
+            Path file = Path.of(a.positional().get(0));
+            source = loader.load(file);
+            warnings = new ArrayList<>(source.warnings());
+            if (file.toString().endsWith("." + MechanismFormat.FILE_EXTENSION)) {
+                // the inertia needs no record, but a missing, outside or changed one is worth knowing now
+                warnings.addAll(SessionRecords.recordWarnings(file));
+            }
         } catch (InputException e) {
             throw new UsageException(e.getMessage());
         }
         InertiaSummary s = source.inertia().orElseThrow();
-        for (String w : source.warnings()) {
+        for (String w : warnings) {
             err.println("warning: " + w);
         }
         if (a.flag("json")) {
-            writeJson(source, s, new JsonWriter(out));
+            writeJson(source, s, warnings, new JsonWriter(out));
         } else {
             writeTable(source, s, out);
         }
         return ExitCode.OK;
     }
 
-    private static void writeJson(MechanismSource source, InertiaSummary s, JsonWriter j) {
+    private static void writeJson(MechanismSource source, InertiaSummary s, List<String> warnings, JsonWriter j) {
         j.beginObject()
                 .field("source", source.label())
                 .field("mass_kg", s.totalMass())
@@ -102,7 +112,7 @@ public final class InertiaCommand implements Command {
         }
         j.endArray();
         j.name("warnings").beginArray();
-        for (String w : source.warnings()) {
+        for (String w : warnings) {
             j.value(w);
         }
         j.endArray().endObject().finish();
