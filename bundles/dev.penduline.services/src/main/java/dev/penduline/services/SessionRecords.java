@@ -171,7 +171,8 @@ public final class SessionRecords {
             } catch (IOException e) {
                 target = linkTarget(current);
             }
-            if (!target.startsWith(realProject)) {
+            // a link that leads nowhere is judged by what it says, which is relative to the path as written
+            if (!target.startsWith(realProject) && !target.startsWith(project)) {
                 String link = project.relativize(current).toString().replace('\\', '/');
                 throw new InputException((link.equals(shown) ? shown : shown + ": " + link) + " is a symbolic link to "
                         + target + ", outside the project folder " + project + "; copy the record into " + RECORDS_FOLDER
