@@ -117,7 +117,7 @@ public final class SessionRecords {
             double releaseAngle, String notes, Consumer<String> saveNotes) throws InputException {
         Mechanism mechanism = MechanismLoader.readMechanism(mechanismFile);
         SwingRecord record = read(recordFile, options);
-        Path project = mechanismFile.toAbsolutePath().getParent();
+        Path project = projectOf(mechanismFile);
         Path source = recordFile.toAbsolutePath().normalize();
         Path stored = source.startsWith(project) ? source
                 : project.resolve(RECORDS_FOLDER).resolve(source.getFileName());
@@ -164,7 +164,7 @@ public final class SessionRecords {
      * @throws InputException when the record cannot be read
      */
     public static SessionRecord readSession(Path mechanismFile, TestSession session) throws InputException {
-        Path project = mechanismFile.toAbsolutePath().getParent();
+        Path project = projectOf(mechanismFile);
         Path file = project.resolve(session.getRecordPath()).normalize();
         SwingRecord record = read(file, optionsOf(session));
         List<String> warnings = new ArrayList<>();
@@ -186,7 +186,7 @@ public final class SessionRecords {
      */
     public static Optional<SwingImportOptions> optionsFor(Path mechanismFile, Path record) throws InputException {
         Mechanism mechanism = MechanismLoader.readMechanism(mechanismFile);
-        Path project = mechanismFile.toAbsolutePath().getParent();
+        Path project = projectOf(mechanismFile);
         Path wanted = record.toAbsolutePath().normalize();
         for (TestSession s : mechanism.getSessions()) {
             if (s.getRecordPath() != null && project.resolve(s.getRecordPath()).normalize().equals(wanted)) {
@@ -275,6 +275,24 @@ public final class SessionRecords {
             throw new InputException(target + ": cannot copy the record into the project (" + AtomicFileWrite.reason(e) + ")",
                     e);
         }
+    }
+
+    /**
+     * The project folder of a mechanism file: the folder of the file the path names, so that a
+     * mechanism file reached through a symbolic link finds its records beside its real self.
+     *
+     * @param mechanismFile the mechanism file (or a link to it)
+     * @return the folder, absolute
+     */
+    static Path projectOf(Path mechanismFile) {
+        if (Files.isSymbolicLink(mechanismFile)) {
+            try {
+                return AtomicFileWrite.resolve(mechanismFile).getParent();
+            } catch (IOException e) {
+                // a broken link: reading the file will say so
+            }
+        }
+        return mechanismFile.toAbsolutePath().getParent();
     }
 
     private static void deleteQuietly(Path file) {
