@@ -97,6 +97,10 @@ public final class MechanismStore {
      */
     public static void createNew(Mechanism mechanism, Path file, Consumer<String> notes) throws InputException {
         try (SaveLock lock = lock(file)) {
+            if (Files.isSymbolicLink(file)) {
+                throw new InputException(file + ": is a symbolic link; a new mechanism file is only created where"
+                        + " nothing is yet: choose another name or remove the link first");
+            }
             if (Files.exists(file, LinkOption.NOFOLLOW_LINKS)) {
                 throw new InputException(file + ": already exists; choose another name or remove it first");
             }

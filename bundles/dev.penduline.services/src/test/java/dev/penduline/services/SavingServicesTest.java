@@ -140,7 +140,9 @@ class SavingServicesTest {
         InputException e = assertThrows(InputException.class, () -> NewMechanismFile.write("Gate", Optional.empty(), taken));
         assertTrue(e.getMessage().contains("already exists"), e.getMessage());
         Path dangling = Files.createSymbolicLink(dir.resolve("dangling.penduline"), dir.resolve("nowhere.penduline"));
-        assertThrows(InputException.class, () -> NewMechanismFile.write("Gate", Optional.empty(), dangling));
+        e = assertThrows(InputException.class, () -> NewMechanismFile.write("Gate", Optional.empty(), dangling));
+        assertTrue(e.getMessage().contains("is a symbolic link"), e.getMessage());
+        assertTrue(Files.isSymbolicLink(dangling) && !Files.exists(dir.resolve("nowhere.penduline")));
         assertEquals("somebody's file\n", Files.readString(taken));
     }
 }

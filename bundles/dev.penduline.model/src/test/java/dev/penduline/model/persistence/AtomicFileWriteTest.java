@@ -16,6 +16,7 @@ import java.nio.file.FileSystemException;
 import java.nio.file.Files;
 import java.nio.file.Path;
 import java.nio.file.attribute.FileTime;
+import java.nio.file.attribute.PosixFilePermissions;
 import java.time.Instant;
 import java.util.List;
 import java.util.Set;
@@ -157,6 +158,21 @@ class AtomicFileWriteTest {
                 throw new AccessDeniedException(directory.resolve(prefix + "1" + suffix).toString());
             }
         }, "cannot create a file in the folder " + dir.toRealPath(), "permission denied");
+    }
+
+    @Test
+    void aReallyReadOnlyFolderIsReportedAndTheOldFileKeptWhereTheSystemEnforcesIt() throws Exception {
+        Path folder = Files.createDirectory(dir.resolve("locked"));
+        Path file = Files.writeString(folder.resolve("hatch.penduline"), "old\n");
+        Files.setPosixFilePermissions(folder, PosixFilePermissions.fromString("r-xr-xr-x"));
+        try {
+            assumeTrue(!Files.isWritable(folder), "the system enforces folder permissions (not so for root)");
+            IOException e = assertThrows(IOException.class, () -> AtomicFileWrite.write(file, text("new\n")));
+            assertTrue(e.getMessage().contains("permission denied"), e.getMessage());
+            assertEquals("old\n", Files.readString(file));
+        } finally {
+            Files.setPosixFilePermissions(folder, PosixFilePermissions.fromString("rwxr-xr-x"));
+        }
     }
 
     @Test
