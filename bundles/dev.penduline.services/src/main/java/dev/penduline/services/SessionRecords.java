@@ -264,6 +264,10 @@ public final class SessionRecords {
                 throw new InputException(target + ": a different file of that name is already in the project; rename"
                         + " the record before adding it");
             }
+            if (Files.isSymbolicLink(target)) {
+                throw new InputException(target + ": is a symbolic link (to nothing); a record is copied into the project"
+                        + " only as a new file: remove the link or rename the record before adding it");
+            }
             Files.createDirectories(target.getParent());
             // under the mechanism file's lock, just checked not to exist: a new file, never a replaced one
             AtomicFileWrite.write(target, out -> Files.copy(source, out));
