@@ -3,6 +3,7 @@ package dev.penduline.services;
 import java.nio.file.Path;
 import java.util.Locale;
 import java.util.SplittableRandom;
+import java.util.function.Consumer;
 
 import dev.penduline.physics.MechanismProperties;
 import dev.penduline.physics.motion.FrictionTorques;
@@ -49,12 +50,32 @@ public final class DemoRecords {
      * @param friction  the true friction torques
      * @param s         the settings
      * @param target    the CSV to write (atomically): {@code time_s,counts} with an encoder,
-     *                  else {@code time_s,angle_deg}
+     *                  else {@code time_s,angle_deg}; an existing file is not replaced
      * @return the simulated run (without offset, noise and quantisation)
-     * @throws InputException when the file cannot be written or a value is out of range
+     * @throws InputException when the file exists or cannot be written or a value is out of range
      */
     public static SwingRun write(MechanismSource mechanism, FrictionTorques friction, Settings s, Path target)
             throws InputException {
+        return write(mechanism, friction, s, target, false, note -> { });
+    }
+
+    /**
+     * Writes a demo record, as {@link #write(MechanismSource, FrictionTorques, Settings, Path)},
+     * with the choice of replacing an existing plain file (see {@link OutputFiles}: a record or a
+     * mechanism file is never replaced).
+     *
+     * @param mechanism the mechanism
+     * @param friction  the true friction torques
+     * @param s         the settings
+     * @param target    the CSV to write (atomically)
+     * @param overwrite whether an existing plain file may be replaced
+     * @param notes     receives notes of the save for the user
+     * @return the simulated run (without offset, noise and quantisation)
+     * @throws InputException when the file may not or cannot be written or a value is out of range
+     */
+    public static SwingRun write(MechanismSource mechanism, FrictionTorques friction, Settings s, Path target,
+            boolean overwrite, Consumer<String> notes) throws InputException {
+        OutputFiles.check(target, overwrite);
         MechanismProperties p = mechanism.properties();
         SwingPrediction.requireSwing(p, friction, s.theta0(), 0);
         MechanismProperties aboutEquilibrium = new MechanismProperties(p.mass(), p.centroidDistance(),
@@ -77,7 +98,7 @@ public final class DemoRecords {
         SplittableRandom random = new SplittableRandom(s.seed());
         boolean encoder = s.countsPerRevolution() > 0;
         double radPerCount = encoder ? 2 * Math.PI / s.countsPerRevolution() : 0;
-        AtomicFiles.write(target, out -> {
+        OutputFiles.write(target, overwrite, out -> {
             out.write("# INVENTED DEMO DATA synthesised by Penduline's simulator; not a measurement.\n");
             out.write(String.format(Locale.ROOT,
                     "# truth: release %.6f s at %.4f deg from equilibrium; offset %.4f deg; viscous %s, coulomb %s,"
@@ -102,7 +123,7 @@ public final class DemoRecords {
                 line.append('\n');
                 out.write(line.toString());
             }
-        });
+        }).forEach(notes);
         return run;
     }
 }

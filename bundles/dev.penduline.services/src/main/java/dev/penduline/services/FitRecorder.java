@@ -5,6 +5,7 @@ import java.time.Instant;
 import java.time.temporal.ChronoUnit;
 import java.util.List;
 import java.util.Locale;
+import java.util.function.Consumer;
 
 import dev.penduline.model.EnergyShare;
 import dev.penduline.model.Estimate;
@@ -38,23 +39,40 @@ public final class FitRecorder {
     }
 
     /**
-     * Appends the fit to the mechanism file and saves it atomically.
+     * Appends the fit to the mechanism file and saves it atomically (notes of the save dropped).
      *
      * @param mechanismFile the mechanism file
      * @param outcome       the fit
      * @param computedAt    when it was computed
      * @return the stored result's identifier
-     * @throws InputException when the file cannot be read or saved
+     * @throws InputException when the file cannot be read, locked or saved
      */
     public static String store(Path mechanismFile, FrictionIdentification.Outcome outcome, Instant computedAt)
             throws InputException {
-        Mechanism m = MechanismLoader.readMechanism(mechanismFile);
+        return store(mechanismFile, outcome, computedAt, note -> { });
+    }
+
+    /**
+     * Appends the fit to the mechanism file and saves it atomically. The fit is added to the
+     * file's content at the moment of saving, under the file's lock (see
+     * {@link MechanismStore#update}): a fit or a session stored meanwhile by another writer is kept.
+     *
+     * @param mechanismFile the mechanism file
+     * @param outcome       the fit
+     * @param computedAt    when it was computed
+     * @param notes         receives notes of the save for the user
+     * @return the stored result's identifier
+     * @throws InputException when the file cannot be read, locked or saved
+     */
+    public static String store(Path mechanismFile, FrictionIdentification.Outcome outcome, Instant computedAt,
+            Consumer<String> notes) throws InputException {
         String when = computedAt.truncatedTo(ChronoUnit.SECONDS).toString();
-        FitResult r = NamedElements.addFitResult(m, "Fit " + when, when);
-        fill(r, outcome);
-        keepFittedContent(m, outcome);
-        MechanismStore.save(m, mechanismFile);
-        return r.getId();
+        return MechanismStore.update(mechanismFile, m -> {
+            FitResult r = NamedElements.addFitResult(m, "Fit " + when, when);
+            fill(r, outcome);
+            keepFittedContent(m, outcome);
+            return r.getId();
+        }, notes);
     }
 
     /**

@@ -1,7 +1,6 @@
 package dev.penduline.services;
 
 import java.io.IOException;
-import java.nio.file.Files;
 import java.nio.file.NoSuchFileException;
 import java.nio.file.Path;
 import java.util.Optional;
@@ -68,10 +67,7 @@ public final class NewMechanismFile {
             PartsImport.write(name, parts.get(), target);
             return;
         }
-        if (Files.exists(target)) {
-            throw new InputException(target + ": already exists; choose another name or remove it first");
-        }
         Mechanism mechanism = NamedElements.mechanism(name);
-        MechanismStore.save(mechanism, target);
+        MechanismStore.createNew(mechanism, target, note -> { });
     }
 }

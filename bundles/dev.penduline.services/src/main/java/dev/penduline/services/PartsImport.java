@@ -3,19 +3,18 @@ package dev.penduline.services;
 import java.io.IOException;
 import java.math.BigDecimal;
 import java.math.MathContext;
-import java.nio.file.Files;
 import java.nio.file.NoSuchFileException;
 import java.nio.file.Path;
+import java.util.ArrayList;
 import java.util.List;
 import java.util.Optional;
+import java.util.function.Consumer;
 
 import dev.penduline.model.Mechanism;
 import dev.penduline.model.ShapeAxis;
 import dev.penduline.model.ShapeKind;
 import dev.penduline.model.TensorReference;
 import dev.penduline.model.naming.NamedElements;
-import dev.penduline.model.persistence.MechanismFileException;
-import dev.penduline.model.persistence.MechanismFiles;
 import dev.penduline.physics.inertia.Axis;
 import dev.penduline.physics.inertia.Box;
 import dev.penduline.physics.inertia.Cylinder;
@@ -68,18 +67,24 @@ public final class PartsImport {
      * @throws InputException when the target exists or cannot be written
      */
     public static void write(String name, PartsList parts, Path target) throws InputException {
+        write(name, parts, target, note -> { });
+    }
+
+    /**
+     * Writes a new mechanism file from a parts list; refuses to overwrite an existing file.
+     *
+     * @param name   the mechanism's name
+     * @param parts  the parts as read
+     * @param target the mechanism file to create
+     * @param notes  receives notes of the save for the user
+     * @throws InputException when the target exists or cannot be written
+     */
+    public static void write(String name, PartsList parts, Path target, Consumer<String> notes) throws InputException {
         Optional<String> badName = PlainText.nameProblem(name);
         if (badName.isPresent()) {
             throw new InputException("the mechanism's name " + badName.get());
         }
-        if (Files.exists(target)) {
-            throw new InputException(target + ": already exists; choose another name or remove it first");
-        }
-        try {
-            MechanismFiles.save(toMechanism(name, parts), target);
-        } catch (MechanismFileException e) {
-            throw new InputException(e.getMessage(), e);
-        }
+        MechanismStore.createNew(toMechanism(name, parts), target, notes);
     }
 
     /**
@@ -88,7 +93,8 @@ public final class PartsImport {
      * @param partsList the parts-list CSV
      * @param target    the mechanism file to create (must not exist)
      * @param name      the mechanism's name
-     * @return the warnings of reading the list (ignored columns and the like)
+     * @return the warnings of reading the list (ignored columns and the like) and the notes of
+     *         the save
      * @throws InputException when the list is bad, or the target exists or cannot be written
      */
     public static List<String> importFile(Path partsList, Path target, String name) throws InputException {
@@ -102,8 +108,9 @@ public final class PartsImport {
         } catch (RecordFormatException e) {
             throw new InputException(e.getMessage(), e);
         }
-        write(name, parts, target);
-        return parts.warnings();
+        List<String> said = new ArrayList<>(parts.warnings());
+        write(name, parts, target, said::add);
+        return said;
     }
 
     private static void add(Mechanism m, Part p) {

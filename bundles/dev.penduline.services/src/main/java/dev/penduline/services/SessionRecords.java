@@ -5,13 +5,13 @@ import java.io.InputStream;
 import java.nio.file.Files;
 import java.nio.file.LinkOption;
 import java.nio.file.Path;
-import java.nio.file.StandardCopyOption;
 import java.security.MessageDigest;
 import java.security.NoSuchAlgorithmException;
 import java.util.ArrayList;
 import java.util.HexFormat;
 import java.util.List;
 import java.util.Optional;
+import java.util.function.Consumer;
 
 import dev.penduline.model.AngleUnit;
 import dev.penduline.model.DecimalSeparator;
@@ -20,6 +20,8 @@ import dev.penduline.model.Mechanism;
 import dev.penduline.model.TestSession;
 import dev.penduline.model.TimeUnit;
 import dev.penduline.model.naming.NamedElements;
+import dev.penduline.model.persistence.AtomicFileWrite;
+import dev.penduline.model.persistence.SaveLock;
 import dev.penduline.physics.units.Unit;
 import dev.penduline.records.PlainText;
 import dev.penduline.records.RecordFormatException;
@@ -81,8 +83,36 @@ public final class SessionRecords {
      */
     public static Added addSession(Path mechanismFile, Path recordFile, SwingImportOptions options, String name,
             double releaseAngle, String notes) throws InputException {
+        return addSession(mechanismFile, recordFile, options, name, releaseAngle, notes, note -> { });
+    }
+
+    /**
+     * Adds a record to a mechanism file as a new test session, as
+     * {@link #addSession(Path, Path, SwingImportOptions, String, double, String)}, holding the
+     * file's save lock from reading the mechanism file to saving it, so that sessions added at the
+     * same time by other writers are kept.
+     *
+     * @param mechanismFile the mechanism file (its folder is the project)
+     * @param recordFile    the raw record
+     * @param options       how to read it
+     * @param name          the session's name (null: the record's file name)
+     * @param releaseAngle  the release angle if known (rad), NaN if not
+     * @param notes         notes, or null
+     * @param saveNotes     receives notes of the save for the user
+     * @return the new session and the record as read
+     * @throws InputException when a file cannot be read, copied, locked or saved
+     */
+    public static Added addSession(Path mechanismFile, Path recordFile, SwingImportOptions options, String name,
+            double releaseAngle, String notes, Consumer<String> saveNotes) throws InputException {
+        try (SaveLock lock = MechanismStore.lock(mechanismFile)) {
+            return addLocked(mechanismFile, recordFile, options, name, releaseAngle, notes, saveNotes);
+        }
+    }
+
+    private static Added addLocked(Path mechanismFile, Path recordFile, SwingImportOptions options, String name,
+            double releaseAngle, String notes, Consumer<String> saveNotes) throws InputException {
         Mechanism mechanism = MechanismLoader.readMechanism(mechanismFile);
-        Path project = mechanismFile.toAbsolutePath().getParent();
+        Path project = projectOf(mechanismFile);
         Path source = recordFile.toAbsolutePath().normalize();
         Path stored = source.startsWith(project) ? source
                 : project.resolve(RECORDS_FOLDER).resolve(source.getFileName());
@@ -108,7 +138,7 @@ public final class SessionRecords {
         MechanismStore.check(mechanism, mechanismFile);
         boolean copied = !stored.equals(source) && copyInto(source, stored, record.sha256());
         try {
-            MechanismStore.save(mechanism, mechanismFile);
+            MechanismStore.save(mechanism, mechanismFile).forEach(saveNotes);
         } catch (InputException e) {
             if (copied) {
                 deleteQuietly(stored);
@@ -230,7 +260,7 @@ public final class SessionRecords {
      * @throws InputException naming the session, the file and what to do
      */
     public static Path recordFile(Path mechanismFile, TestSession session) throws InputException {
-        Path project = mechanismFile.toAbsolutePath().getParent();
+        Path project = projectOf(mechanismFile);
         String relative = session.getRecordPath();
         Path file = project.resolve(relative).normalize();
         try {
@@ -319,7 +349,7 @@ public final class SessionRecords {
      */
     public static Optional<TestSession> sessionFor(Path mechanismFile, Path record) throws InputException {
         Mechanism mechanism = MechanismLoader.readMechanism(mechanismFile);
-        Path project = mechanismFile.toAbsolutePath().getParent();
+        Path project = projectOf(mechanismFile);
         Path wanted = record.toAbsolutePath().normalize();
         for (TestSession s : mechanism.getSessions()) {
             if (s.getRecordPath() != null && project.resolve(s.getRecordPath()).normalize().equals(wanted)) {
@@ -398,22 +428,39 @@ public final class SessionRecords {
                 throw new InputException(target + ": a different file of that name is already in the project; rename"
                         + " the record before adding it");
             }
-            Files.createDirectories(target.getParent());
-            Path temp = Files.createTempFile(target.getParent(), "." + target.getFileName(), ".tmp");
-            try {
-                Files.copy(source, temp, StandardCopyOption.REPLACE_EXISTING);
-                AtomicFiles.makeReadable(temp);
-                Files.move(temp, target, StandardCopyOption.ATOMIC_MOVE);
-            } finally {
-                Files.deleteIfExists(temp);
+            if (Files.isSymbolicLink(target)) {
+                throw new InputException(target + ": is a symbolic link (to nothing); a record is copied into the project"
+                        + " only as a new file: remove the link or rename the record before adding it");
             }
+            Files.createDirectories(target.getParent());
+            // under the mechanism file's lock, just checked not to exist: a new file, never a replaced one
+            AtomicFileWrite.write(target, out -> Files.copy(source, out));
             if (!sha256(target).equalsIgnoreCase(sha256)) {
                 throw new InputException(target + ": the copy differs from " + source + "; the record was not added");
             }
             return true;
         } catch (IOException e) {
-            throw new InputException(target + ": cannot copy the record into the project (" + e.getMessage() + ")", e);
+            throw new InputException(target + ": cannot copy the record into the project (" + AtomicFileWrite.reason(e) + ")",
+                    e);
         }
+    }
+
+    /**
+     * The project folder of a mechanism file: the folder of the file the path names, so that a
+     * mechanism file reached through a symbolic link finds its records beside its real self.
+     *
+     * @param mechanismFile the mechanism file (or a link to it)
+     * @return the folder, absolute
+     */
+    static Path projectOf(Path mechanismFile) {
+        if (Files.isSymbolicLink(mechanismFile)) {
+            try {
+                return AtomicFileWrite.resolve(mechanismFile).getParent();
+            } catch (IOException e) {
+                // a broken link: reading the file will say so
+            }
+        }
+        return mechanismFile.toAbsolutePath().getParent();
     }
 
     private static void deleteQuietly(Path file) {

@@ -59,7 +59,7 @@ public final class AddSessionCommand implements Command {
         SessionRecords.Added added;
         try {
             added = SessionRecords.addSession(mechanism, record, RecordOptions.from(a), a.value("name"), release,
-                    a.value("notes"));
+                    a.value("notes"), note -> err.println("note: " + note));
         } catch (InputException e) {
             throw new UsageException(e.getMessage());
         }

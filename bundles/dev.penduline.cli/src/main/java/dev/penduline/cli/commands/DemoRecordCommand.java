@@ -51,12 +51,14 @@ public final class DemoRecordCommand implements Command {
                   --counts-per-rev N     write encoder counts (default 4096; 0 writes degrees)
                   --still-s S            still segment before the release (default 1.5)
                   --seed N               random seed (default 1)
-                  --out RECORD.csv       the file to write (required)""";
+                  --out RECORD.csv       the file to write (required; never over a record, a
+                                         mechanism file or anything not a regular file)
+                  --force                replace an existing --out file (only a plain file)""";
     }
 
     @Override
     public ExitCode run(List<String> args, PrintWriter out, PrintWriter err) throws UsageException {
-        Arguments a = Arguments.parse(args, OPTIONS, Set.of());
+        Arguments a = Arguments.parse(args, OPTIONS, Set.of("force"));
         if (!a.has("out")) {
             throw new UsageException("--out RECORD.csv is required");
         }
@@ -68,7 +70,8 @@ public final class DemoRecordCommand implements Command {
                     Unit.DEGREE.toSi(a.number("offset-deg", 0)), Unit.DEGREE.toSi(a.number("noise-deg", 0.02)),
                     a.whole("counts-per-rev", 4096), a.number("still-s", 1.5), a.number("duration", 60),
                     a.number("rate", 500), a.whole("seed", 1));
-            DemoRecords.write(mechanism, friction, settings, Path.of(a.value("out")));
+            DemoRecords.write(mechanism, friction, settings, Path.of(a.value("out")), a.flag("force"),
+                    note -> err.println("note: " + note));
         } catch (IllegalArgumentException | InputException e) {
             throw new UsageException(e.getMessage());
         }

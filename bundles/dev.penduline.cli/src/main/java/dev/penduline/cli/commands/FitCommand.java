@@ -128,7 +128,7 @@ public final class FitCommand implements Command {
             outcome = FrictionIdentification.identify(mechanism, sessions, terms, a.flag("fix-inertia"), settings,
                     FitControl.none());
             if (mechanismFile && !a.has("session") && !a.flag("no-save") && outcome.fit().converged()) {
-                stored = FitRecorder.store(Path.of(file), outcome, Instant.now());
+                stored = FitRecorder.store(Path.of(file), outcome, Instant.now(), note -> err.println("note: " + note));
             }
         } catch (InputException e) {
             throw new UsageException(e.getMessage());

@@ -16,9 +16,9 @@ import dev.penduline.physics.motion.SwingEnergy;
 import dev.penduline.physics.motion.SwingRun;
 import dev.penduline.physics.motion.TurningPoint;
 import dev.penduline.physics.units.Unit;
-import dev.penduline.services.AtomicFiles;
 import dev.penduline.services.InputException;
 import dev.penduline.services.MechanismSource;
+import dev.penduline.services.OutputFiles;
 import dev.penduline.services.SwingPrediction;
 import dev.penduline.services.present.Figures;
 
@@ -58,19 +58,24 @@ public final class SimulateCommand implements Command {
                   --drag C              quadratic (air) drag coefficient, N·m·s²/rad² (default 0)
                   --duration S          simulated time (default 20 s)
                   --rate HZ             output samples per second (default 1000)
-                  --out FILE.csv        write time_s,angle_deg,velocity_deg_s
+                  --out FILE.csv        write time_s,angle_deg,velocity_deg_s (never over a record,
+                                        a mechanism file or anything not a regular file)
+                  --force               replace an existing --out file (only a plain file)
                   --json                print a JSON object instead of the summary""";
     }
 
     @Override
     public ExitCode run(List<String> args, PrintWriter out, PrintWriter err) throws UsageException {
-        Arguments a = Arguments.parse(args, OPTIONS, Set.of("json"));
+        Arguments a = Arguments.parse(args, OPTIONS, Set.of("json", "force"));
         if (a.positional().size() > 1) {
             throw new UsageException("at most one mechanism file; got " + a.positional());
         }
         MechanismSource mechanism = MechanismOptions.resolve(a, a.positional().isEmpty() ? null : a.positional().get(0));
         for (String w : mechanism.warnings()) {
             err.println("warning: " + w);
+        }
+        if (a.has("out")) {
+            checkOut(Path.of(a.value("out")), a.flag("force"));
         }
         double theta0 = Unit.DEGREE.toSi(a.requiredNumber("theta0-deg"));
         double omega0 = Unit.DEG_PER_S.toSi(a.number("omega0-deg-s", 0));
@@ -86,7 +91,9 @@ public final class SimulateCommand implements Command {
             run = SwingPrediction.simulate(mechanism, friction, theta0, omega0, a.number("duration", 20),
                     a.number("rate", 1000));
             if (a.has("out")) {
-                writeCsv(Path.of(a.value("out")), run);
+                for (String note : writeCsv(Path.of(a.value("out")), a.flag("force"), run)) {
+                    err.println("note: " + note);
+                }
             }
         } catch (InputException e) {
             throw new UsageException(e.getMessage());
@@ -102,11 +109,20 @@ public final class SimulateCommand implements Command {
         return ExitCode.OK;
     }
 
-    private static void writeCsv(Path file, SwingRun run) throws InputException {
+    /** Refuses an --out file that may not be written before the simulation runs. */
+    private static void checkOut(Path file, boolean force) throws UsageException {
+        try {
+            OutputFiles.check(file, force);
+        } catch (InputException e) {
+            throw new UsageException(e.getMessage());
+        }
+    }
+
+    private static List<String> writeCsv(Path file, boolean force, SwingRun run) throws InputException {
         double[] t = run.times();
         double[] th = run.angles();
         double[] w = run.velocities();
-        AtomicFiles.write(file, o -> {
+        return OutputFiles.write(file, force, o -> {
             o.write("time_s,angle_deg,velocity_deg_s\n");
             StringBuilder line = new StringBuilder(64);
             for (int i = 0; i < t.length; i++) {

@@ -4,6 +4,7 @@ import java.io.ByteArrayOutputStream;
 import java.io.IOException;
 import java.nio.file.Files;
 import java.nio.file.Path;
+import java.util.List;
 import java.util.Map;
 
 import org.eclipse.emf.common.util.URI;
@@ -14,7 +15,6 @@ import org.eclipse.emf.ecore.resource.impl.ResourceSetImpl;
 
 import dev.penduline.model.Mechanism;
 import dev.penduline.model.PendulinePackage;
-import dev.penduline.model.persistence.internal.AtomicFileWrite;
 import dev.penduline.model.persistence.internal.LoadProblem;
 
 /**
@@ -104,19 +104,27 @@ public final class MechanismFiles {
      *
      * <p>A mechanism already held in a resource is written from that resource (it stays there);
      * one without a resource is put into a new {@link MechanismResource} for the target file.
+     * The file's {@link SaveLock} is held during the save (a caller that changes the file's
+     * current content takes it first, around reading and saving; it may be taken again). A link
+     * is written through to its target; see {@link AtomicFileWrite} for the rest.
      *
      * @param mechanism the mechanism to save
      * @param file      the target file
-     * @throws MechanismFileException when serialising or writing fails; the old file is then intact
+     * @return notes for the user (a temporary file of an interrupted save removed), possibly empty
+     * @throws MechanismFileException when serialising or writing fails, the target is not a
+     *         regular file, or another writer holds the lock too long; the old file is then intact
      */
-    public static void save(Mechanism mechanism, Path file) throws MechanismFileException {
+    public static List<String> save(Mechanism mechanism, Path file) throws MechanismFileException {
         final Resource resource = resourceFor(mechanism, file);
-        try {
-            AtomicFileWrite.write(file, out -> resource.save(out, MechanismFormat.saveOptions()));
+        try (SaveLock lock = SaveLock.acquire(file)) {
+            final List<String> notes = AtomicFileWrite.write(file, out -> resource.save(out, MechanismFormat.saveOptions()));
             resource.setModified(false);
-        } catch (IOException | RuntimeException e) {
-            throw new MechanismFileException(file, 0, 0, "could not save (the previous file, if any, is unchanged): "
-                    + (e.getMessage() == null ? e.toString() : e.getMessage()), e);
+            return notes;
+        } catch (IOException e) {
+            throw new MechanismFileException(file, 0, 0, AtomicFileWrite.reason(e), e);
+        } catch (RuntimeException e) {
+            throw new MechanismFileException(file, 0, 0, "not saved (" + (e.getMessage() == null ? "an internal error"
+                    : e.getMessage()) + "); the previous file, if any, is unchanged", e);
         }
     }
 

@@ -7,13 +7,11 @@ import java.util.Map;
 import org.eclipse.emf.common.util.URI;
 import org.eclipse.emf.ecore.xmi.impl.XMIResourceImpl;
 
-import dev.penduline.model.persistence.internal.AtomicFileWrite;
-
 /**
  * The EMF resource of a {@code .penduline} file: XMI with the options of
  * {@link MechanismFormat} as defaults, and saving to a local file by atomic replacement, so that
  * an editor saving through the resource set gets the same guarantees as
- * {@link MechanismFiles#save}.
+ * {@link MechanismFiles#save} (the same {@link SaveLock}, the same {@link AtomicFileWrite}).
  */
 public class MechanismResource extends XMIResourceImpl {
 
@@ -40,7 +38,10 @@ public class MechanismResource extends XMIResourceImpl {
             super.save(options);
             return;
         }
-        AtomicFileWrite.write(Path.of(uri.toFileString()), out -> save(out, options));
+        final Path file = Path.of(uri.toFileString());
+        try (SaveLock lock = SaveLock.acquire(file)) {
+            AtomicFileWrite.write(file, out -> save(out, options));
+        }
         setModified(false);
     }
 

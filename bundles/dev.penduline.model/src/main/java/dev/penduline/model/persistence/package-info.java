@@ -17,5 +17,9 @@
  * refused outright (no external entities, no entity expansion). Saving through a
  * {@link dev.penduline.model.persistence.MechanismResource} replaces the file atomically; saving
  * through another resource class does not.
+ *
+ * <p><b>Saving.</b> {@link dev.penduline.model.persistence.AtomicFileWrite} is the one writer of
+ * every file Penduline writes; {@link dev.penduline.model.persistence.SaveLock} is the lock every
+ * writer of a mechanism file holds around reading, changing and saving it.
  */
 package dev.penduline.model.persistence;

@@ -19,7 +19,6 @@ import org.junit.jupiter.api.io.TempDir;
 import dev.penduline.model.InspectionHatch;
 import dev.penduline.model.Mechanism;
 import dev.penduline.model.impl.PartImpl;
-import dev.penduline.model.persistence.internal.AtomicFileWrite;
 
 class AtomicSaveTest {
 

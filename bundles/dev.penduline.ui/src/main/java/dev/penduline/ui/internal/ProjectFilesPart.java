@@ -12,12 +12,17 @@ import org.eclipse.e4.ui.workbench.modeling.ESelectionService;
 import org.eclipse.jface.viewers.IStructuredSelection;
 import org.eclipse.jface.viewers.StructuredSelection;
 import org.eclipse.jface.viewers.TreeViewer;
+import org.eclipse.jface.viewers.Viewer;
+import org.eclipse.jface.viewers.ViewerFilter;
 import org.eclipse.swt.SWT;
 import org.eclipse.swt.widgets.Composite;
 import org.eclipse.ui.model.WorkbenchContentProvider;
 import org.eclipse.ui.model.WorkbenchLabelProvider;
 
 import jakarta.inject.Inject;
+
+import dev.penduline.model.persistence.AtomicFileWrite;
+import dev.penduline.model.persistence.SaveLock;
 
 /**
  * The workspace as a tree: one project per mechanism, with its mechanism file, parts lists and
@@ -50,6 +55,12 @@ public final class ProjectFilesPart {
         viewer = new TreeViewer(parent, SWT.MULTI | SWT.H_SCROLL | SWT.V_SCROLL);
         viewer.setContentProvider(new WorkbenchContentProvider());
         viewer.setLabelProvider(WorkbenchLabelProvider.getDecoratingWorkbenchLabelProvider());
+        viewer.addFilter(new ViewerFilter() {
+            @Override
+            public boolean select(Viewer v, Object parentElement, Object element) {
+                return !(element instanceof IResource r && isSaveHousekeeping(r.getName()));
+            }
+        });
         IWorkspace workspace = ResourcesPlugin.getWorkspace();
         viewer.setInput(workspace.getRoot());
         viewer.addSelectionChangedListener(e -> selection.setSelection(
@@ -64,6 +75,17 @@ public final class ProjectFilesPart {
             }
         };
         workspace.addResourceChangeListener(refresher, IResourceChangeEvent.POST_CHANGE);
+    }
+
+    /**
+     * Whether a file is one of the saving's own: a mechanism file's lock ({@code .NAME.lock}) or
+     * the temporary file of a save ({@code .NAME.DIGITS.saving}); the tree does not show them.
+     *
+     * @param name the file's name
+     * @return true for the lock and temporary files
+     */
+    static boolean isSaveHousekeeping(String name) {
+        return name.startsWith(".") && (name.endsWith(SaveLock.LOCK_SUFFIX) || name.endsWith(AtomicFileWrite.TEMPORARY_SUFFIX));
     }
 
     /**
