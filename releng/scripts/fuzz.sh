@@ -29,9 +29,12 @@ if [ "${CI:-}" = "true" ]; then
   opts+=(-ntp)
 fi
 # Inputs of at most 32 KiB, so that an out-of-memory error in the tests' 512 MB heap is a real
-# finding; libFuzzer's per-input timeout comes from the tests' @Timeout (10 s). Jazzer passes
-# jazzer.internal.arg.N to libFuzzer (0 is the program name).
+# finding. Jazzer passes jazzer.internal.arg.N to libFuzzer (0 is the program name).
 max_len=32768
+# In fuzzing mode one JUnit invocation runs the whole campaign, so the tests' @Timeout (the hang
+# guard of the regression run) is switched off and libFuzzer's per-input -timeout takes its place.
+settings="-Djazzer.max_duration=${seconds}s -Djunit.jupiter.execution.timeout.mode=disabled"
+settings+=" -Djazzer.internal.arg.0=fuzz -Djazzer.internal.arg.1=-max_len=$max_len -Djazzer.internal.arg.2=-timeout=10"
 
 echo "fuzz.sh: building and running the seeds and committed findings (regression mode)" >&2
 if ! "$mvn" "${opts[@]}" -q clean test; then
@@ -47,7 +50,7 @@ for test in PartsListFuzzTest SwingRecordFuzzTest MechanismFileFuzzTest; do
   status=0
   log="$project/target/fuzz-$test.log"
   JAZZER_FUZZ=1 "$mvn" "${opts[@]}" -o -q surefire:test -Dtest="$test" \
-      "-Dfuzz.settings=-Djazzer.max_duration=${seconds}s -Djazzer.internal.arg.0=fuzz -Djazzer.internal.arg.1=-max_len=$max_len" \
+      "-Dfuzz.settings=$settings" \
       >"$log" 2>&1 || status=$?
   # libFuzzer's closing lines: "#N DONE cov: ... exec/s: R ..." and "Done N runs in S second(s)"
   rate="$(grep -a -o 'DONE .*exec/s: [0-9]*' "$log" | tail -n 1 | sed 's/.*exec\/s: //' || true)"

@@ -50,7 +50,8 @@ final class InputChecks {
 
     /**
      * Checks a text shown to the user (an error, a warning, an assumption): no raw control
-     * characters, no Java internals the input did not itself contain.
+     * characters, no half surrogate pairs (bytes that were not UTF-8, passed on garbled), no Java
+     * internals the input did not itself contain.
      *
      * @param what  what the text is, for the finding's description
      * @param text  the text
@@ -61,6 +62,15 @@ final class InputChecks {
             if (Character.isISOControl(text.charAt(i))) {
                 throw new AssertionError(what + " holds the raw control character U+"
                         + String.format("%04X", (int) text.charAt(i)) + ": " + visible(text));
+            }
+        }
+        for (int i = 0; i < text.length(); i++) {
+            final char c = text.charAt(i);
+            final boolean paired = Character.isHighSurrogate(c) ? i + 1 < text.length()
+                    && Character.isLowSurrogate(text.charAt(i + 1))
+                    : !Character.isLowSurrogate(c) || i > 0 && Character.isHighSurrogate(text.charAt(i - 1));
+            if (!paired) {
+                throw new AssertionError(what + " holds half a surrogate pair (garbled text) at " + i + ": " + visible(text));
             }
         }
         final String source = new String(input, StandardCharsets.UTF_8);

@@ -3,7 +3,6 @@ package dev.penduline.records.parts;
 import java.io.BufferedReader;
 import java.io.IOException;
 import java.io.Reader;
-import java.nio.charset.StandardCharsets;
 import java.nio.file.Files;
 import java.nio.file.Path;
 import java.util.ArrayList;
@@ -12,6 +11,7 @@ import java.util.List;
 import dev.penduline.physics.inertia.Part;
 import dev.penduline.records.DelimitedLine;
 import dev.penduline.records.RecordFormatException;
+import dev.penduline.records.Utf8Text;
 
 /**
  * Reads a parts list from a comma-separated file into {@link Part}s for the inertia engine.
@@ -65,7 +65,8 @@ public final class PartsListReader {
     }
 
     /**
-     * Reads a parts list file (UTF-8).
+     * Reads a parts list file (UTF-8; a line in another encoding is refused with its number,
+     * see {@link Utf8Text}).
      *
      * @param file the file; it is opened for reading only
      * @return the parts and warnings
@@ -73,7 +74,7 @@ public final class PartsListReader {
      * @throws RecordFormatException  naming file, line and column of the first problem
      */
     public PartsList read(Path file) throws IOException, RecordFormatException {
-        try (Reader in = Files.newBufferedReader(file, StandardCharsets.UTF_8)) {
+        try (Reader in = Utf8Text.reader(Files.newInputStream(file))) {
             return read(in, file.toString());
         }
     }
@@ -98,7 +99,9 @@ public final class PartsListReader {
             if (lineNumber == 1 && line.startsWith("\uFEFF")) {
                 line = line.substring(1);
             }
-            if (line.isBlank() || line.stripLeading().startsWith("#")) {
+            final boolean skipped = line.isBlank() || line.stripLeading().startsWith("#");
+            Utf8Text.check(line, lineNumber, !skipped, fileName);
+            if (skipped) {
                 continue;
             }
             final List<String> cells = DelimitedLine.split(line, ',', fileName, lineNumber);
