@@ -98,6 +98,9 @@ public record LoadProblem(int line, int column, String problem) {
     private static String explain(String message) {
         final String m = message == null ? "" : CLASS_NAME.matcher(message).replaceAll("").strip();
         final String lower = m.toLowerCase(Locale.ROOT);
+        if (lower.contains("utf-8 sequence")) {
+            return NOT_UTF8;
+        }
         if (lower.contains("doctype")) {
             return "the file contains a DOCTYPE declaration, which a mechanism file never has; refused because a"
                     + " DTD can define entities that read other files or expand without bound (" + m + ")";
