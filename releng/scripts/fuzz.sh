@@ -4,7 +4,9 @@
 # reader in its own JVM for SECONDS (default 60): parts lists, swing records, mechanism files.
 # Fails on a finding and says where the input was saved (the reader's inputs directory under
 # releng/fuzz/src/test/resources/, from where the regression run replays it from then on).
-# Usage: releng/scripts/fuzz.sh [SECONDS_PER_READER] [-o]     (-o: Maven offline)
+# Usage: releng/scripts/fuzz.sh [SECONDS_PER_READER] [-o]     (-o: Maven offline; 0 seconds: the
+# regression run only). Seeds: the samples' parts lists, records and mechanism files, the records
+# of the physics tests and the reference corpus, and every file of the hostile corpus (files/).
 set -euo pipefail
 root="$(cd "$(dirname "${BASH_SOURCE[0]}")/../.." && pwd)"
 seconds="${1:-60}"
@@ -44,6 +46,10 @@ if ! "$mvn" "${opts[@]}" -q clean test; then
 fi
 
 found=0
+if [ "$seconds" -eq 0 ]; then
+  echo "fuzz.sh: 0 seconds: the regression run only" >&2
+  exit 0
+fi
 for test in PartsListFuzzTest SwingRecordFuzzTest MechanismFileFuzzTest; do
   before="$(find "$inputs/${test}Inputs" -type f | sort)"
   echo "fuzz.sh: fuzzing $test for ${seconds} s" >&2
@@ -61,11 +67,18 @@ for test in PartsListFuzzTest SwingRecordFuzzTest MechanismFileFuzzTest; do
   if [ "$status" -ne 0 ] || [ -n "$new" ]; then
     found=1
     echo "fuzz.sh: FINDING in $test (Maven exit $status); the whole log is $log" >&2
-    grep -a -A 6 '== Java Exception' "$log" | head -n 20 >&2 || true
+    grep -a -E '» (FuzzTestFinding|Timeout)' "$log" | head -n 5 >&2 || true
     grep -a -o 'Test unit written to .*' "$log" >&2 || true
     for f in $new; do
       echo "fuzz.sh: the input that caused it is saved as $f" >&2
     done
   fi
 done
+if [ "$found" -ne 0 ]; then
+  echo "fuzz.sh: a reader broke its promise. Replay the input with the regression run" \
+      "(releng/scripts/fuzz.sh 0), fix the reader, then make the input a regression input:" \
+      "a small file in bundles/dev.penduline.cli/src/test/resources/hostile/files/fuzz/" \
+      "(releng/reference/make_fuzz_fixtures.py) and an entry in hostile/entries-fuzz.txt (DEVELOPERS.md," \
+      "\"Fuzzing the readers\")" >&2
+fi
 exit "$found"
