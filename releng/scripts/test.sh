@@ -31,15 +31,12 @@ if [ "${CI:-}" = "true" ]; then
   opts+=(-ntp)
 fi
 fuzz_seconds="${FUZZ_SECONDS:-60}"
-case "$fuzz_seconds" in
-  ''|*[!0-9]*) echo "test.sh: FUZZ_SECONDS must be a whole number of seconds per reader, got '$fuzz_seconds'" >&2; exit 2 ;;
-esac
+if ! [[ "$fuzz_seconds" =~ ^[0-9]+$ ]]; then
+  echo "test.sh: FUZZ_SECONDS must be a whole number of seconds per reader, got '$fuzz_seconds'" >&2
+  exit 2
+fi
 fuzz_opts=()
-for a in "$@"; do
-  case "$a" in
-    -o|--offline) fuzz_opts=(-o) ;;
-  esac
-done
+[[ " $* " == *" -o "* || " $* " == *" --offline "* ]] && fuzz_opts=(-o)
 echo "test.sh: JDK $JAVA_HOME, $("$mvn" -v | head -n 1)" >&2
 # Generated EMF code must be what the genmodel generates (never hand-edited).
 "$root/releng/scripts/regenerate-model.sh" --check
