@@ -55,6 +55,12 @@ def main():
     write("mech-control-value.penduline", HEAD + ROOT + "  <part>\n    <id>lid</id>\n"
           + "    <mass>heavy\n\u009b31m</mass>\n  </part>\n" + END)
     write("mech-not-xml.penduline", "junk before the prolog\n")
+    # mechanism file that loads: a part's name with a tab and a C1 control (both legal in XML 1.0)
+    # and a negative mass; the validation message echoed the name raw
+    write("mech-name-controls.penduline", HEAD + ROOT + "  <name>lid</name>\n  <part>\n    <id>plate</id>\n"
+          + "    <name>pl\tate\u009b2J</name>\n    <shape>box</shape>\n    <length>0.006</length>\n"
+          + "    <width>0.5</width>\n    <height>0.6</height>\n    <mass>-4.86</mass>\n"
+          + "    <centroidY>-0.27</centroidY>\n  </part>\n" + END)
 
 
 if __name__ == "__main__":

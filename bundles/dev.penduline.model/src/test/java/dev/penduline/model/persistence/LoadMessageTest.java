@@ -14,10 +14,13 @@ import java.util.regex.Pattern;
 import org.junit.jupiter.api.Test;
 import org.junit.jupiter.api.io.TempDir;
 
+import dev.penduline.model.Mechanism;
+import dev.penduline.model.validation.MechanismValidation;
+
 /**
  * What the fuzzer of the mechanism-file reader found (releng/fuzz; the inputs are also in the
  * hostile corpus, hostile/files/fuzz/): messages that named the XML parser's exception classes, and
- * control characters from the file echoed raw into a message.
+ * control characters from the file echoed raw into a load or a validation message.
  */
 class LoadMessageTest {
 
@@ -76,5 +79,18 @@ class LoadMessageTest {
         final MechanismFileException e = refused("value.penduline", bytes(HEAD, ROOT, "  <part>\n    <id>lid</id>\n",
                 "    <mass>heavy\n\u009b31m</mass>\n  </part>\n</penduline:Mechanism>\n"));
         assertTrue(e.problem().contains("heavy\\u000a\\u009b31m"), e.getMessage());
+    }
+
+    @Test
+    void validationMessagesEscapeTheControlCharactersOfANameFromTheFile() throws Exception {
+        final Path file = Files.write(dir.resolve("names.penduline"), bytes(HEAD, ROOT, "  <name>lid</name>\n  <part>\n",
+                "    <id>plate</id>\n    <name>pl\tate\u009b2J</name>\n    <shape>box</shape>\n    <length>0.006</length>\n",
+                "    <width>0.5</width>\n    <height>0.6</height>\n    <mass>-4.86</mass>\n  </part>\n",
+                "</penduline:Mechanism>\n"));
+        final Mechanism m = MechanismFiles.load(file);
+        assertEquals("pl\tate\u009b2J", m.getParts().get(0).getName(), "the name itself is kept as written");
+        final String mass = MechanismValidation.problems(m).stream().filter(p -> p.contains("mass")).findFirst()
+                .orElseThrow();
+        assertTrue(mass.startsWith("part 'pl\\u0009ate\\u009b2J': mass must be positive"), mass);
     }
 }
