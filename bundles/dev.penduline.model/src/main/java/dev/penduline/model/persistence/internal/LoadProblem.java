@@ -1,6 +1,7 @@
 package dev.penduline.model.persistence.internal;
 
 import java.io.CharConversionException;
+import java.nio.charset.CharacterCodingException;
 import java.util.Locale;
 import java.util.regex.Pattern;
 
@@ -56,7 +57,7 @@ public record LoadProblem(int line, int column, String problem) {
     /** The decoder's complaint (Xerces' MalformedByteSequenceException is a CharConversionException). */
     private static boolean isNotUtf8(Throwable failure) {
         for (Throwable t = failure; t != null; t = next(t)) {
-            if (t instanceof CharConversionException || t instanceof java.nio.charset.CharacterCodingException) {
+            if (t instanceof CharConversionException || t instanceof CharacterCodingException) {
                 return true;
             }
         }
