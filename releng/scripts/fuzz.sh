@@ -4,7 +4,9 @@
 # reader in its own JVM for SECONDS (default 60): parts lists, swing records, mechanism files.
 # Fails on a finding and says where the input was saved (the reader's inputs directory under
 # releng/fuzz/src/test/resources/, from where the regression run replays it from then on).
-# Usage: releng/scripts/fuzz.sh [SECONDS_PER_READER] [-o]     (-o: Maven offline)
+# Usage: releng/scripts/fuzz.sh [SECONDS_PER_READER] [-o]     (-o: Maven offline; 0 seconds: the
+# regression run only). Seeds: the samples' parts lists, records and mechanism files, the records
+# of the physics tests and the reference corpus, and every file of the hostile corpus (files/).
 set -euo pipefail
 root="$(cd "$(dirname "${BASH_SOURCE[0]}")/../.." && pwd)"
 seconds="${1:-60}"
@@ -29,9 +31,12 @@ if [ "${CI:-}" = "true" ]; then
   opts+=(-ntp)
 fi
 # Inputs of at most 32 KiB, so that an out-of-memory error in the tests' 512 MB heap is a real
-# finding; libFuzzer's per-input timeout comes from the tests' @Timeout (10 s). Jazzer passes
-# jazzer.internal.arg.N to libFuzzer (0 is the program name).
+# finding. Jazzer passes jazzer.internal.arg.N to libFuzzer (0 is the program name).
 max_len=32768
+# In fuzzing mode one JUnit invocation runs the whole campaign, so the tests' @Timeout (the hang
+# guard of the regression run) is switched off and libFuzzer's per-input -timeout takes its place.
+settings="-Djazzer.max_duration=${seconds}s -Djunit.jupiter.execution.timeout.mode=disabled"
+settings+=" -Djazzer.internal.arg.0=fuzz -Djazzer.internal.arg.1=-max_len=$max_len -Djazzer.internal.arg.2=-timeout=10"
 
 echo "fuzz.sh: building and running the seeds and committed findings (regression mode)" >&2
 if ! "$mvn" "${opts[@]}" -q clean test; then
@@ -41,13 +46,17 @@ if ! "$mvn" "${opts[@]}" -q clean test; then
 fi
 
 found=0
+if [ "$seconds" -eq 0 ]; then
+  echo "fuzz.sh: 0 seconds: the regression run only" >&2
+  exit 0
+fi
 for test in PartsListFuzzTest SwingRecordFuzzTest MechanismFileFuzzTest; do
   before="$(find "$inputs/${test}Inputs" -type f | sort)"
   echo "fuzz.sh: fuzzing $test for ${seconds} s" >&2
   status=0
   log="$project/target/fuzz-$test.log"
   JAZZER_FUZZ=1 "$mvn" "${opts[@]}" -o -q surefire:test -Dtest="$test" \
-      "-Dfuzz.settings=-Djazzer.max_duration=${seconds}s -Djazzer.internal.arg.0=fuzz -Djazzer.internal.arg.1=-max_len=$max_len" \
+      "-Dfuzz.settings=$settings" \
       >"$log" 2>&1 || status=$?
   # libFuzzer's closing lines: "#N DONE cov: ... exec/s: R ..." and "Done N runs in S second(s)"
   rate="$(grep -a -o 'DONE .*exec/s: [0-9]*' "$log" | tail -n 1 | sed 's/.*exec\/s: //' || true)"
@@ -58,11 +67,18 @@ for test in PartsListFuzzTest SwingRecordFuzzTest MechanismFileFuzzTest; do
   if [ "$status" -ne 0 ] || [ -n "$new" ]; then
     found=1
     echo "fuzz.sh: FINDING in $test (Maven exit $status); the whole log is $log" >&2
-    grep -a -A 6 '== Java Exception' "$log" | head -n 20 >&2 || true
+    grep -a -E '» (FuzzTestFinding|Timeout)' "$log" | head -n 5 >&2 || true
     grep -a -o 'Test unit written to .*' "$log" >&2 || true
     for f in $new; do
       echo "fuzz.sh: the input that caused it is saved as $f" >&2
     done
   fi
 done
+if [ "$found" -ne 0 ]; then
+  echo "fuzz.sh: a reader broke its promise. Replay the input with the regression run" \
+      "(releng/scripts/fuzz.sh 0), fix the reader, then make the input a regression input:" \
+      "a small file in bundles/dev.penduline.cli/src/test/resources/hostile/files/fuzz/" \
+      "(releng/reference/make_fuzz_fixtures.py) and an entry in hostile/entries-fuzz.txt (DEVELOPERS.md," \
+      "\"Fuzzing the readers\")" >&2
+fi
 exit "$found"

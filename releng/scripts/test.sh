@@ -3,6 +3,8 @@
 # when missing (Xvfb, xauth and GTK 3 from Debian; Maven 3.9 into .tools/), then builds
 # everything and runs all tests: the plain JUnit tests of the headless bundles and the OSGi and
 # workbench tests under a virtual display. Extra arguments go to Maven (e.g. -o, -pl ...).
+# Then it fuzzes the three readers of user files (releng/scripts/fuzz.sh) for FUZZ_SECONDS per
+# reader (default 60; FUZZ_SECONDS=0 skips it) and fails on a finding, printing the input.
 set -euo pipefail
 root="$(cd "$(dirname "${BASH_SOURCE[0]}")/../.." && pwd)"
 cd "$root"
@@ -28,7 +30,21 @@ opts=(-B)
 if [ "${CI:-}" = "true" ]; then
   opts+=(-ntp)
 fi
+fuzz_seconds="${FUZZ_SECONDS:-60}"
+if ! [[ "$fuzz_seconds" =~ ^[0-9]+$ ]]; then
+  echo "test.sh: FUZZ_SECONDS must be a whole number of seconds per reader, got '$fuzz_seconds'" >&2
+  exit 2
+fi
+fuzz_opts=()
+[[ " $* " == *" -o "* || " $* " == *" --offline "* ]] && fuzz_opts=(-o)
 echo "test.sh: JDK $JAVA_HOME, $("$mvn" -v | head -n 1)" >&2
 # Generated EMF code must be what the genmodel generates (never hand-edited).
 "$root/releng/scripts/regenerate-model.sh" --check
-exec xvfb-run -a -s "-screen 0 1400x900x24" "$mvn" "${opts[@]}" clean verify "$@"
+xvfb-run -a -s "-screen 0 1400x900x24" "$mvn" "${opts[@]}" clean verify "$@"
+if [ "$fuzz_seconds" -eq 0 ]; then
+  echo "test.sh: FUZZ_SECONDS=0: the readers are not fuzzed" >&2
+  exit 0
+fi
+# The fuzz project compiles the readers' sources itself (releng/fuzz/pom.xml); it needs only the
+# local Maven repository (Jazzer and JUnit come from there, fetched on first use unless -o).
+exec "$root/releng/scripts/fuzz.sh" "$fuzz_seconds" "${fuzz_opts[@]}"

@@ -28,7 +28,7 @@ public final class PlainText {
     }
 
     /** Half of a surrogate pair without its other half: no character at all, and not writable as UTF-8. */
-    private static boolean isLoneSurrogate(String s, int i) {
+    static boolean isLoneSurrogate(String s, int i) {
         char c = s.charAt(i);
         if (Character.isHighSurrogate(c)) {
             return i + 1 >= s.length() || !Character.isLowSurrogate(s.charAt(i + 1));
@@ -54,6 +54,32 @@ public final class PlainText {
             }
         }
         return Optional.empty();
+    }
+
+    /**
+     * A text as it may be shown inside a message: every control character (line feed and tab
+     * included, since a message is one line) and every broken character written as a visible
+     * escape, {@code \\u001b} for ESC, so that text echoed from a user's file can never drive a
+     * terminal or break a message's line.
+     *
+     * @param text the text, e.g. a cell or a header name from a file
+     * @return the text with those characters escaped (the same string when there are none)
+     */
+    public static String visible(String text) {
+        StringBuilder b = null;
+        for (int i = 0; i < text.length(); i++) {
+            char c = text.charAt(i);
+            boolean escape = isControl(c) || isLoneSurrogate(text, i);
+            if (escape && b == null) {
+                b = new StringBuilder(text.length() + 8).append(text, 0, i);
+            }
+            if (escape) {
+                b.append(String.format(Locale.ROOT, "\\u%04x", (int) c));
+            } else if (b != null) {
+                b.append(c);
+            }
+        }
+        return b == null ? text : b.toString();
     }
 
     /**

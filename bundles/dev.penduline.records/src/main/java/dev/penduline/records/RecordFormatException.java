@@ -25,14 +25,16 @@ public class RecordFormatException extends Exception {
      * @param lineNumber the 1-based line, or 0 when the problem concerns the whole file
      * @param columnName the column's header name as written in the file, or null when the
      *                   problem concerns the whole line
-     * @param problem    what is wrong, and where helpful what to do
+     * @param problem    what is wrong, and where helpful what to do; control characters in it
+     *                   (echoed from the file) are escaped
      */
     public RecordFormatException(String fileName, int lineNumber, String columnName, String problem) {
-        super(format(fileName, lineNumber, columnName, problem));
+        super(format(fileName, lineNumber, columnName == null ? null : PlainText.visible(columnName),
+                PlainText.visible(problem)));
         this.fileName = fileName;
         this.lineNumber = lineNumber;
-        this.columnName = columnName;
-        this.problem = problem;
+        this.columnName = columnName == null ? null : PlainText.visible(columnName);
+        this.problem = PlainText.visible(problem);
     }
 
     /**
@@ -56,7 +58,7 @@ public class RecordFormatException extends Exception {
     /**
      * The column of the problem, by its header name.
      *
-     * @return the column's header name, or null when the whole line is concerned
+     * @return the column's header name (control characters escaped), or null when the whole line is concerned
      */
     public String getColumnName() {
         return columnName;
@@ -65,14 +67,14 @@ public class RecordFormatException extends Exception {
     /**
      * What is wrong, without the location.
      *
-     * @return the problem
+     * @return the problem, with control characters escaped
      */
     public String getProblem() {
         return problem;
     }
 
     private static String format(String file, int line, String column, String problem) {
-        final StringBuilder b = new StringBuilder(file == null ? "<input>" : file);
+        final StringBuilder b = new StringBuilder(file == null ? "<input>" : PlainText.visible(file));
         if (line > 0) {
             b.append(':').append(line);
         }

@@ -28,6 +28,9 @@ final class InputChecks {
     /** Object.toString's "Foo@1a2b3c". */
     private static final Pattern HASH_TO_STRING = Pattern.compile("[A-Za-z_$][\\w$.]*@[0-9a-f]{4,8}\\b");
 
+    /** How the readers show a control character they echo: backslash, u, four hex digits. */
+    private static final Pattern ESCAPE = Pattern.compile("\\\\u[0-9a-fA-F]{4}");
+
     private InputChecks() {
     }
 
@@ -50,7 +53,8 @@ final class InputChecks {
 
     /**
      * Checks a text shown to the user (an error, a warning, an assumption): no raw control
-     * characters, no Java internals the input did not itself contain.
+     * characters, no half surrogate pairs (bytes that were not UTF-8, passed on garbled), no Java
+     * internals the input did not itself contain.
      *
      * @param what  what the text is, for the finding's description
      * @param text  the text
@@ -63,6 +67,15 @@ final class InputChecks {
                         + String.format("%04X", (int) text.charAt(i)) + ": " + visible(text));
             }
         }
+        for (int i = 0; i < text.length(); i++) {
+            final char c = text.charAt(i);
+            final boolean paired = Character.isHighSurrogate(c) ? i + 1 < text.length()
+                    && Character.isLowSurrogate(text.charAt(i + 1))
+                    : !Character.isLowSurrogate(c) || i > 0 && Character.isHighSurrogate(text.charAt(i - 1));
+            if (!paired) {
+                throw new AssertionError(what + " holds half a surrogate pair (garbled text) at " + i + ": " + visible(text));
+            }
+        }
         final String source = new String(input, StandardCharsets.UTF_8);
         final String latin = new String(input, StandardCharsets.ISO_8859_1);
         for (String word : INTERNALS) {
@@ -70,7 +83,9 @@ final class InputChecks {
                 throw new AssertionError(what + " shows Java internals ('" + word.strip() + "'): " + visible(text));
             }
         }
-        final Matcher m = HASH_TO_STRING.matcher(text);
+        // an escaped control character (backslash-u-0000) is the reader's rendering of an input byte: the
+        // letters after it must not be taken together with the escape for a class name
+        final Matcher m = HASH_TO_STRING.matcher(ESCAPE.matcher(text).replaceAll(" "));
         while (m.find()) {
             if (!source.contains(m.group()) && !latin.contains(m.group())) {
                 throw new AssertionError(what + " shows an object's toString ('" + m.group() + "'): " + visible(text));

@@ -2,9 +2,12 @@ package dev.penduline.model.persistence;
 
 import java.nio.file.Path;
 
+import dev.penduline.model.persistence.internal.LoadProblem;
+
 /**
  * A mechanism file could not be read or written. The message names the file and, when the
  * problem has a place in it, the line and column, so that a user can open the file there.
+ * Control characters echoed from the file are shown as escapes, so the message is one line.
  */
 public final class MechanismFileException extends Exception {
 
@@ -25,11 +28,11 @@ public final class MechanismFileException extends Exception {
      * @param cause   the underlying exception, or null
      */
     public MechanismFileException(Path file, int line, int column, String problem, Throwable cause) {
-        super(format(file, line, column, problem), cause);
+        super(format(file, line, column, LoadProblem.printable(problem)), cause);
         this.file = file;
         this.line = Math.max(0, line);
         this.column = Math.max(0, column);
-        this.problem = problem;
+        this.problem = LoadProblem.printable(problem);
     }
 
     /**
@@ -62,7 +65,7 @@ public final class MechanismFileException extends Exception {
     /**
      * What is wrong, without the file and position.
      *
-     * @return the problem text
+     * @return the problem text (control characters escaped)
      */
     public String problem() {
         return problem;

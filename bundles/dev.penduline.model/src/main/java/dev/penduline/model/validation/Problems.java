@@ -6,7 +6,13 @@ import org.eclipse.emf.common.util.DiagnosticChain;
 import org.eclipse.emf.ecore.EObject;
 import org.eclipse.emf.ecore.EStructuralFeature;
 
-/** Collects the diagnostics of one element's rules; works with or without a chain. */
+import dev.penduline.model.persistence.internal.LoadProblem;
+
+/**
+ * Collects the diagnostics of one element's rules; works with or without a chain. Names and
+ * values from the file are echoed with their control characters escaped (a mechanism file may
+ * hold tabs, line feeds and C1 controls in a name), so each message is one printable line.
+ */
 final class Problems {
 
     private final DiagnosticChain chain;
@@ -33,7 +39,7 @@ final class Problems {
         clean = false;
         if (chain != null) {
             final Object[] data = feature == null ? new Object[] {object} : new Object[] {object, feature};
-            chain.add(new BasicDiagnostic(severity, MechanismRule.SOURCE, rule.code(), message, data));
+            chain.add(new BasicDiagnostic(severity, MechanismRule.SOURCE, rule.code(), LoadProblem.printable(message), data));
         }
     }
 

@@ -67,7 +67,7 @@ final class PartLine {
         };
         for (PartsColumn c : GEOMETRY) {
             if (!used.contains(c) && row.isFilled(c) && !(shape == null && TENSOR.contains(c))) {
-                warnings.add(row.file() + ":" + row.line() + ": column '" + row.headerName(c)
+                warnings.add(row.file() + ":" + row.line() + ": column '" + PlainText.visible(row.headerName(c))
                         + "' is not used by a " + kind + " and is ignored");
             }
         }

@@ -9,6 +9,7 @@ import java.util.Optional;
 
 import dev.penduline.physics.units.SuffixedName;
 import dev.penduline.physics.units.Unit;
+import dev.penduline.records.PlainText;
 import dev.penduline.records.RecordFormatException;
 
 /**
@@ -44,7 +45,8 @@ final class PartsHeader {
             }
             final Slot slot = recognise(h, header, i, file, line);
             if (slot == null) {
-                warnings.add(file + ":" + line + ": column '" + header + "' is not a parts-list column and is ignored");
+                warnings.add(file + ":" + line + ": column '" + PlainText.visible(header)
+                        + "' is not a parts-list column and is ignored");
                 continue;
             }
             final PartsColumn column = columnOf(h);

@@ -3,7 +3,6 @@ package dev.penduline.records.parts;
 import java.io.BufferedReader;
 import java.io.IOException;
 import java.io.Reader;
-import java.nio.charset.StandardCharsets;
 import java.nio.file.Files;
 import java.nio.file.Path;
 import java.util.ArrayList;
@@ -13,6 +12,7 @@ import dev.penduline.physics.inertia.Part;
 import dev.penduline.records.DelimitedLine;
 import dev.penduline.records.InputFiles;
 import dev.penduline.records.RecordFormatException;
+import dev.penduline.records.Utf8Text;
 
 /**
  * Reads a parts list from a comma-separated file into {@link Part}s for the inertia engine.
@@ -66,7 +66,8 @@ public final class PartsListReader {
     }
 
     /**
-     * Reads a parts list file (UTF-8).
+     * Reads a parts list file (UTF-8; a line in another encoding is refused with its number,
+     * see {@link Utf8Text}).
      *
      * @param file the file; it is opened for reading only, and only when it is a regular file (a named
      *             pipe, a device or a folder is refused unopened, see {@link InputFiles})
@@ -76,7 +77,7 @@ public final class PartsListReader {
      */
     public PartsList read(Path file) throws IOException, RecordFormatException {
         InputFiles.requireRegularFile(file, "a parts list (a .csv file)");
-        try (Reader in = Files.newBufferedReader(file, StandardCharsets.UTF_8)) {
+        try (Reader in = Utf8Text.reader(Files.newInputStream(file))) {
             return read(in, file.toString());
         }
     }
@@ -101,7 +102,9 @@ public final class PartsListReader {
             if (lineNumber == 1 && line.startsWith("\uFEFF")) {
                 line = line.substring(1);
             }
-            if (line.isBlank() || line.stripLeading().startsWith("#")) {
+            final boolean skipped = line.isBlank() || line.stripLeading().startsWith("#");
+            Utf8Text.check(line, lineNumber, !skipped, fileName);
+            if (skipped) {
                 continue;
             }
             final List<String> cells = DelimitedLine.split(line, ',', fileName, lineNumber);

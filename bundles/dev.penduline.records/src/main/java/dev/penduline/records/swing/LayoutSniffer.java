@@ -31,6 +31,10 @@ final class LayoutSniffer {
     /** "time (s)", "angle [deg]", "t[ms]". */
     private static final Pattern BRACKETED = Pattern.compile("(.*?)\\s*[\\(\\[]\\s*([^\\)\\]]+?)\\s*[\\)\\]]\\s*");
 
+    /** Why a comma cannot be both the delimiter and the decimal separator. */
+    static final String DECIMAL_IS_DELIMITER = "the decimal separator ',' cannot also be the delimiter: a file with"
+            + " decimal commas separates its fields by semicolons or tabs (delimiter semicolon or tab)";
+
     private LayoutSniffer() {
     }
 
@@ -43,6 +47,9 @@ final class LayoutSniffer {
         final List<String> first = DelimitedLine.split(lines.get(0).text(), delimiter, file, lines.get(0).number());
         final char decimal = o.decimalSeparator() != null ? o.decimalSeparator()
                 : decimal(lines, delimiter, assumptions);
+        if (decimal == delimiter) {
+            throw new RecordFormatException(file, lines.get(0).number(), null, DECIMAL_IS_DELIMITER);
+        }
         boolean header;
         if (o.header() != null) {
             header = o.header();

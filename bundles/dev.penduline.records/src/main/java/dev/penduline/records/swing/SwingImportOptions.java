@@ -35,6 +35,9 @@ public record SwingImportOptions(Character delimiter, Character decimalSeparator
         if (decimalSeparator != null && decimalSeparator != '.' && decimalSeparator != ',') {
             throw new IllegalArgumentException("decimal separator must be '.' or ',', got '" + decimalSeparator + "'");
         }
+        if (delimiter != null && delimiter == ',' && decimalSeparator != null && decimalSeparator == ',') {
+            throw new IllegalArgumentException(LayoutSniffer.DECIMAL_IS_DELIMITER);
+        }
         if (timeUnit != null && timeUnit.quantity() != Quantity.TIME) {
             throw new IllegalArgumentException("time unit '" + timeUnit.symbol() + "' is not a unit of time");
         }

@@ -3,8 +3,6 @@ package dev.penduline.records.swing;
 import java.io.BufferedReader;
 import java.io.IOException;
 import java.io.InputStream;
-import java.io.InputStreamReader;
-import java.nio.charset.StandardCharsets;
 import java.nio.file.Files;
 import java.nio.file.Path;
 import java.nio.file.StandardOpenOption;
@@ -19,6 +17,7 @@ import java.util.Locale;
 import dev.penduline.records.DelimitedLine;
 import dev.penduline.records.InputFiles;
 import dev.penduline.records.RecordFormatException;
+import dev.penduline.records.Utf8Text;
 import dev.penduline.records.swing.LayoutSniffer.SampleLine;
 
 /**
@@ -71,7 +70,8 @@ public final class SwingRecordReader {
     }
 
     /**
-     * Reads a record from a byte stream (UTF-8) to its end.
+     * Reads a record from a byte stream (UTF-8; a used line in another encoding is refused with its
+     * number, see {@link Utf8Text}) to its end.
      *
      * @param in       the bytes; not closed by this method
      * @param fileName the name to use in messages and as the record's source
@@ -84,7 +84,7 @@ public final class SwingRecordReader {
             throws IOException, RecordFormatException {
         final MessageDigest digest = sha256();
         final CountingDigestStream hashed = new CountingDigestStream(in, digest);
-        final BufferedReader lines = new BufferedReader(new InputStreamReader(hashed, StandardCharsets.UTF_8), 1 << 16);
+        final BufferedReader lines = new BufferedReader(Utf8Text.reader(hashed), 1 << 16);
         final List<SampleLine> sniffed = new ArrayList<>();
         int lineNumber = 0;
         String line;
@@ -93,7 +93,9 @@ public final class SwingRecordReader {
             if (lineNumber == 1 && line.startsWith("\uFEFF")) {
                 line = line.substring(1);
             }
-            if (!isSkipped(line)) {
+            final boolean skipped = isSkipped(line);
+            Utf8Text.check(line, lineNumber, !skipped, fileName);
+            if (!skipped) {
                 sniffed.add(new SampleLine(line, lineNumber));
             }
         }
@@ -110,6 +112,7 @@ public final class SwingRecordReader {
         while ((line = lines.readLine()) != null) {
             lineNumber++;
             if (!isSkipped(line)) {
+                Utf8Text.check(line, lineNumber, true, fileName);
                 parser.parse(line, lineNumber, series);
             }
         }

@@ -1,6 +1,9 @@
 package dev.penduline.model.persistence.internal;
 
+import java.io.CharConversionException;
+import java.nio.charset.CharacterCodingException;
 import java.util.Locale;
+import java.util.regex.Pattern;
 
 import org.eclipse.emf.ecore.resource.Resource;
 import org.xml.sax.SAXParseException;
@@ -16,6 +19,18 @@ import org.xml.sax.SAXParseException;
 public record LoadProblem(int line, int column, String problem) {
 
     /**
+     * A Java class name as the parser and EMF put them into messages ("com.sun...FooException: ",
+     * "org.xml.sax.SAXParseException; lineNumber: 3; "): an internal a user cannot act on.
+     */
+    private static final Pattern CLASS_NAME = Pattern.compile(
+            "\\b(?:java|javax|jdk|sun|com\\.sun|org\\.xml|org\\.w3c|org\\.apache|org\\.eclipse)\\.(?:[a-zA-Z_$][\\w$]*\\.)*"
+            + "[A-Z][\\w$]*(?:[:;]\\s*(?:lineNumber: \\d+; columnNumber: \\d+;\\s*)?)?");
+
+    /** What a file that is not UTF-8 gets, whichever part of the parser noticed. */
+    private static final String NOT_UTF8 = "not UTF-8 text: a mechanism file is UTF-8 (Penduline writes it so);"
+            + " was it saved by another program in another encoding, or is it not a mechanism file?";
+
+    /**
      * Describes the first located cause in the chain.
      *
      * @param failure what the load threw
@@ -29,12 +44,24 @@ public record LoadProblem(int line, int column, String problem) {
                 return new LoadProblem(sax.getLineNumber(), sax.getColumnNumber(), explain(sax.getMessage()));
             }
         }
+        final boolean notUtf8 = isNotUtf8(failure);
         for (Throwable t = failure; t != null; t = next(t)) {
             if (t instanceof Resource.Diagnostic d && d.getLine() > 0) {
-                return new LoadProblem(d.getLine(), d.getColumn(), explain(stripLocation(d.getMessage())));
+                return new LoadProblem(d.getLine(), d.getColumn(), notUtf8 ? NOT_UTF8 : explain(stripLocation(d.getMessage())));
             }
         }
-        return new LoadProblem(0, 0, explain(failure.getMessage() == null ? failure.toString() : failure.getMessage()));
+        return new LoadProblem(0, 0, notUtf8 ? NOT_UTF8 : explain(failure.getMessage() == null
+                ? "the parser stopped without saying why" : failure.getMessage()));
+    }
+
+    /** The decoder's complaint (Xerces' MalformedByteSequenceException is a CharConversionException). */
+    private static boolean isNotUtf8(Throwable failure) {
+        for (Throwable t = failure; t != null; t = next(t)) {
+            if (t instanceof CharConversionException || t instanceof CharacterCodingException) {
+                return true;
+            }
+        }
+        return false;
     }
 
     /**
@@ -70,8 +97,11 @@ public record LoadProblem(int line, int column, String problem) {
     }
 
     private static String explain(String message) {
-        final String m = message == null ? "" : message;
+        final String m = message == null ? "" : CLASS_NAME.matcher(message).replaceAll("").strip();
         final String lower = m.toLowerCase(Locale.ROOT);
+        if (lower.contains("utf-8 sequence")) {
+            return NOT_UTF8;
+        }
         if (lower.contains("doctype")) {
             return "the file contains a DOCTYPE declaration, which a mechanism file never has; refused because a"
                     + " DTD can define entities that read other files or expand without bound (" + m + ")";
@@ -94,6 +124,28 @@ public record LoadProblem(int line, int column, String problem) {
             return "bad value: " + m;
         }
         return "not a well-formed mechanism file: " + m;
+    }
+
+    /**
+     * A message as it may be shown: control characters (echoed from the file, line feeds and tabs
+     * included) written as {@code \\u000a}-style escapes. The rule is that of
+     * {@code dev.penduline.records.PlainText#visible} (the JDK's ISO control characters: C0, DEL,
+     * C1), which the model cannot call: the model sits below the records bundle.
+     *
+     * @param text the message
+     * @return the message on one printable line
+     */
+    public static String printable(String text) {
+        final StringBuilder b = new StringBuilder(text.length());
+        for (int i = 0; i < text.length(); i++) {
+            final char c = text.charAt(i);
+            if (Character.isISOControl(c)) {
+                b.append(String.format(Locale.ROOT, "\\u%04x", (int) c));
+            } else {
+                b.append(c);
+            }
+        }
+        return b.toString();
     }
 
     /** EMF appends "(uri, line, column)" to its messages; we report the position ourselves. */
