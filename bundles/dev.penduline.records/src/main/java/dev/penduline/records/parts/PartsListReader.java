@@ -10,7 +10,9 @@ import java.util.ArrayList;
 import java.util.List;
 
 import dev.penduline.physics.inertia.Part;
+import dev.penduline.records.BoundedLines;
 import dev.penduline.records.DelimitedLine;
+import dev.penduline.records.InputLimits;
 import dev.penduline.records.RecordFormatException;
 
 /**
@@ -73,6 +75,7 @@ public final class PartsListReader {
      * @throws RecordFormatException  naming file, line and column of the first problem
      */
     public PartsList read(Path file) throws IOException, RecordFormatException {
+        InputLimits.requireSize(file, InputLimits.MAX_PARTS_LIST_BYTES, "parts list");
         try (Reader in = Files.newBufferedReader(file, StandardCharsets.UTF_8)) {
             return read(in, file.toString());
         }
@@ -93,7 +96,8 @@ public final class PartsListReader {
         final List<String> warnings = new ArrayList<>();
         PartsHeader header = null;
         int lineNumber = 0;
-        for (String line = lines.readLine(); line != null; line = lines.readLine()) {
+        final BoundedLines bounded = new BoundedLines(lines, fileName, InputLimits.MAX_LINE_CHARS);
+        for (String line = bounded.next(); line != null; line = bounded.next()) {
             lineNumber++;
             if (lineNumber == 1 && line.startsWith("\uFEFF")) {
                 line = line.substring(1);

@@ -16,7 +16,9 @@ import java.util.HexFormat;
 import java.util.List;
 import java.util.Locale;
 
+import dev.penduline.records.BoundedLines;
 import dev.penduline.records.DelimitedLine;
+import dev.penduline.records.InputLimits;
 import dev.penduline.records.RecordFormatException;
 import dev.penduline.records.swing.LayoutSniffer.SampleLine;
 
@@ -62,6 +64,7 @@ public final class SwingRecordReader {
      * @throws RecordFormatException naming file, line and column of the first problem
      */
     public SwingRecord read(Path file, SwingImportOptions options) throws IOException, RecordFormatException {
+        InputLimits.requireSize(file, InputLimits.MAX_RECORD_BYTES, "swing record");
         try (InputStream in = Files.newInputStream(file, StandardOpenOption.READ)) {
             return read(in, file.toString(), options);
         }
@@ -82,10 +85,11 @@ public final class SwingRecordReader {
         final MessageDigest digest = sha256();
         final CountingDigestStream hashed = new CountingDigestStream(in, digest);
         final BufferedReader lines = new BufferedReader(new InputStreamReader(hashed, StandardCharsets.UTF_8), 1 << 16);
+        final BoundedLines bounded = new BoundedLines(lines, fileName, InputLimits.MAX_LINE_CHARS);
         final List<SampleLine> sniffed = new ArrayList<>();
         int lineNumber = 0;
         String line;
-        while (sniffed.size() < SNIFF_LINES && (line = lines.readLine()) != null) {
+        while (sniffed.size() < SNIFF_LINES && (line = bounded.next()) != null) {
             lineNumber++;
             if (lineNumber == 1 && line.startsWith("\uFEFF")) {
                 line = line.substring(1);
@@ -104,7 +108,7 @@ public final class SwingRecordReader {
         for (int k = mapping.header() ? 1 : 0; k < sniffed.size(); k++) {
             parser.parse(sniffed.get(k).text(), sniffed.get(k).number(), series);
         }
-        while ((line = lines.readLine()) != null) {
+        while ((line = bounded.next()) != null) {
             lineNumber++;
             if (!isSkipped(line)) {
                 parser.parse(line, lineNumber, series);
