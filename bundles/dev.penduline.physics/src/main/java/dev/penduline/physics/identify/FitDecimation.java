@@ -24,7 +24,7 @@ import java.util.Locale;
 public final class FitDecimation {
 
     /** Most samples, over all sessions, that the fit uses. */
-    public static final int TARGET_SAMPLES = 200_000;
+    public static final int TARGET_SAMPLES = 100_000;
     /** Fewest samples per small-angle period a thinned session keeps. */
     public static final int MIN_SAMPLES_PER_PERIOD = 50;
 
