@@ -22,8 +22,13 @@ public final class InputLimits {
     public static final int MAX_RECORD_SAMPLES = 10_000_000;
     /** Largest swing-record file, in bytes (512 MiB: 10 million lines of about 50 characters). */
     public static final long MAX_RECORD_BYTES = 512L * 1024 * 1024;
-    /** Largest parts-list file, in bytes (16 MiB: some 100 000 parts). */
+    /** Largest parts-list file, in bytes (16 MiB). */
     public static final long MAX_PARTS_LIST_BYTES = 16L * 1024 * 1024;
+    /**
+     * Most parts (lines) of one parts list: an assembly's bill of materials has hundreds; naming
+     * the parts of a new mechanism file costs time that grows with the square of their number.
+     */
+    public static final int MAX_PARTS = 10_000;
 
     private InputLimits() {
     }

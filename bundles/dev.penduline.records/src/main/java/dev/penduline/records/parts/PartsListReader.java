@@ -114,6 +114,11 @@ public final class PartsListReader {
             if (cells.stream().allMatch(String::isBlank)) {
                 continue;
             }
+            if (parts.size() >= InputLimits.MAX_PARTS) {
+                throw new RecordFormatException(fileName, lineNumber, null, "the list has more than " + InputLimits.MAX_PARTS
+                        + " parts, the most a parts list may have (README, \"Limits\"); give identical parts one line with a"
+                        + " quantity, or lump small parts into one");
+            }
             final PartsRow row = new PartsRow(header, cells, fileName, lineNumber);
             parts.add(PartLine.toPart(row, warnings));
         }
