@@ -91,8 +91,8 @@ public final class OptionRules {
             Map.entry("counts-per-rev", new Rule(0, false, 1e9, false, true, "counts per revolution",
                     "an encoder's counts per revolution, after any quadrature multiplication; 0 in demo-record: no encoder")),
             Map.entry("seed", new Rule(-9.007199254740992e15, false, 9.007199254740992e15, false, true, "", "")),
-            Map.entry("resamples", new Rule(0, false, 10_000, false, true, "", "0 turns the resampling off")),
-            Map.entry("max-iterations", new Rule(1, false, 1_000_000, false, true, "", "")),
+            Map.entry("resamples", new Rule(0, false, 1_000, false, true, "", "0 turns the resampling off; above 200 adds little")),
+            Map.entry("max-iterations", new Rule(1, false, 10_000, false, true, "", "")),
             Map.entry("verdict-margin", new Rule(0, false, 100, true, false, "percentage points", "")));
 
     private OptionRules() {

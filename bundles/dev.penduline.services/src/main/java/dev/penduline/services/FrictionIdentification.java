@@ -12,6 +12,7 @@ import dev.penduline.model.Mechanism;
 import dev.penduline.model.TestSession;
 import dev.penduline.physics.MechanismProperties;
 import dev.penduline.physics.identify.FitControl;
+import dev.penduline.physics.identify.FitDecimation;
 import dev.penduline.physics.identify.FitSettings;
 import dev.penduline.physics.identify.FrictionFit;
 import dev.penduline.physics.identify.FrictionIdentifier;
@@ -58,12 +59,23 @@ public final class FrictionIdentification {
 
     /** What was fitted, how, and what came out. */
     public record Outcome(MechanismSource mechanism, List<SessionInput> sessions, FrictionFit fit,
-            Optional<ModelComparison> comparison, boolean automatic, List<String> warnings) {
+            Optional<ModelComparison> comparison, boolean automatic, List<String> warnings,
+            List<FitDecimation.Thinning> decimation) {
 
         /** Copies the lists. */
         public Outcome {
             sessions = List.copyOf(sessions);
             warnings = List.copyOf(warnings);
+            decimation = List.copyOf(decimation);
+        }
+
+        /**
+         * The sessions whose samples were thinned for the fit.
+         *
+         * @return those thinnings, in session order (empty when every sample was fitted)
+         */
+        public List<FitDecimation.Thinning> thinned() {
+            return decimation.stream().filter(FitDecimation.Thinning::thinned).toList();
         }
     }
 
@@ -171,11 +183,19 @@ public final class FrictionIdentification {
                 p.pivotInertia(), 0, p.gravity(), p.axisTilt());
         List<ReleaseSession> releases = new ArrayList<>();
         List<String> warnings = new ArrayList<>();
+        List<FitDecimation.Thinning> decimation = new ArrayList<>();
+        long total = 0;
+        for (SessionInput s : sessions) {
+            total += s.record().size();
+        }
         for (SessionInput s : sessions) {
             SwingAnalysis a = s.analysis();
             requirePlausiblePeriod(s);
             double[] t = s.record().times();
-            releases.add(new ReleaseSession(s.name(), t, s.record().angles(),
+            int stride = FitDecimation.stride(total, t.length, t[t.length - 1] - t[0], p.smallAnglePeriod());
+            double[] kept = FitDecimation.keep(t, stride);
+            decimation.add(new FitDecimation.Thinning(s.name(), t.length, kept.length, stride));
+            releases.add(new ReleaseSession(s.name(), kept, FitDecimation.keep(s.record().angles(), stride),
                     new SessionGuess(a.initialAngle(), a.release().time(), a.offset().value())));
             for (String w : s.warnings()) {
                 warnings.add(s.name() + ": " + w);
@@ -194,10 +214,10 @@ public final class FrictionIdentification {
         FrictionIdentifier identifier = new FrictionIdentifier(settings);
         if (terms.isPresent()) {
             return new Outcome(mechanism, sessions, identifier.fit(problem, control), Optional.empty(), false,
-                    warnings);
+                    warnings, decimation);
         }
         ModelComparison comparison = identifier.compare(problem, control);
-        return new Outcome(mechanism, sessions, comparison.best(), Optional.of(comparison), true, warnings);
+        return new Outcome(mechanism, sessions, comparison.best(), Optional.of(comparison), true, warnings, decimation);
     }
 
     /** How far the measured small-angle period may be from the mechanism's before a fit is pointless. */

@@ -7,6 +7,7 @@ import dev.penduline.physics.MechanismProperties;
 import dev.penduline.physics.motion.FrictionTorques;
 import dev.penduline.physics.motion.SwingRun;
 import dev.penduline.physics.motion.SwingSimulator;
+import dev.penduline.records.InputLimits;
 
 /**
  * Predicts a free swing of a mechanism: the use case behind {@code penduline simulate} and the
@@ -35,8 +36,11 @@ public final class SwingPrediction {
             throw new InputException("duration and rate must be positive (got " + duration + " s, " + sampleRate
                     + " Hz)");
         }
-        if (duration * sampleRate > 50_000_000) {
-            throw new InputException("duration × rate asks for more than 50 million samples; lower the rate");
+        if (Math.floor(duration * sampleRate) + 1 > InputLimits.MAX_RECORD_SAMPLES) {
+            throw new InputException(String.format(Locale.ROOT, "--duration %.6g s at --rate %.6g Hz asks for %.4g samples,"
+                    + " more than the %d a simulated record may have (README, \"Limits\"); shorten the duration or lower"
+                    + " the rate", duration, sampleRate, Math.floor(duration * sampleRate) + 1,
+                    InputLimits.MAX_RECORD_SAMPLES));
         }
         MechanismProperties p = mechanism.properties();
         requireSwing(p, friction, theta0, omega0);
@@ -69,6 +73,32 @@ public final class SwingPrediction {
         return Optional.empty();
     }
 
+    /**
+     * Whether the viscous term alone stops every swing: the damping ratio at the hanging
+     * equilibrium, {@code ζ = b / (2 J0 ω_n)}, is above 1, so the body creeps back without ever
+     * reversing (the linear oscillator's overdamped case, any dynamics text). The time to creep
+     * to within 1 % of the release is {@code ln(100) / λ} with the slow root
+     * {@code λ = ω_n (ζ − √(ζ² − 1))}. Such friction would also make the integration crawl along
+     * steps of {@code J0 / b}, so it is caught before the simulator runs.
+     *
+     * @param p        the mechanism
+     * @param friction the friction torques
+     * @return the message, empty when the body swings
+     */
+    public static Optional<String> overdamped(MechanismProperties p, FrictionTorques friction) {
+        double wn = p.naturalFrequency();
+        double zeta = friction.viscous() / (2 * p.pivotInertia() * wn);
+        if (!(zeta > 1) || !Double.isFinite(wn)) {
+            return Optional.empty();
+        }
+        // the same root as ω_n (ζ − √(ζ² − 1)), written without the cancellation at large ζ
+        double slow = wn / (zeta + Math.sqrt(zeta * zeta - 1));
+        double creep = Math.log(100) / slow;
+        return Optional.of(String.format(Locale.ROOT, "no swing: the motion is overdamped (damping ratio %.3g at the hanging "
+                + "equilibrium, above 1 where swinging ends): viscous %.3g N·m·s/rad lets the body creep to rest in about %.3g s"
+                + " without a single reversal. Check the value and its unit (N·m·s/rad)", zeta, friction.viscous(), creep));
+    }
+
     /** The largest drag torque at the swing's natural speed, against the gravity torque m·g·Lc, that is still a swing. */
     static final double DRAG_TO_GRAVITY_LIMIT = 1e4;
 
@@ -90,6 +120,10 @@ public final class SwingPrediction {
         Optional<String> still = noRestoringTorque(p);
         if (still.isPresent()) {
             throw new InputException(still.get());
+        }
+        Optional<String> creep = overdamped(p, friction);
+        if (creep.isPresent()) {
+            throw new InputException(creep.get());
         }
         double gravityTorque = p.mass() * p.gravity() * Math.abs(p.centroidDistance());
         double speed = Math.max(p.naturalFrequency() * Math.abs(theta0), Math.abs(omega0));

@@ -79,6 +79,10 @@ final class FitJson {
             j.endArray().field("effective_samples", c.effectiveSamples()).field("residual_lag1", c.lag1());
         });
         correlation(j, fit.correlation());
+        j.name("decimation").beginArray();
+        outcome.thinned().forEach(d -> j.beginObject().field("session", d.session()).field("samples_before", d.before())
+                .field("samples_after", d.after()).field("stride", d.stride()).field("note", d.note()).endObject());
+        j.endArray();
         j.field("rms_residual_deg", Unit.DEGREE.fromSi(fit.rms())).field("samples", fit.samples())
                 .field("iterations", fit.iterations()).field("evaluations", fit.evaluations())
                 .field("resamples", fit.resamplesUsed());

@@ -40,6 +40,7 @@ final class FitReportText {
         EnergyShares e = fit.energy();
         out.println("Friction of " + outcome.mechanism().label() + ", from " + outcome.sessions().size()
                 + " release record(s)");
+        outcome.thinned().forEach(d -> out.println("  note: " + d.note()));
         out.println();
         if (fit.status() == FitStatus.MISFIT) {
             out.println("THE MODEL DOES NOT DESCRIBE THE RECORDS: the residuals are clearly above the noise floor.");

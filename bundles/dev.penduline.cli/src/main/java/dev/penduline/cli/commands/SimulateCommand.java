@@ -64,6 +64,13 @@ public final class SimulateCommand implements Command {
                   --json                print a JSON object instead of the summary""";
     }
 
+    /**
+     * Beyond this release angle (°) the swing lies so close to the upright that the simulated period
+     * drifts from cycle to cycle (measured: 0.06 % over 30 cycles at 179.9°, 2 % at 179.99°, 13 % at
+     * 179.9999°, for a frictionless swing whose every period is the same).
+     */
+    static final double NEAR_UPRIGHT_DEG = 179.9;
+
     @Override
     public ExitCode run(List<String> args, PrintWriter out, PrintWriter err) throws UsageException {
         Arguments a = Arguments.parse(args, OPTIONS, Set.of("json", "force"));
@@ -78,6 +85,12 @@ public final class SimulateCommand implements Command {
             checkOut(Path.of(a.value("out")), a.flag("force"));
         }
         double theta0 = Unit.DEGREE.toSi(a.requiredNumber("theta0-deg"));
+        if (Math.abs(Unit.DEGREE.fromSi(theta0)) > NEAR_UPRIGHT_DEG) {
+            err.println("warning: released within 0.1° of the upright (180°): there the period "
+                    + "grows without bound as the release nears 180° and hangs on energy differences below the integration's "
+                    + "accuracy, so periods and turning points drift from cycle to cycle (by per cent at 179.99°); do not rely "
+                    + "on them");
+        }
         double omega0 = Unit.DEG_PER_S.toSi(a.number("omega0-deg-s", 0));
         FrictionTorques friction;
         try {

@@ -55,8 +55,9 @@ public final class FaultReport {
         String what;
         if (failure instanceof OutOfMemoryError) {
             long mb = Runtime.getRuntime().maxMemory() / (1024 * 1024);
-            what = "ran out of memory (the heap limit of this run is " + mb + " MB): the input is larger than this run can "
-                    + "hold; try a shorter record, or a larger heap (for example JAVA_TOOL_OPTIONS=-Xmx8g)";
+            what = "ran out of memory: the memory budget of this run (its heap limit) is " + mb + " MB and the input needs "
+                    + "more (README, \"Limits\"); try a shorter record, or raise the budget, for example "
+                    + "PENDULINE_HEAP=4g ./penduline ... (or -Xmx4g in JAVA_TOOL_OPTIONS)";
         } else if (failure instanceof StackOverflowError) {
             what = "a computation nested too deeply and was stopped";
         } else {

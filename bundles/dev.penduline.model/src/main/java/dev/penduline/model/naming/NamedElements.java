@@ -2,6 +2,7 @@ package dev.penduline.model.naming;
 
 import java.util.List;
 import java.util.function.Function;
+import java.util.stream.Collectors;
 
 import dev.penduline.model.FitResult;
 import dev.penduline.model.FrictionHypothesis;
@@ -120,6 +121,7 @@ public final class NamedElements {
     }
 
     private static <T> String freeId(String name, String fallback, List<T> siblings, Function<T, String> id) {
-        return StableIds.unique(StableIds.slug(name, fallback), siblings.stream().map(id).toList());
+        // a set: looking a candidate up in a list made adding n parts cost n³ when their names repeat
+        return StableIds.unique(StableIds.slug(name, fallback), siblings.stream().map(id).collect(Collectors.toSet()));
     }
 }

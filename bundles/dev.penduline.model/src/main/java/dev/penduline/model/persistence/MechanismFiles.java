@@ -28,6 +28,13 @@ import dev.penduline.model.persistence.internal.LoadProblem;
  */
 public final class MechanismFiles {
 
+    /**
+     * Largest mechanism file loaded, in bytes (32 MiB: thousands of parts and hundreds of stored
+     * fits take a few MiB). Loading builds the whole model: a 31 MB file of 170 000 parts peaked at
+     * 780 MB resident (DEVELOPERS.md), so this keeps a load inside the launcher's 2 GiB.
+     */
+    public static final long MAX_FILE_BYTES = 32L * 1024 * 1024;
+
     private MechanismFiles() {
     }
 
@@ -59,6 +66,20 @@ public final class MechanismFiles {
         return load(file, newResourceSet());
     }
 
+    private static void requireSize(Path file) throws MechanismFileException {
+        final long size;
+        try {
+            size = Files.size(file);
+        } catch (IOException e) {
+            throw new MechanismFileException(file, 0, 0, "cannot be read (" + e.getMessage() + ")", e);
+        }
+        if (size > MAX_FILE_BYTES) {
+            throw new MechanismFileException(file, 0, 0, "the file is " + size / (1024 * 1024) + " MiB, more than the "
+                    + MAX_FILE_BYTES / (1024 * 1024) + " MiB a mechanism file may have (README, \"Limits\"); is it the right"
+                    + " file? Records belong in records/ as sessions, not inside the mechanism file", null);
+        }
+    }
+
     /**
      * Loads a mechanism file into the given resource set.
      *
@@ -71,6 +92,7 @@ public final class MechanismFiles {
         if (!Files.isRegularFile(file)) {
             throw new MechanismFileException(file, 0, 0, "no such file (or it is not a regular file)", null);
         }
+        requireSize(file);
         final Resource resource = resourceSet.createResource(uriOf(file));
         try {
             resource.load(MechanismFormat.loadOptions());

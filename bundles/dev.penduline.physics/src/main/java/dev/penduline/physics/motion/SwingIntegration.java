@@ -4,6 +4,7 @@ import java.util.ArrayList;
 import java.util.Arrays;
 import java.util.Collections;
 import java.util.List;
+import java.util.Locale;
 
 import org.hipparchus.ode.ExpandableODE;
 import org.hipparchus.ode.ODEState;
@@ -44,6 +45,8 @@ public final class SwingIntegration {
     private double restAngle = Double.NaN;
     private double[] primary;
     private double[] secondary;
+    private long stepLimit = Long.MAX_VALUE;
+    private long steps;
 
     /**
      * Prepares a run.
@@ -59,6 +62,20 @@ public final class SwingIntegration {
         this.tolerance = tolerance;
         this.companion = companion;
         this.sampler = sampler;
+    }
+
+    /**
+     * Caps the number of integration steps of the run (all segments together): beyond it the
+     * run stops with an {@link IntegrationLimitException} instead of grinding on. Used where a
+     * person's options drive the simulator; the fit has its own evaluation limits.
+     *
+     * @param limit the most steps allowed, at least 1
+     */
+    public void limitSteps(long limit) {
+        if (limit < 1) {
+            throw new IllegalArgumentException("the step limit must be at least 1, got " + limit);
+        }
+        stepLimit = limit;
     }
 
     /**
@@ -136,6 +153,9 @@ public final class SwingIntegration {
         final DormandPrince853Integrator integrator = new DormandPrince853Integrator(0,
                 Math.max(duration, equation.timeScale()), absoluteTolerances(theta0, omega0), relative);
         integrator.addStepHandler(sampler);
+        if (stepLimit < Long.MAX_VALUE) {
+            integrator.addStepHandler(interpolator -> countStep(interpolator.getCurrentState().getTime(), duration));
+        }
         for (ODEStepHandler observer : observers) {
             integrator.addStepHandler(observer);
         }
@@ -147,6 +167,15 @@ public final class SwingIntegration {
      * Absolute tolerances from the run's own scale (amplitude, ωn × amplitude, J0 × rate² for the
      * energy account), so that a 1 mrad swing is integrated as accurately as a 1 rad one.
      */
+    private void countStep(double t, double duration) {
+        if (++steps > stepLimit) {
+            throw new IntegrationLimitException(String.format(Locale.ROOT, "the simulation took more than %d"
+                    + " integration steps and was stopped at t = %.4g s of %.4g s: the friction makes the motion too stiff"
+                    + " to follow (a body that creeps rather than swings), or the duration is too long for this"
+                    + " mechanism; lower the friction or check its unit, or shorten --duration", stepLimit, t, duration));
+        }
+    }
+
     private double[] absoluteTolerances(double theta0, double omega0) {
         final SwingModel m = equation.model();
         final double wn = m.naturalFrequency();

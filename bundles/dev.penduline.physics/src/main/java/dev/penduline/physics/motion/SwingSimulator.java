@@ -28,6 +28,13 @@ public final class SwingSimulator {
     /** Default relative tolerance of the integration. */
     public static final double DEFAULT_TOLERANCE = 1e-10;
 
+    /**
+     * Most integration steps of one simulation (about ten seconds of computing): a swing of a
+     * day's length at 1 Hz takes a few million; beyond it the run stops with an
+     * {@link IntegrationLimitException} that says so.
+     */
+    public static final long MAX_STEPS = 10_000_000;
+
     private final MechanismProperties mechanism;
     private final FrictionTorques friction;
     private final double tolerance;
@@ -233,6 +240,7 @@ public final class SwingSimulator {
         sampler.start(times, 0, times.length);
         final SwingIntegration integration = new SwingIntegration(new SwingEquation(model, true), tolerance,
                 null, sampler);
+        integration.limitSteps(MAX_STEPS);
         integration.run(theta0, omega0);
         final double[] y = integration.finalState();
         final SwingEnergy energy = new SwingEnergy(model.kineticEnergy(omega0) + model.potentialEnergy(theta0),

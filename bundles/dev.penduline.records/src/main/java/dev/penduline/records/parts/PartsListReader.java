@@ -9,8 +9,10 @@ import java.util.ArrayList;
 import java.util.List;
 
 import dev.penduline.physics.inertia.Part;
+import dev.penduline.records.BoundedLines;
 import dev.penduline.records.DelimitedLine;
 import dev.penduline.records.InputFiles;
+import dev.penduline.records.InputLimits;
 import dev.penduline.records.RecordFormatException;
 import dev.penduline.records.Utf8Text;
 
@@ -77,6 +79,7 @@ public final class PartsListReader {
      */
     public PartsList read(Path file) throws IOException, RecordFormatException {
         InputFiles.requireRegularFile(file, "a parts list (a .csv file)");
+        InputLimits.requireSize(file, InputLimits.MAX_PARTS_LIST_BYTES, "parts list");
         try (Reader in = Utf8Text.reader(Files.newInputStream(file))) {
             return read(in, file.toString());
         }
@@ -97,7 +100,8 @@ public final class PartsListReader {
         final List<String> warnings = new ArrayList<>();
         PartsHeader header = null;
         int lineNumber = 0;
-        for (String line = lines.readLine(); line != null; line = lines.readLine()) {
+        final BoundedLines bounded = new BoundedLines(lines, fileName, InputLimits.MAX_LINE_CHARS);
+        for (String line = bounded.next(); line != null; line = bounded.next()) {
             lineNumber++;
             if (lineNumber == 1 && line.startsWith("\uFEFF")) {
                 line = line.substring(1);
@@ -115,6 +119,11 @@ public final class PartsListReader {
             }
             if (cells.stream().allMatch(String::isBlank)) {
                 continue;
+            }
+            if (parts.size() >= InputLimits.MAX_PARTS) {
+                throw new RecordFormatException(fileName, lineNumber, null, "the list has more than " + InputLimits.MAX_PARTS
+                        + " parts, the most a parts list may have (README, \"Limits\"); give identical parts one line with a"
+                        + " quantity, or lump small parts into one");
             }
             final PartsRow row = new PartsRow(header, cells, fileName, lineNumber);
             parts.add(PartLine.toPart(row, warnings));

@@ -4,6 +4,7 @@ import java.util.List;
 
 import dev.penduline.physics.units.Unit;
 import dev.penduline.records.DelimitedLine;
+import dev.penduline.records.InputLimits;
 import dev.penduline.records.RecordFormatException;
 
 /** Reads the time and angle of one data line, converts them to SI and checks the time order. */
@@ -69,6 +70,11 @@ final class RowParser {
                         + SwingRecordReader.format(timeUnit.fromSi(previous)) + " " + timeUnit.symbol() + " on line "
                         + out.lastLine() + "; samples must be in time order");
             }
+        }
+        if (out.size() >= InputLimits.MAX_RECORD_SAMPLES) {
+            throw new RecordFormatException(file, number, null, "the record has more than " + InputLimits.MAX_RECORD_SAMPLES
+                    + " samples, the most a record may have (README, \"Limits\"); it was not read further. Split it into"
+                    + " several records, or record at a lower rate");
         }
         out.add(t, theta, number);
     }

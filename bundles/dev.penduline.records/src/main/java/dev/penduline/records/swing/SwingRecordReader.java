@@ -14,8 +14,10 @@ import java.util.HexFormat;
 import java.util.List;
 import java.util.Locale;
 
+import dev.penduline.records.BoundedLines;
 import dev.penduline.records.DelimitedLine;
 import dev.penduline.records.InputFiles;
+import dev.penduline.records.InputLimits;
 import dev.penduline.records.RecordFormatException;
 import dev.penduline.records.Utf8Text;
 import dev.penduline.records.swing.LayoutSniffer.SampleLine;
@@ -64,6 +66,7 @@ public final class SwingRecordReader {
      */
     public SwingRecord read(Path file, SwingImportOptions options) throws IOException, RecordFormatException {
         InputFiles.requireRegularFile(file, "a swing record (a .csv file)");
+        InputLimits.requireSize(file, InputLimits.MAX_RECORD_BYTES, "swing record");
         try (InputStream in = Files.newInputStream(file, StandardOpenOption.READ)) {
             return read(in, file.toString(), options);
         }
@@ -85,10 +88,11 @@ public final class SwingRecordReader {
         final MessageDigest digest = sha256();
         final CountingDigestStream hashed = new CountingDigestStream(in, digest);
         final BufferedReader lines = new BufferedReader(Utf8Text.reader(hashed), 1 << 16);
+        final BoundedLines bounded = new BoundedLines(lines, fileName, InputLimits.MAX_LINE_CHARS);
         final List<SampleLine> sniffed = new ArrayList<>();
         int lineNumber = 0;
         String line;
-        while (sniffed.size() < SNIFF_LINES && (line = lines.readLine()) != null) {
+        while (sniffed.size() < SNIFF_LINES && (line = bounded.next()) != null) {
             lineNumber++;
             if (lineNumber == 1 && line.startsWith("\uFEFF")) {
                 line = line.substring(1);
@@ -109,7 +113,7 @@ public final class SwingRecordReader {
         for (int k = mapping.header() ? 1 : 0; k < sniffed.size(); k++) {
             parser.parse(sniffed.get(k).text(), sniffed.get(k).number(), series);
         }
-        while ((line = lines.readLine()) != null) {
+        while ((line = bounded.next()) != null) {
             lineNumber++;
             if (!isSkipped(line)) {
                 Utf8Text.check(line, lineNumber, true, fileName);
