@@ -19,7 +19,7 @@ import dev.penduline.physics.motion.TurningPoint;
  * <p>Samples are taken {@link #SAMPLES_PER_PERIOD} times per small-angle period; crossings of a
  * band edge or of a chosen angle are located between samples on the cubic Hermite interpolant
  * of the angle (whose slopes are the sampled angular velocities), and the angular velocity at a
- * crossing is interpolated linearly (relative error below 10⁻⁴ at this sampling). The peak
+ * crossing on the cubic through the four samples around it. The peak
  * angular velocity is refined by a parabola through the three samples around it. Turning points
  * come from the simulator's reversal events, so an excursion outside the band between samples is
  * never missed.
@@ -254,11 +254,27 @@ public final class Forecaster {
                 continue;
             }
             final double time = crossing(t[i], ya, w[i], t[i + 1], yb, w[i + 1]);
-            final double s = (time - t[i]) / (t[i + 1] - t[i]);
-            final double omega = w[i] + s * (w[i + 1] - w[i]);
+            final double omega = lagrange(t, w, i, time);
             final double tip = Double.isNaN(request.radius()) ? Double.NaN : Math.abs(omega) * request.radius();
             return Optional.of(new AnglePass(a, time, omega, tip, 0.5 * inertia * omega * omega));
         }
         return Optional.empty();
+    }
+
+    /** The cubic through the (up to) four samples around [t[i], t[i+1]], evaluated at {@code time}. */
+    private static double lagrange(double[] t, double[] y, int i, double time) {
+        final int from = Math.max(0, Math.min(i - 1, t.length - 4));
+        final int to = Math.min(t.length, from + 4);
+        double sum = 0;
+        for (int a = from; a < to; a++) {
+            double term = y[a];
+            for (int b = from; b < to; b++) {
+                if (b != a) {
+                    term *= (time - t[b]) / (t[a] - t[b]);
+                }
+            }
+            sum += term;
+        }
+        return sum;
     }
 }
