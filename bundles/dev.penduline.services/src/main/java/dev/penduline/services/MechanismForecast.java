@@ -15,6 +15,7 @@ import dev.penduline.physics.forecast.Forecaster;
 import dev.penduline.physics.forecast.ParameterDraws;
 import dev.penduline.physics.forecast.SwingForecast;
 import dev.penduline.physics.motion.FrictionTorques;
+import dev.penduline.physics.motion.SwingRun;
 import dev.penduline.physics.motion.SwingSimulator;
 
 /**
@@ -39,10 +40,11 @@ public final class MechanismForecast {
     /**
      * Where the friction comes from.
      *
-     * @param fit      the stored fit, or null for given torques
-     * @param friction the torques when no fit is used (SI)
+     * @param fit         the stored fit, or null for given torques
+     * @param friction    the torques (SI)
+     * @param description where they came from, in words
      */
-    public record FrictionSource(StoredFit fit, FrictionTorques friction) {
+    public record FrictionSource(StoredFit fit, FrictionTorques friction, String description) {
 
         /**
          * The friction of a stored fit.
@@ -51,26 +53,18 @@ public final class MechanismForecast {
          * @return the source
          */
         public static FrictionSource of(StoredFit fit) {
-            return new FrictionSource(fit, fit.friction());
+            return new FrictionSource(fit, fit.friction(), "stored fit " + fit.id() + " (" + fit.name() + ")");
         }
 
         /**
          * Friction torques given directly.
          *
-         * @param friction the torques
+         * @param friction    the torques
+         * @param description where they came from, e.g. "friction options (no uncertainty)"
          * @return the source
          */
-        public static FrictionSource given(FrictionTorques friction) {
-            return new FrictionSource(null, friction);
-        }
-
-        /**
-         * Says where the friction came from.
-         *
-         * @return "stored fit ID (NAME)" or "friction options"
-         */
-        public String describe() {
-            return fit == null ? "friction options (no uncertainty)" : "stored fit " + fit.id() + " (" + fit.name() + ")";
+        public static FrictionSource given(FrictionTorques friction, String description) {
+            return new FrictionSource(null, friction, description);
         }
     }
 
@@ -135,9 +129,8 @@ public final class MechanismForecast {
         MechanismProperties p = mechanism.properties();
         SwingPrediction.requireSwing(p, source.friction(), request.releaseAngle(), request.releaseVelocity());
         StoredFit fit = source.fit();
-        boolean fitted = fit != null && Double.isFinite(fit.fittedInertia());
-        MechanismProperties base = new MechanismProperties(p.mass(), p.centroidDistance(),
-                fitted ? Math.max(fit.fittedInertia(), minimumInertia(p)) : p.pivotInertia(), 0, p.gravity(), p.axisTilt());
+        boolean fitted = usesFittedInertia(source);
+        MechanismProperties base = properties(mechanism, source);
         String inertiaSource = fitted ? "fitted" : mechanism.inertia().isPresent() ? "calculated" : "given";
         SwingForecast nominal;
         try {
@@ -203,6 +196,45 @@ public final class MechanismForecast {
                 Double.isFinite(fit.stictionLower()) ? ", the static torque uniform within the stops' band" : "");
         return new Outcome(source, base.pivotInertia(), inertiaSource, request, nominal, bands(nominal, drawn), draws, seed,
                 definition, notes);
+    }
+
+    /**
+     * The properties a swing with this friction is simulated with: the mechanism's, measured
+     * from its hanging equilibrium, with the fitted J0 when the fit freed the inertia (the swing
+     * records measured it).
+     *
+     * @param mechanism the mechanism
+     * @param source    where the friction comes from
+     * @return the properties, equilibrium angle 0
+     */
+    public static MechanismProperties properties(MechanismSource mechanism, FrictionSource source) {
+        MechanismProperties p = mechanism.properties();
+        double j0 = usesFittedInertia(source) ? Math.max(source.fit().fittedInertia(), minimumInertia(p)) : p.pivotInertia();
+        return new MechanismProperties(p.mass(), p.centroidDistance(), j0, 0, p.gravity(), p.axisTilt());
+    }
+
+    /**
+     * Whether the friction's fit freed the inertia, so that its J0 replaces the calculated one.
+     *
+     * @param source where the friction comes from
+     * @return true when the fitted J0 is used
+     */
+    public static boolean usesFittedInertia(FrictionSource source) {
+        return source.fit() != null && Double.isFinite(source.fit().fittedInertia());
+    }
+
+    /**
+     * The forecast figures of a simulated run (settle time, peak speed, ...).
+     *
+     * @param properties the properties the run was simulated with ({@link #properties})
+     * @param friction   its friction
+     * @param run        the run
+     * @param request    its release and the questions
+     * @return the figures over the run's length
+     */
+    public static SwingForecast summarise(MechanismProperties properties, FrictionTorques friction, SwingRun run,
+            ForecastRequest request) {
+        return new Forecaster(new SwingSimulator(properties, friction)).summarise(run, request);
     }
 
     private static double minimumInertia(MechanismProperties p) {

@@ -54,11 +54,11 @@ class MechanismForecastTest {
     void givenTorquesHaveNoBandsAndSaySo() throws Exception {
         MechanismSource arm = new MechanismSource("arm", ARM, Optional.empty(), List.of());
         MechanismForecast.Outcome o = MechanismForecast.forecast(arm,
-                MechanismForecast.FrictionSource.given(FrictionTorques.coulombOnly(0.05)),
+                MechanismForecast.FrictionSource.given(FrictionTorques.coulombOnly(0.05), "friction options"),
                 ForecastRequest.fromRest(0.3, 0.05), 200, 1);
         assertEquals(0, o.draws());
         assertTrue(Double.isNaN(o.bands().settleTime().low()));
-        assertTrue(o.source().describe().contains("options"), o.source().describe());
+        assertTrue(o.source().description().contains("options"), o.source().description());
         assertTrue(o.nominal().settled());
     }
 

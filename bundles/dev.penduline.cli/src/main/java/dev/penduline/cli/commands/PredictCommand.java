@@ -1,7 +1,6 @@
 package dev.penduline.cli.commands;
 
 import java.io.PrintWriter;
-import java.nio.file.Path;
 import java.util.List;
 import java.util.Locale;
 import java.util.Optional;
@@ -12,8 +11,6 @@ import dev.penduline.cli.Command;
 import dev.penduline.cli.ExitCode;
 import dev.penduline.cli.UsageException;
 import dev.penduline.cli.json.JsonWriter;
-import dev.penduline.model.Mechanism;
-import dev.penduline.model.persistence.MechanismFormat;
 import dev.penduline.physics.forecast.AnglePass;
 import dev.penduline.physics.forecast.FigureBand;
 import dev.penduline.physics.forecast.ForecastRequest;
@@ -23,9 +20,7 @@ import dev.penduline.physics.motion.SwingEnergy;
 import dev.penduline.physics.units.Unit;
 import dev.penduline.services.InputException;
 import dev.penduline.services.MechanismForecast;
-import dev.penduline.services.MechanismLoader;
 import dev.penduline.services.MechanismSource;
-import dev.penduline.services.StoredFit;
 import dev.penduline.services.present.Figures;
 
 /** {@code penduline predict}: what a mechanism does after a release, with the friction of its stored fit. */
@@ -34,10 +29,8 @@ public final class PredictCommand implements Command {
     /** The settle band's half-width unless told otherwise (degrees). */
     static final double DEFAULT_BAND_DEG = 1;
 
-    private static final List<String> FRICTION_OPTIONS = List.of("viscous", "coulomb", "stiction", "drag");
-
     private static final Set<String> OPTIONS = MechanismOptions.with("theta0-deg", "omega0-deg-s", "band-deg", "at-deg",
-            "radius-m", "fit", "draws", "seed", "viscous", "coulomb", "stiction", "drag");
+            "radius-m", "draws", "seed", "viscous", "coulomb", "stiction", "drag", "fit");
 
     @Override
     public String name() {
@@ -68,9 +61,8 @@ public final class PredictCommand implements Command {
                   --band-deg DEG        half-width of the settle band (default 1°)
                   --at-deg DEG          report the first passage through this angle (e.g. the closed position)
                   --radius-m M          distance from the pivot axis of the point whose speed is wanted there
-                  --fit ID              use this stored fit instead of the latest
-                  --viscous B --coulomb TC --stiction TS --drag C
-                                        use these torques (SI) instead of a stored fit: no bands
+                """ + FrictionOptions.USAGE + """
+
                   --draws N             parameter sets drawn for the bands (default 200; 0: none)
                   --seed N              seed of the draws (default 20261202), so results repeat
                   --json                print a JSON object instead of the report""";
@@ -78,16 +70,9 @@ public final class PredictCommand implements Command {
 
     @Override
     public ExitCode run(List<String> args, PrintWriter out, PrintWriter err) throws UsageException {
-        Arguments a = Arguments.parse(args, OPTIONS, Set.of("json"));
-        if (a.positional().size() > 1) {
-            throw new UsageException("at most one mechanism file; got " + a.positional());
-        }
-        String file = a.positional().isEmpty() ? null : a.positional().get(0);
-        MechanismSource mechanism = MechanismOptions.resolve(a, file);
-        for (String w : mechanism.warnings()) {
-            err.println("warning: " + w);
-        }
-        MechanismForecast.FrictionSource source = frictionSource(a, file);
+        Arguments a = Arguments.parse(args, OPTIONS, Set.of("json", "no-fit"));
+        MechanismSource mechanism = FrictionOptions.mechanism(a, err);
+        MechanismForecast.FrictionSource source = FrictionOptions.resolve(a, true);
         ForecastRequest request;
         try {
             request = new ForecastRequest(Unit.DEGREE.toSi(a.requiredNumber("theta0-deg")),
@@ -112,40 +97,6 @@ public final class PredictCommand implements Command {
             writeReport(mechanism, outcome, out);
         }
         return ExitCode.OK;
-    }
-
-    private static MechanismForecast.FrictionSource frictionSource(Arguments a, String file) throws UsageException {
-        boolean given = FRICTION_OPTIONS.stream().anyMatch(a::has);
-        if (given) {
-            if (a.has("fit")) {
-                throw new UsageException("give either --fit or friction options (--viscous, --coulomb, --stiction, --drag),"
-                        + " not both");
-            }
-            try {
-                return MechanismForecast.FrictionSource.given(new FrictionTorques(a.number("viscous", 0),
-                        a.number("coulomb", 0), a.number("stiction", 0), a.number("drag", 0)));
-            } catch (IllegalArgumentException e) {
-                throw new UsageException(e.getMessage());
-            }
-        }
-        if (file == null || !file.toLowerCase(Locale.ROOT).endsWith("." + MechanismFormat.FILE_EXTENSION)) {
-            throw new UsageException("no stored fit to use: give a mechanism file (." + MechanismFormat.FILE_EXTENSION
-                    + ") with a stored fit, or the friction with --viscous, --coulomb, --stiction and --drag");
-        }
-        try {
-            Mechanism m = MechanismLoader.readMechanism(Path.of(file));
-            if (a.has("fit")) {
-                return MechanismForecast.FrictionSource.of(StoredFit.byId(m, a.value("fit")));
-            }
-            Optional<StoredFit> latest = StoredFit.latest(m);
-            if (latest.isEmpty()) {
-                throw new UsageException(file + " holds no stored fit: run 'penduline fit " + file + "' first, or give the"
-                        + " friction with --viscous, --coulomb, --stiction and --drag");
-            }
-            return MechanismForecast.FrictionSource.of(latest.get());
-        } catch (InputException e) {
-            throw new UsageException(e.getMessage());
-        }
     }
 
     private static void writeJson(MechanismForecast.Outcome o, JsonWriter j) {
@@ -213,7 +164,7 @@ public final class PredictCommand implements Command {
         FrictionTorques f = o.source().friction();
         double deg = Unit.DEGREE.fromSi(1);
         out.println("Prediction for " + m.label());
-        out.println("  friction: " + o.source().describe());
+        out.println("  friction: " + o.source().description());
         out.printf(Locale.ROOT, "    viscous %s N·m·s/rad, Coulomb %s N·m, static %s N·m, drag %s N·m·s²/rad²%n",
                 Figures.significant(f.viscous()), Figures.significant(f.coulomb()), Figures.significant(f.staticTorque()),
                 Figures.significant(f.drag()));

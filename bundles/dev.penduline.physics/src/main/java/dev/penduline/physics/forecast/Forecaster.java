@@ -74,6 +74,19 @@ public final class Forecaster {
         return summarise(run, request, duration);
     }
 
+    /**
+     * The forecast figures of a run this forecaster's simulator made (same mechanism and
+     * friction) from the request's release, over the run's own length.
+     *
+     * @param run     the run
+     * @param request the release it was made from and the questions
+     * @return the figures; "not settled" when the run ends outside the band
+     */
+    public SwingForecast summarise(SwingRun run, ForecastRequest request) {
+        final double[] t = run.times();
+        return summarise(run, request, t[t.length - 1]);
+    }
+
     private SwingForecast summarise(SwingRun run, ForecastRequest request, double duration) {
         final MechanismProperties m = simulator.mechanism();
         final double eq = m.equilibriumAngle();
@@ -99,8 +112,8 @@ public final class Forecaster {
         } else if (!run.stopped() && !endsInside(run, band, m.smallAnglePeriod())) {
             settled = false;
             settleTime = Double.NaN;
-            note = String.format(Locale.ROOT, "it is still outside the ±%.4g° band after %.4g s (the longest run"
-                    + " forecast)", Math.toDegrees(band), duration);
+            note = String.format(Locale.ROOT, "it is still outside the ±%.4g° band at the end of the %.4g s"
+                    + " simulated", Math.toDegrees(band), duration);
         } else {
             settled = true;
             settleTime = settleTime(t, x, w, tps, eq, band);
