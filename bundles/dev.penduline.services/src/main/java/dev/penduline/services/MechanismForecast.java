@@ -14,6 +14,7 @@ import dev.penduline.physics.forecast.ForecastRequest;
 import dev.penduline.physics.forecast.Forecaster;
 import dev.penduline.physics.forecast.ParameterDraws;
 import dev.penduline.physics.forecast.SwingForecast;
+import dev.penduline.physics.inertia.ToleranceSpread;
 import dev.penduline.physics.motion.FrictionTorques;
 import dev.penduline.physics.motion.SwingRun;
 import dev.penduline.physics.motion.SwingSimulator;
@@ -139,46 +140,74 @@ public final class MechanismForecast {
             throw new InputException(e.getMessage(), e);
         }
         List<String> notes = new ArrayList<>();
-        if (fit == null || draws == 0 || allZero(fit.sigmas())) {
-            if (fit != null && draws > 0) {
-                notes.add("the stored fit carries no uncertainties, so the figures have no bands");
+        boolean fitSpread = fit != null && !allZero(fit.sigmas());
+        boolean partsSpread = mechanism.hasTolerances();
+        if (draws == 0 || !fitSpread && !partsSpread) {
+            if (fit != null && !fitSpread && draws > 0) {
+                notes.add("the stored fit carries no uncertainties and the parts no tolerances, so the figures have no bands");
             }
             return new Outcome(source, base.pivotInertia(), inertiaSource, request, nominal, bands(nominal, List.of()),
-                    0, seed, "no band: no uncertainty of the friction is known", notes);
+                    0, seed, "no band: no uncertainty of the friction or the parts is known", notes);
         }
+        List<double[]> parts = List.of();
+        if (partsSpread) {
+            ToleranceSpread.Result r;
+            try {
+                r = ToleranceSpread.of(mechanism.frame(), mechanism.parts(), Math.max(2, draws), seed);
+            } catch (IllegalArgumentException e) {
+                throw new InputException(mechanism.label() + ": " + e.getMessage(), e);
+            }
+            parts = r.draws();
+            if (r.failed() > 0) {
+                notes.add(r.failed() + " of " + draws + " draws over the parts' tolerances could not be computed and were"
+                        + " drawn again from the rest");
+            }
+        }
+        double[][] sets = fitSpread ? ParameterDraws.draw(fit.values(), fit.sigmas(), fit.correlation(), draws, seed) : null;
         List<SwingForecast> drawn = new ArrayList<>(draws);
         int clamped = 0;
-        double[][] sets = ParameterDraws.draw(fit.values(), fit.sigmas(), fit.correlation(), draws, seed);
         Random stiction = new Random(seed ^ 0x5DEECE66DL);
-        for (double[] set : sets) {
-            double[] friction = {fit.friction().viscous(), fit.friction().coulomb(), fit.friction().drag()};
+        for (int n = 0; n < draws; n++) {
+            double[] friction = {source.friction().viscous(), source.friction().coulomb(), source.friction().drag()};
+            double ts = source.friction().staticTorque();
+            double mass = base.mass();
+            double lc = base.centroidDistance();
             double j0 = base.pivotInertia();
+            if (!parts.isEmpty()) {
+                double[] d = parts.get(n % parts.size());
+                mass = d[0];
+                lc = d[1];
+                j0 = fitted ? j0 : d[2];
+            }
             boolean cut = false;
-            for (int i = 0; i < set.length; i++) {
-                String name = fit.parameters().get(i);
-                double v = set[i];
-                if ("J0".equals(name)) {
-                    if (!fitted) {
+            if (sets != null) {
+                double[] set = sets[n];
+                for (int i = 0; i < set.length; i++) {
+                    String name = fit.parameters().get(i);
+                    double v = set[i];
+                    if ("J0".equals(name)) {
+                        if (fitted) {
+                            cut |= v < mass * lc * lc;
+                            j0 = v;
+                        }
                         continue;
                     }
-                    cut |= v < minimumInertia(p);
-                    j0 = Math.max(v, minimumInertia(p));
-                    continue;
+                    cut |= v < 0;
+                    int slot = switch (name) {
+                        case "b" -> 0;
+                        case "Tc" -> 1;
+                        default -> 2;
+                    };
+                    friction[slot] = Math.max(0, v);
                 }
-                cut |= v < 0;
-                int slot = switch (name) {
-                    case "b" -> 0;
-                    case "Tc" -> 1;
-                    default -> 2;
-                };
-                friction[slot] = Math.max(0, v);
+                ts = Double.isFinite(fit.stictionLower())
+                        ? fit.stictionLower() + stiction.nextDouble() * (fit.stictionUpper() - fit.stictionLower())
+                        : friction[1];
             }
-            double ts = Double.isFinite(fit.stictionLower())
-                    ? fit.stictionLower() + stiction.nextDouble() * (fit.stictionUpper() - fit.stictionLower())
-                    : friction[1];
             clamped += cut ? 1 : 0;
             FrictionTorques torques = new FrictionTorques(friction[0], friction[1], Math.max(ts, friction[1]), friction[2]);
-            MechanismProperties props = base.withPivotInertia(j0);
+            MechanismProperties props = new MechanismProperties(mass, lc, Math.max(j0, mass * lc * lc), 0, base.gravity(),
+                    base.axisTilt());
             drawn.add(new Forecaster(new SwingSimulator(props, torques)).forecast(request));
         }
         if (clamped > 0) {
@@ -190,10 +219,17 @@ public final class MechanismForecast {
             notes.add(String.format(Locale.ROOT, "%d of %d draws do not settle in the band; the settle-time band is over the"
                     + " %d that do", unsettled, draws, draws - unsettled));
         }
+        List<String> from = new ArrayList<>();
+        if (fitSpread) {
+            from.add("the fit's estimates, uncertainties and correlations (normal)"
+                    + (Double.isFinite(fit.stictionLower()) ? " with the static torque uniform within the stops' band" : ""));
+        }
+        if (partsSpread) {
+            from.add("the parts' mass and dimension tolerances (uniform within ±)" + (fitted ? ", J0 kept as fitted" : ""));
+        }
         String definition = String.format(Locale.ROOT, "low and high are the %.0fth and %.0fth percentiles of each figure over"
-                + " %d parameter sets drawn from the fit's estimates, uncertainties and correlations (normal, seed %d)%s",
-                FigureBand.LOW_PERCENT, FigureBand.HIGH_PERCENT, draws, seed,
-                Double.isFinite(fit.stictionLower()) ? ", the static torque uniform within the stops' band" : "");
+                + " %d parameter sets drawn from %s, seed %d", FigureBand.LOW_PERCENT, FigureBand.HIGH_PERCENT, draws,
+                String.join(" and from ", from), seed);
         return new Outcome(source, base.pivotInertia(), inertiaSource, request, nominal, bands(nominal, drawn), draws, seed,
                 definition, notes);
     }

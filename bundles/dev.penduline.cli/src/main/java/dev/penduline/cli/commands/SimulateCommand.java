@@ -76,7 +76,7 @@ public final class SimulateCommand implements Command {
         MechanismForecast.FrictionSource source = FrictionOptions.resolve(a, false);
         FrictionTorques friction = source.friction();
         MechanismProperties properties = MechanismForecast.properties(given, source);
-        MechanismSource mechanism = new MechanismSource(given.label(), properties, given.inertia(), given.warnings());
+        MechanismSource mechanism = given.withProperties(properties);
         SwingRun run;
         try {
             run = SwingPrediction.simulate(mechanism, friction, theta0, omega0, a.number("duration", 20),
