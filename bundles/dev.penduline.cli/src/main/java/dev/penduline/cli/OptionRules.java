@@ -83,6 +83,11 @@ public final class OptionRules {
             Map.entry("coulomb", closed(0, 1e9, "N·m", FRICTION_HINT)),
             Map.entry("stiction", closed(0, 1e9, "N·m", FRICTION_HINT)),
             Map.entry("drag", closed(0, 1e9, "N·m·s²/rad²", FRICTION_HINT)),
+            Map.entry("band-deg", new Rule(0, true, 90, false, false, "°", "the half-width of the settle band about the hanging"
+                    + " equilibrium")),
+            Map.entry("at-deg", symmetricOpen(180, "°", "angles are measured from the hanging equilibrium; 180° is the upright")),
+            Map.entry("radius-m", closed(0, 1e3, "m", "the distance of the point of interest from the pivot axis")),
+            Map.entry("draws", new Rule(0, false, 10_000, false, true, "", "how many sets are drawn; in predict 0 turns the bands off")),
             Map.entry("duration", new Rule(0, true, 1e5, false, false, "s", "")),
             Map.entry("rate", new Rule(0, true, 1e6, false, false, "Hz", "")),
             Map.entry("offset-deg", closed(-360, 360, "°", "")),

@@ -12,6 +12,7 @@ import dev.penduline.cli.commands.AnalyzeCommand;
 import dev.penduline.cli.commands.DemoRecordCommand;
 import dev.penduline.cli.commands.FitCommand;
 import dev.penduline.cli.commands.ImportPartsCommand;
+import dev.penduline.cli.commands.PredictCommand;
 import dev.penduline.cli.commands.InertiaCommand;
 import dev.penduline.cli.commands.SimulateCommand;
 import dev.penduline.cli.internal.FaultReport;
@@ -26,7 +27,8 @@ public final class PendulineCommandLine {
 
     /** Creates the command line with every built-in command. */
     public PendulineCommandLine() {
-        this(List.of(new FitCommand(), new InertiaCommand(), new SimulateCommand(), new AnalyzeCommand(), new ImportPartsCommand(),
+        this(List.of(new FitCommand(), new InertiaCommand(), new SimulateCommand(), new PredictCommand(), new AnalyzeCommand(),
+                new ImportPartsCommand(),
                 new AddSessionCommand(), new DemoRecordCommand()));
     }
 

@@ -175,7 +175,7 @@ public final class MechanismLoader {
         List<String> all = new ArrayList<>(warnings);
         all.addAll(problems);
         SwingPrediction.noRestoringTorque(properties).ifPresent(all::add);
-        return new MechanismSource(label, properties, Optional.of(summary), all);
+        return new MechanismSource(label, properties, Optional.of(summary), all, parts, engine);
     }
 
     /**

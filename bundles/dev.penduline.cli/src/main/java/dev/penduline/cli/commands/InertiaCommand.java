@@ -4,6 +4,7 @@ import java.io.PrintWriter;
 import java.nio.file.Path;
 import java.util.ArrayList;
 import java.util.List;
+import java.util.Locale;
 import java.util.Set;
 
 import dev.penduline.cli.Arguments;
@@ -14,8 +15,10 @@ import dev.penduline.cli.json.JsonWriter;
 import dev.penduline.model.persistence.MechanismFormat;
 import dev.penduline.physics.inertia.InertiaSummary;
 import dev.penduline.physics.inertia.PartContribution;
+import dev.penduline.physics.inertia.ToleranceSpread;
 import dev.penduline.physics.units.Unit;
 import dev.penduline.services.InputException;
+import dev.penduline.services.MechanismForecast;
 import dev.penduline.services.MechanismLoader;
 import dev.penduline.services.MechanismSource;
 import dev.penduline.services.SessionRecords;
@@ -23,6 +26,9 @@ import dev.penduline.services.present.Figures;
 
 /** {@code penduline inertia FILE}: mass, centroid and inertia about the pivot, part by part. */
 public final class InertiaCommand implements Command {
+
+    /** Monte Carlo draws over the parts' tolerances unless told otherwise. */
+    static final int DEFAULT_DRAWS = 2000;
 
     @Override
     public String name() {
@@ -37,21 +43,25 @@ public final class InertiaCommand implements Command {
     @Override
     public String usage() {
         return """
-                Usage: penduline inertia FILE [--gravity M_S2] [--json]
+                Usage: penduline inertia FILE [--gravity M_S2] [--draws N] [--seed N] [--json]
 
                 FILE is a parts-list CSV (a bill of materials or CAD mass-property export) or a
                 mechanism file. Prints the total mass, the centroid and its distance from the pivot
                 axis, the inertia about the pivot and about the centroid, the radius of gyration,
                 the equivalent simple-pendulum length, the small-angle period, and each part's
-                contribution.
+                contribution. When parts carry tolerances (mass_tol, dim_tol), it also gives how far
+                mass, Lc, J0 and the period can move within them: a Monte Carlo standard deviation
+                and 5th/95th percentiles, with the linearised (GUM) standard uncertainty beside.
 
                   --gravity M_S2   local gravity (default 9.80665 m/s²)
+                  --draws N        Monte Carlo draws over the tolerances (default 2000)
+                  --seed N         their seed (default 20261202), so results repeat
                   --json           print a JSON object instead of the table""";
     }
 
     @Override
     public ExitCode run(List<String> args, PrintWriter out, PrintWriter err) throws UsageException {
-        Arguments a = Arguments.parse(args, Set.of("gravity"), Set.of("json"));
+        Arguments a = Arguments.parse(args, Set.of("gravity", "draws", "seed"), Set.of("json"));
         if (a.positional().size() != 1) {
             throw new UsageException("give exactly one parts list or mechanism file. " + usage());
         }
@@ -76,15 +86,28 @@ public final class InertiaCommand implements Command {
         for (String w : warnings) {
             err.println("warning: " + w);
         }
+        ToleranceSpread.Result spread = null;
+        if (source.hasTolerances()) {
+            int draws = (int) a.whole("draws", DEFAULT_DRAWS);
+            if (draws < 2) {
+                throw new UsageException("option --draws: give at least 2 Monte Carlo draws");
+            }
+            try {
+                spread = ToleranceSpread.of(source.frame(), source.parts(), draws, a.whole("seed", MechanismForecast.DEFAULT_SEED));
+            } catch (IllegalArgumentException e) {
+                throw new UsageException(source.label() + ": " + e.getMessage());
+            }
+        }
         if (a.flag("json")) {
-            writeJson(source, s, warnings, new JsonWriter(out));
+            writeJson(source, s, warnings, spread, new JsonWriter(out));
         } else {
-            writeTable(source, s, out);
+            writeTable(source, s, spread, out);
         }
         return ExitCode.OK;
     }
 
-    private static void writeJson(MechanismSource source, InertiaSummary s, List<String> warnings, JsonWriter j) {
+    private static void writeJson(MechanismSource source, InertiaSummary s, List<String> warnings,
+            ToleranceSpread.Result spread, JsonWriter j) {
         j.beginObject()
                 .field("source", source.label())
                 .field("mass_kg", s.totalMass())
@@ -100,6 +123,19 @@ public final class InertiaCommand implements Command {
                 .field("equilibrium_angle_deg", Unit.DEGREE.fromSi(s.equilibriumAngle()))
                 .field("gravity_m_s2", s.gravity())
                 .field("axis_tilt_deg", Unit.DEGREE.fromSi(s.axisTilt()));
+        if (spread != null) {
+            j.field("mass_kg_sigma", spread.mass().sigma())
+                    .field("centroid_distance_m_sigma", spread.centroidDistance().sigma())
+                    .field("pivot_inertia_kg_m2_sigma", spread.pivotInertia().sigma())
+                    .field("small_angle_period_s_sigma", spread.period().sigma());
+            j.name("tolerance_spread").beginObject().field("draws", spread.samples()).field("failed", spread.failed())
+                    .field("seed", spread.seed()).field("inputs", spread.inputs());
+            spreadJson(j, "mass_kg", spread.mass());
+            spreadJson(j, "centroid_distance_m", spread.centroidDistance());
+            spreadJson(j, "pivot_inertia_kg_m2", spread.pivotInertia());
+            spreadJson(j, "small_angle_period_s", spread.period());
+            j.endObject();
+        }
         j.name("parts").beginArray();
         for (PartContribution p : s.contributions()) {
             j.beginObject()
@@ -118,7 +154,14 @@ public final class InertiaCommand implements Command {
         j.endArray().endObject().finish();
     }
 
-    private static void writeTable(MechanismSource source, InertiaSummary s, PrintWriter out) {
+    private static void spreadJson(JsonWriter j, String key, ToleranceSpread.Spread s) {
+        j.name(key).beginObject().field("nominal", s.nominal()).field("sigma", s.sigma())
+                .field("linear_sigma", s.linearSigma()).field("mean", s.mean()).field("p5", s.p5()).field("p95", s.p95())
+                .endObject();
+    }
+
+    private static void writeTable(MechanismSource source, InertiaSummary s, ToleranceSpread.Result spread,
+            PrintWriter out) {
         out.println("Inertia of " + source.label());
         out.println();
         int width = Math.max(4, s.contributions().stream().mapToInt(p -> p.name().length()).max().orElse(4));
@@ -141,8 +184,38 @@ public final class InertiaCommand implements Command {
         out.printf("  small-angle period T0           %s s%n", num(s.smallAnglePeriod()));
         out.printf("  simple-pendulum period error    %s (treating the body as a point mass at its centroid)%n",
                 Figures.percent(s.simplePendulumPeriodError(), 2));
+        if (spread != null) {
+            writeSpread(spread, out);
+        }
         out.println();
         out.println(Caution.TEXT);
+    }
+
+    private static void writeSpread(ToleranceSpread.Result r, PrintWriter out) {
+        out.println();
+        out.printf(Locale.ROOT, "  within the parts' tolerances (%d Monte Carlo draws over %d toleranced inputs, seed %d):%n",
+                r.samples(), r.inputs(), r.seed());
+        String row = "    %-22s %-12s σ %-10s (linearised %s)   5-95 %%: %s to %s%n";
+        spreadRow(out, row, "total mass (kg)", r.mass());
+        spreadRow(out, row, "centroid distance (m)", r.centroidDistance());
+        spreadRow(out, row, "J0 (kg·m²)", r.pivotInertia());
+        spreadRow(out, row, "period T0 (s)", r.period());
+        if (r.failed() > 0) {
+            out.printf(Locale.ROOT, "    note: %d draws left out: their parts list could not be computed (a dimension or mass"
+                    + " below zero, a cut-out larger than its solid): tolerances that large deserve a look%n", r.failed());
+        }
+        for (ToleranceSpread.Spread sp : List.of(r.mass(), r.centroidDistance(), r.pivotInertia(), r.period())) {
+            if (sp.sigma() > 0 && Math.abs(sp.linearSigma() / sp.sigma() - 1) > 0.1) {
+                out.println("    note: the linearised and Monte Carlo spreads differ by more than 10 %: the figures are not"
+                        + " linear over the tolerances; read the percentiles");
+                break;
+            }
+        }
+    }
+
+    private static void spreadRow(PrintWriter out, String row, String label, ToleranceSpread.Spread s) {
+        out.printf(Locale.ROOT, row, label, num(s.nominal()), Figures.significant(s.sigma(), 2),
+                Figures.significant(s.linearSigma(), 2), num(s.p5()), num(s.p95()));
     }
 
     private static String num(double v) {

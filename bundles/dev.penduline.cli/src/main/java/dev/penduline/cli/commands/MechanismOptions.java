@@ -28,7 +28,8 @@ final class MechanismOptions {
               FILE | --mass KG --centroid-distance M --pivot-inertia KG_M2
                                the mechanism: a mechanism file (.penduline), a parts list (.csv),
                                or its lumped properties
-              --gravity M_S2   local gravity (default 9.80665 m/s², or the mechanism file's)""";
+              --gravity M_S2   local gravity (default 9.80665 m/s², or the mechanism file's)
+            """;
 
     private MechanismOptions() {
     }

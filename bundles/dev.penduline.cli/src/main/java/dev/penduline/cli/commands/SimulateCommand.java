@@ -11,12 +11,16 @@ import dev.penduline.cli.Command;
 import dev.penduline.cli.ExitCode;
 import dev.penduline.cli.UsageException;
 import dev.penduline.cli.json.JsonWriter;
+import dev.penduline.physics.MechanismProperties;
+import dev.penduline.physics.forecast.ForecastRequest;
+import dev.penduline.physics.forecast.SwingForecast;
 import dev.penduline.physics.motion.FrictionTorques;
 import dev.penduline.physics.motion.SwingEnergy;
 import dev.penduline.physics.motion.SwingRun;
 import dev.penduline.physics.motion.TurningPoint;
 import dev.penduline.physics.units.Unit;
 import dev.penduline.services.InputException;
+import dev.penduline.services.MechanismForecast;
 import dev.penduline.services.MechanismSource;
 import dev.penduline.services.OutputFiles;
 import dev.penduline.services.SwingPrediction;
@@ -26,7 +30,7 @@ import dev.penduline.services.present.Figures;
 public final class SimulateCommand implements Command {
 
     private static final Set<String> OPTIONS = MechanismOptions.with("theta0-deg", "omega0-deg-s", "viscous",
-            "coulomb", "stiction", "drag", "duration", "rate", "out");
+            "coulomb", "stiction", "drag", "fit", "duration", "rate", "out", "band-deg");
 
     @Override
     public String name() {
@@ -45,17 +49,17 @@ public final class SimulateCommand implements Command {
                                           --theta0-deg DEG [options]
 
                 Integrates the nonlinear swing (event-driven at every reversal, with the stick test
-                of static friction) and prints the periods, turning points, stop and rest angle and
-                the energy each friction term dissipated. Angles are from the hanging equilibrium.
+                of static friction) and prints the periods, turning points, stop and rest angle, the
+                settle time and peak angular velocity, and the energy each friction term dissipated.
+                The friction is the mechanism file's latest stored fit unless told otherwise (and
+                none for a parts list or lumped properties). Angles are from the hanging equilibrium.
 
                 """ + MechanismOptions.USAGE + """
 
                   --theta0-deg DEG      release angle (required)
                   --omega0-deg-s DEG_S  initial angular velocity (default 0: released from rest)
-                  --viscous B           viscous torque coefficient, N·m·s/rad (default 0)
-                  --coulomb TC          dry (Coulomb) friction torque, N·m (default 0)
-                  --stiction TS         static friction torque, N·m, at least TC (default: TC)
-                  --drag C              quadratic (air) drag coefficient, N·m·s²/rad² (default 0)
+                """ + FrictionOptions.USAGE + """
+                  --band-deg DEG        half-width of the settle band (default 1°)
                   --duration S          simulated time (default 20 s)
                   --rate HZ             output samples per second (default 1000)
                   --out FILE.csv        write time_s,angle_deg,velocity_deg_s (never over a record,
@@ -73,14 +77,8 @@ public final class SimulateCommand implements Command {
 
     @Override
     public ExitCode run(List<String> args, PrintWriter out, PrintWriter err) throws UsageException {
-        Arguments a = Arguments.parse(args, OPTIONS, Set.of("json", "force"));
-        if (a.positional().size() > 1) {
-            throw new UsageException("at most one mechanism file; got " + a.positional());
-        }
-        MechanismSource mechanism = MechanismOptions.resolve(a, a.positional().isEmpty() ? null : a.positional().get(0));
-        for (String w : mechanism.warnings()) {
-            err.println("warning: " + w);
-        }
+        Arguments a = Arguments.parse(args, OPTIONS, Set.of("json", "force", "no-fit"));
+        MechanismSource given = FrictionOptions.mechanism(a, err);
         if (a.has("out")) {
             checkOut(Path.of(a.value("out")), a.flag("force"));
         }
@@ -92,13 +90,11 @@ public final class SimulateCommand implements Command {
                     + "on them");
         }
         double omega0 = Unit.DEG_PER_S.toSi(a.number("omega0-deg-s", 0));
-        FrictionTorques friction;
-        try {
-            friction = new FrictionTorques(a.number("viscous", 0), a.number("coulomb", 0), a.number("stiction", 0),
-                    a.number("drag", 0));
-        } catch (IllegalArgumentException e) {
-            throw new UsageException(e.getMessage());
-        }
+        double band = Unit.DEGREE.toSi(a.number("band-deg", PredictCommand.DEFAULT_BAND_DEG));
+        MechanismForecast.FrictionSource source = FrictionOptions.resolve(a, false);
+        FrictionTorques friction = source.friction();
+        MechanismProperties properties = MechanismForecast.properties(given, source);
+        MechanismSource mechanism = given.withProperties(properties);
         SwingRun run;
         try {
             run = SwingPrediction.simulate(mechanism, friction, theta0, omega0, a.number("duration", 20),
@@ -111,10 +107,12 @@ public final class SimulateCommand implements Command {
         } catch (InputException e) {
             throw new UsageException(e.getMessage());
         }
+        SwingForecast figures = MechanismForecast.summarise(properties, friction, run,
+                new ForecastRequest(theta0, omega0, band, Double.NaN, Double.NaN));
         if (a.flag("json")) {
-            writeJson(run, new JsonWriter(out));
+            writeJson(source, run, figures, band, new JsonWriter(out));
         } else {
-            writeSummary(mechanism, friction, theta0, run, out);
+            writeSummary(mechanism, source, theta0, run, figures, band, out);
             if (a.has("out")) {
                 out.println("Wrote " + run.size() + " samples to " + a.value("out"));
             }
@@ -147,9 +145,14 @@ public final class SimulateCommand implements Command {
         });
     }
 
-    private static void writeJson(SwingRun run, JsonWriter j) {
+    private static void writeJson(MechanismForecast.FrictionSource source, SwingRun run, SwingForecast figures,
+            double band, JsonWriter j) {
         SwingEnergy e = run.energy();
         j.beginObject();
+        j.field("fit", source.fit() == null ? "none" : source.fit().id());
+        FrictionTorques f = source.friction();
+        j.name("friction").beginObject().field("viscous_N_m_s_rad", f.viscous()).field("coulomb_N_m", f.coulomb())
+                .field("stiction_N_m", f.staticTorque()).field("drag_N_m_s2_rad2", f.drag()).endObject();
         j.field("periods_s", run.periods());
         j.field("half_swing_durations_s", run.halfSwingDurations());
         j.name("turning_points").beginArray();
@@ -160,7 +163,12 @@ public final class SimulateCommand implements Command {
         j.field("stopped", run.stopped())
                 .field("stop_time_s", run.stopTime())
                 .field("rest_angle_deg", Unit.DEGREE.fromSi(run.restAngle()))
-                .field("samples", run.size());
+                .field("samples", run.size())
+                .field("settled", figures.settled())
+                .field("settle_time_s", figures.settleTime())
+                .field("band_deg", Unit.DEGREE.fromSi(band))
+                .field("peak_angular_velocity_rad_s", figures.peakAngularVelocity())
+                .field("peak_time_s", figures.peakTime());
         j.name("energy_dissipated_J").beginObject()
                 .field("viscous", e.viscous()).field("coulomb", e.coulomb()).field("drag", e.drag()).endObject();
         j.name("energy_J").beginObject()
@@ -170,12 +178,14 @@ public final class SimulateCommand implements Command {
         j.endObject().finish();
     }
 
-    private static void writeSummary(MechanismSource m, FrictionTorques f, double theta0, SwingRun run,
-            PrintWriter out) {
+    private static void writeSummary(MechanismSource m, MechanismForecast.FrictionSource source, double theta0,
+            SwingRun run, SwingForecast figures, double band, PrintWriter out) {
+        FrictionTorques f = source.friction();
         out.println("Swing of " + m.label());
         out.printf(Locale.ROOT, "  released at %s° (small-angle period %s s)%n",
                 Figures.significant(Unit.DEGREE.fromSi(theta0)), Figures.significant(m.properties().smallAnglePeriod()));
-        out.printf(Locale.ROOT, "  friction: viscous %s N·m·s/rad, Coulomb %s N·m, stiction %s N·m, drag %s N·m·s²/rad²%n",
+        out.println("  friction: " + source.description());
+        out.printf(Locale.ROOT, "    viscous %s N·m·s/rad, Coulomb %s N·m, stiction %s N·m, drag %s N·m·s²/rad²%n",
                 Figures.significant(f.viscous()), Figures.significant(f.coulomb()),
                 Figures.significant(f.staticTorque()), Figures.significant(f.drag()));
         out.println();
@@ -196,6 +206,14 @@ public final class SimulateCommand implements Command {
             double last = run.angles()[run.size() - 1];
             out.printf(Locale.ROOT, "  still moving at the end (%s°)%n", Figures.significant(Unit.DEGREE.fromSi(last)));
         }
+        if (figures.settled()) {
+            out.printf(Locale.ROOT, "  settles inside ±%s° after %s s (%d half-swings)%n", Figures.significant(Unit.DEGREE
+                    .fromSi(band)), Figures.significant(figures.settleTime()), figures.halfSwings());
+        } else {
+            out.println("  does not settle inside the band: " + figures.note());
+        }
+        out.printf(Locale.ROOT, "  peak angular velocity %s rad/s at %s s%n", Figures.significant(figures.peakAngularVelocity()),
+                Figures.significant(figures.peakTime()));
         SwingEnergy e = run.energy();
         out.printf(Locale.ROOT, "  energy: released with %s J; dissipated viscous %s J, Coulomb %s J, drag %s J%n",
                 Figures.significant(e.initial()), Figures.significant(e.viscous()), Figures.significant(e.coulomb()),

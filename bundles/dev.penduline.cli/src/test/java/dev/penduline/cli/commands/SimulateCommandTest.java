@@ -75,4 +75,21 @@ class SimulateCommandTest {
                 "--pivot-inertia", "0.5", "--theta0-deg", "10"));
         assertTrue(err.toString().contains("pivotInertia"), err.toString());
     }
+
+    @Test
+    void aMechanismFileIsSimulatedWithItsStoredFitUnlessToldOtherwise() {
+        Path hatch = Path.of("..", "..", "samples", "inspection-hatch", "hatch.penduline");
+        assertEquals(ExitCode.OK, run("simulate", hatch.toString(), "--theta0-deg", "20", "--json"), err.toString());
+        String withFit = out.toString();
+        assertTrue(withFit.contains("\"fit\": \"fit-"), withFit);
+        assertTrue(Pattern.compile("\"viscous_N_m_s_rad\": 0\\.0*[1-9]").matcher(withFit).find(),
+                "the stored fit's viscous term is used: " + withFit);
+        out.getBuffer().setLength(0);
+        assertEquals(ExitCode.OK, run("simulate", hatch.toString(), "--theta0-deg", "20", "--no-fit", "--json"),
+                err.toString());
+        String without = out.toString();
+        assertTrue(without.contains("\"fit\": \"none\""), without);
+        assertTrue(Pattern.compile("\"viscous_N_m_s_rad\": 0(\\.0)?,").matcher(without).find(), without);
+        assertTrue(without.contains("\"settled\": false"), "no friction: it never settles; " + without);
+    }
 }

@@ -178,6 +178,15 @@ public final class SwingSimulator {
     }
 
     /**
+     * Whether gravity is linearised ({@code K (θ − θeq)} instead of {@code K sin(θ − θeq)}).
+     *
+     * @return true for the linear (small-angle) gravity term
+     */
+    public boolean linearGravity() {
+        return linearGravity;
+    }
+
+    /**
      * Simulates a swing sampled at a constant rate from release.
      *
      * @param theta0     initial angle in the sensor's frame (rad)
