@@ -87,6 +87,8 @@ public final class OptionRules {
                     + " equilibrium")),
             Map.entry("at-deg", symmetricOpen(180, "°", "angles are measured from the hanging equilibrium; 180° is the upright")),
             Map.entry("radius-m", closed(0, 1e3, "m", "the distance of the point of interest from the pivot axis")),
+            Map.entry("settle-within-s", new Rule(0, true, 1e5, false, false, "s", "the time within which the swing must settle"
+                    + " inside --band-deg")),
             Map.entry("draws", new Rule(0, false, 10_000, false, true, "", "how many sets are drawn; in predict 0 turns the bands off")),
             Map.entry("duration", new Rule(0, true, 1e5, false, false, "s", "")),
             Map.entry("rate", new Rule(0, true, 1e6, false, false, "Hz", "")),

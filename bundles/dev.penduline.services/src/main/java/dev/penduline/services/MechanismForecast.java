@@ -101,9 +101,11 @@ public final class MechanismForecast {
      * @param seed           the seed of the draws
      * @param bandDefinition what a band means, in words
      * @param notes          what the user should know about the draws
+     * @param properties     the lumped properties the nominal forecast used (about the equilibrium)
      */
     public record Outcome(FrictionSource source, double pivotInertia, String inertiaSource, ForecastRequest request,
-            SwingForecast nominal, Bands bands, int draws, long seed, String bandDefinition, List<String> notes) {
+            SwingForecast nominal, Bands bands, int draws, long seed, String bandDefinition, List<String> notes,
+            MechanismProperties properties) {
 
         /** Copies the list so the record stays immutable. */
         public Outcome {
@@ -147,7 +149,7 @@ public final class MechanismForecast {
                 notes.add("the stored fit carries no uncertainties and the parts no tolerances, so the figures have no bands");
             }
             return new Outcome(source, base.pivotInertia(), inertiaSource, request, nominal, bands(nominal, List.of()),
-                    0, seed, "no band: no uncertainty of the friction or the parts is known", notes);
+                    0, seed, "no band: no uncertainty of the friction or the parts is known", notes, base);
         }
         List<double[]> parts = List.of();
         if (partsSpread) {
@@ -231,7 +233,7 @@ public final class MechanismForecast {
                 + " %d parameter sets drawn from %s, seed %d", FigureBand.LOW_PERCENT, FigureBand.HIGH_PERCENT, draws,
                 String.join(" and from ", from), seed);
         return new Outcome(source, base.pivotInertia(), inertiaSource, request, nominal, bands(nominal, drawn), draws, seed,
-                definition, notes);
+                definition, notes, base);
     }
 
     /**
@@ -271,6 +273,43 @@ public final class MechanismForecast {
     public static SwingForecast summarise(MechanismProperties properties, FrictionTorques friction, SwingRun run,
             ForecastRequest request) {
         return new Forecaster(new SwingSimulator(properties, friction)).summarise(run, request);
+    }
+
+    /**
+     * A what-if: the same forecast for the mechanism with changed parts. When the fit freed the
+     * inertia, the changed mechanism's J0 is the fitted one moved by the change of the calculated
+     * J0 (the swing measured the mechanism as built; the change is what the parts say).
+     *
+     * @param mechanism the mechanism as it is
+     * @param changed   the mechanism with the changes (computed from its parts)
+     * @param source    the friction
+     * @param request   the release and questions
+     * @param draws     parameter sets for the bands
+     * @param seed      their seed
+     * @return the forecast of the changed mechanism
+     * @throws InputException when the changed mechanism cannot swing
+     */
+    public static Outcome whatIf(MechanismSource mechanism, MechanismSource changed, FrictionSource source,
+            ForecastRequest request, int draws, long seed) throws InputException {
+        FrictionSource moved = source;
+        if (usesFittedInertia(source)) {
+            StoredFit f = source.fit();
+            double shift = changed.properties().pivotInertia() - mechanism.properties().pivotInertia();
+            StoredFit shifted = new StoredFit(f.id(), f.name(), f.friction(), f.fittedInertia() + shift, f.parameters(),
+                    shiftedValues(f, shift), f.sigmas(), f.correlation(), f.stictionLower(), f.stictionUpper());
+            moved = new FrictionSource(shifted, source.friction(), source.description());
+        }
+        return forecast(changed, moved, request, draws, seed);
+    }
+
+    private static double[] shiftedValues(StoredFit f, double shift) {
+        double[] v = f.values().clone();
+        for (int i = 0; i < v.length; i++) {
+            if ("J0".equals(f.parameters().get(i))) {
+                v[i] += shift;
+            }
+        }
+        return v;
     }
 
     private static double minimumInertia(MechanismProperties p) {

@@ -1,26 +1,35 @@
 package dev.penduline.cli.commands;
 
 import java.io.PrintWriter;
+import java.nio.file.Path;
+import java.util.ArrayList;
 import java.util.List;
 import java.util.Locale;
 import java.util.Optional;
 import java.util.Set;
+import java.util.function.ToDoubleFunction;
 
 import dev.penduline.cli.Arguments;
 import dev.penduline.cli.Command;
 import dev.penduline.cli.ExitCode;
+import dev.penduline.cli.OptionRules;
 import dev.penduline.cli.UsageException;
 import dev.penduline.cli.json.JsonWriter;
+import dev.penduline.physics.MechanismProperties;
 import dev.penduline.physics.forecast.AnglePass;
 import dev.penduline.physics.forecast.FigureBand;
 import dev.penduline.physics.forecast.ForecastRequest;
 import dev.penduline.physics.forecast.SwingForecast;
+import dev.penduline.physics.inertia.Part;
 import dev.penduline.physics.motion.FrictionTorques;
 import dev.penduline.physics.motion.SwingEnergy;
 import dev.penduline.physics.units.Unit;
 import dev.penduline.services.InputException;
 import dev.penduline.services.MechanismForecast;
+import dev.penduline.services.MechanismLoader;
 import dev.penduline.services.MechanismSource;
+import dev.penduline.services.PartChanges;
+import dev.penduline.services.SpecDesign;
 import dev.penduline.services.present.Figures;
 
 /** {@code penduline predict}: what a mechanism does after a release, with the friction of its stored fit. */
@@ -30,7 +39,8 @@ public final class PredictCommand implements Command {
     static final double DEFAULT_BAND_DEG = 1;
 
     private static final Set<String> OPTIONS = MechanismOptions.with("theta0-deg", "omega0-deg-s", "band-deg", "at-deg",
-            "radius-m", "draws", "seed", "viscous", "coulomb", "stiction", "drag", "fit");
+            "radius-m", "draws", "seed", "viscous", "coulomb", "stiction", "drag", "fit", "settle-within-s", "max-speed-at-deg",
+            "add", "set", "remove", "add-parts");
 
     @Override
     public String name() {
@@ -63,6 +73,16 @@ public final class PredictCommand implements Command {
                   --radius-m M          distance from the pivot axis of the point whose speed is wanted there
                 """ + FrictionOptions.USAGE + """
 
+                  --settle-within-s T   design: the damping to add so that it settles inside the band within T
+                  --max-speed-at-deg A:W
+                                        design: the damping to add so that it passes A degrees at most at W rad/s
+                  --add viscous|coulomb the term a design adds (default viscous)
+                  --set PART.FIELD=VALUE
+                                        what-if: change a part (mass, x, y, z, length, width, height,
+                                        radius, inner_radius, quantity; SI or a unit suffix: 12mm,
+                                        0.5lb); repeat for several; the report gives both, side by side
+                  --remove PART         what-if: without this part
+                  --add-parts FILE.csv  what-if: with the parts of this parts list added
                   --draws N             parameter sets drawn for the bands (default 200; 0: none)
                   --seed N              seed of the draws (default 20261202), so results repeat
                   --json                print a JSON object instead of the report""";
@@ -91,15 +111,193 @@ public final class PredictCommand implements Command {
         } catch (InputException e) {
             throw new UsageException(e.getMessage());
         }
+        Optional<MechanismForecast.Outcome> whatIf = whatIf(a, mechanism, source, request);
+        Optional<SpecDesign.Answer> design = design(a, mechanism, source, request);
         if (a.flag("json")) {
-            writeJson(outcome, new JsonWriter(out));
+            writeJson(outcome, design, whatIf, new JsonWriter(out));
         } else {
-            writeReport(mechanism, outcome, out);
+            writeReport(mechanism, outcome, design, out);
+            whatIf.ifPresent(w -> writeWhatIf(outcome, w, a, out));
         }
         return ExitCode.OK;
     }
 
-    private static void writeJson(MechanismForecast.Outcome o, JsonWriter j) {
+    private static Optional<MechanismForecast.Outcome> whatIf(Arguments a, MechanismSource mechanism,
+            MechanismForecast.FrictionSource source, ForecastRequest request) throws UsageException {
+        if (!a.has("set") && !a.has("remove") && !a.has("add-parts")) {
+            return Optional.empty();
+        }
+        if (mechanism.parts().isEmpty() || mechanism.frame() == null) {
+            throw new UsageException("what-if changes (--set, --remove, --add-parts) change parts: give a mechanism file or a"
+                    + " parts list, not lumped properties");
+        }
+        try {
+            List<PartChanges.Setting> settings = new ArrayList<>();
+            for (String text : a.all("set")) {
+                settings.add(PartChanges.parse(text));
+            }
+            List<Path> added = a.all("add-parts").stream().map(Path::of).toList();
+            List<Part> parts = PartChanges.apply(mechanism.parts(), settings, a.all("remove"), added);
+            MechanismSource changed = new MechanismLoader(mechanism.frame()).summarise(mechanism.label() + " with the changes",
+                    parts, List.of());
+            return Optional.of(MechanismForecast.whatIf(mechanism, changed, source, request,
+                    (int) a.whole("draws", MechanismForecast.DEFAULT_DRAWS), a.whole("seed", MechanismForecast.DEFAULT_SEED)));
+        } catch (InputException e) {
+            throw new UsageException(e.getMessage());
+        }
+    }
+
+    /** The figures a what-if compares, in the report's order: label, JSON key, scale to the shown unit. */
+    private record Compared(String label, String key, ToDoubleFunction<MechanismForecast.Outcome> value) {
+    }
+
+    private static List<Compared> compared(MechanismForecast.Outcome base) {
+        double deg = Unit.DEGREE.fromSi(1);
+        List<Compared> list = new ArrayList<>(List.of(
+                new Compared("mass (kg)", "mass_kg", o -> o.properties().mass()),
+                new Compared("centroid distance Lc (m)", "centroid_distance_m", o -> o.properties().centroidDistance()),
+                new Compared("J0 (kg·m²)", "pivot_inertia_kg_m2", MechanismForecast.Outcome::pivotInertia),
+                new Compared("small-angle period (s)", "small_angle_period_s", o -> o.properties().smallAnglePeriod()),
+                new Compared("settle time (s)", "settle_time_s", o -> o.nominal().settled() ? o.nominal().settleTime()
+                        : Double.NaN),
+                new Compared("half-swings", "half_swings", o -> o.nominal().settled() ? o.nominal().halfSwings() : Double.NaN),
+                new Compared("peak angular velocity (rad/s)", "peak_angular_velocity_rad_s",
+                        o -> o.nominal().peakAngularVelocity()),
+                new Compared("largest overshoot (°)", "max_overshoot_deg", o -> o.nominal().maxOvershoot() * deg),
+                new Compared("rest band upper end (°)", "rest_band_upper_deg", o -> o.nominal().restBand().upper() * deg)));
+        if (!Double.isNaN(base.request().passAngle())) {
+            list.add(new Compared("angular velocity at --at-deg (rad/s)", "at_angle_angular_velocity_rad_s",
+                    o -> o.nominal().pass().map(AnglePass::angularVelocity).orElse(Double.NaN)));
+            list.add(new Compared("kinetic energy at --at-deg (J)", "at_angle_kinetic_energy_J",
+                    o -> o.nominal().pass().map(AnglePass::kineticEnergy).orElse(Double.NaN)));
+        }
+        return list;
+    }
+
+    private static void writeWhatIf(MechanismForecast.Outcome base, MechanismForecast.Outcome changed, Arguments a,
+            PrintWriter out) {
+        out.println("What-if: " + String.join("; ", whatIfChanges(a)));
+        String row = "  %-38s %14s %14s %14s%n";
+        out.printf(Locale.ROOT, row, "", "as it is", "changed", "difference");
+        for (Compared c : compared(base)) {
+            double b = c.value().applyAsDouble(base);
+            double n = c.value().applyAsDouble(changed);
+            out.printf(Locale.ROOT, row, c.label(), Figures.significant(b), Figures.significant(n), Figures.significant(n - b));
+        }
+        out.println("  (the changed mechanism's bands: " + changed.bandDefinition() + ")");
+        out.println();
+    }
+
+    private static List<String> whatIfChanges(Arguments a) {
+        List<String> changes = new ArrayList<>(a.all("set"));
+        a.all("remove").forEach(r -> changes.add("without " + r));
+        a.all("add-parts").forEach(f -> changes.add("with the parts of " + f));
+        return changes;
+    }
+
+    private static void writeWhatIfJson(MechanismForecast.Outcome base, MechanismForecast.Outcome changed, JsonWriter j) {
+        j.name("what_if").beginObject();
+        for (String side : List.of("baseline", "changed", "difference")) {
+            j.name(side).beginObject();
+            for (Compared c : compared(base)) {
+                double b = c.value().applyAsDouble(base);
+                double n = c.value().applyAsDouble(changed);
+                j.field(c.key(), switch (side) {
+                    case "baseline" -> b;
+                    case "changed" -> n;
+                    default -> n - b;
+                });
+            }
+            j.endObject();
+        }
+        j.endObject();
+    }
+
+    private static Optional<SpecDesign.Answer> design(Arguments a, MechanismSource mechanism,
+            MechanismForecast.FrictionSource source, ForecastRequest request) throws UsageException {
+        if (a.has("settle-within-s") && a.has("max-speed-at-deg")) {
+            throw new UsageException("give one spec at a time: --settle-within-s or --max-speed-at-deg");
+        }
+        SpecDesign.Spec spec;
+        if (a.has("settle-within-s")) {
+            spec = SpecDesign.Spec.settleWithin(a.number("settle-within-s", Double.NaN));
+        } else if (a.has("max-speed-at-deg")) {
+            spec = speedSpec(a.value("max-speed-at-deg"));
+        } else {
+            if (a.has("add")) {
+                throw new UsageException("--add chooses the term a design adds: give --settle-within-s or --max-speed-at-deg");
+            }
+            return Optional.empty();
+        }
+        String add = a.has("add") ? a.value("add") : "viscous";
+        SpecDesign.Term term = switch (add) {
+            case "viscous" -> SpecDesign.Term.VISCOUS;
+            case "coulomb" -> SpecDesign.Term.COULOMB;
+            default -> throw new UsageException("option --add: '" + OptionRules.shown(add) + "' is not a term a design can add:"
+                    + " give viscous or coulomb");
+        };
+        MechanismProperties p = MechanismForecast.properties(mechanism, source);
+        return Optional.of(source.fit() != null
+                ? SpecDesign.design(p, source.fit(), request, spec, term, a.whole("seed", MechanismForecast.DEFAULT_SEED))
+                : SpecDesign.design(p, source.friction(), request, spec, term));
+    }
+
+    private static SpecDesign.Spec speedSpec(String text) throws UsageException {
+        String[] parts = text.split(":", -1);
+        if (parts.length != 2) {
+            throw new UsageException("option --max-speed-at-deg: '" + OptionRules.shown(text) + "' is not ANGLE:RAD_S (e.g. 0:1.5,"
+                    + " at most 1.5 rad/s when passing 0°)");
+        }
+        double angle;
+        double limit;
+        try {
+            angle = Double.parseDouble(parts[0].strip());
+            limit = Double.parseDouble(parts[1].strip());
+        } catch (NumberFormatException e) {
+            throw new UsageException("option --max-speed-at-deg: '" + OptionRules.shown(text) + "' is not ANGLE:RAD_S with two"
+                    + " numbers (e.g. 0:1.5)");
+        }
+        OptionRules.check("at-deg", parts[0], angle);
+        if (!(limit > 0) || Double.isInfinite(limit)) {
+            throw new UsageException("option --max-speed-at-deg: the speed limit must be a number above 0 rad/s, got '"
+                    + OptionRules.shown(parts[1]) + "'");
+        }
+        return SpecDesign.Spec.maxSpeedAt(Unit.DEGREE.toSi(angle), limit);
+    }
+
+    private static void writeDesignJson(SpecDesign.Answer d, JsonWriter j) {
+        j.name("design").beginObject().field("term", d.term().name().toLowerCase(Locale.ROOT))
+                .field("unit", d.term().unit()).field("added", d.added()).field("total", d.total())
+                .field("meets", d.meets()).field("figure_name", d.figureName()).field("figure", d.figure() >= 1e11 ? Double.NaN
+                        : d.figure()).field("baseline_figure", d.baseline() >= 1e11 ? Double.NaN : d.baseline())
+                .field("reason", d.reason());
+        if (d.addedBand().isPresent()) {
+            j.name("added_band").beginObject().field("low", d.addedBand().get().low())
+                    .field("high", d.addedBand().get().high()).field("draws", SpecDesign.SENSITIVITY_DRAWS).endObject();
+        }
+        j.endObject();
+    }
+
+    private static void writeDesign(SpecDesign.Answer d, PrintWriter out) {
+        out.println();
+        String what = d.term() == SpecDesign.Term.VISCOUS ? "viscous damping" : "dry friction torque";
+        String figure = d.figure() >= 1e11 ? "never" : Figures.significant(d.figure());
+        if (Double.isNaN(d.added())) {
+            out.println("  design: " + d.reason());
+            return;
+        }
+        out.printf(Locale.ROOT, "  design: add %s %s of %s (total %s %s)%s%n", Figures.significant(d.added()), d.term().unit(),
+                what, Figures.significant(d.total()), d.term().unit(), d.addedBand().map(b -> " (band " + Figures
+                        .significant(b.low()) + " to " + Figures.significant(b.high()) + " over " + SpecDesign.SENSITIVITY_DRAWS
+                        + " draws of the fit)").orElse(""));
+        out.printf(Locale.ROOT, "    re-simulated %s: %s (without it: %s); %s%n", d.figureName(), figure,
+                d.baseline() >= 1e11 ? "never" : Figures.significant(d.baseline()), d.meets() ? "meets the spec" : "does NOT meet"
+                        + " the spec");
+        out.println("    " + d.reason());
+    }
+
+    private static void writeJson(MechanismForecast.Outcome o, Optional<SpecDesign.Answer> design,
+            Optional<MechanismForecast.Outcome> whatIf, JsonWriter j) {
         SwingForecast n = o.nominal();
         MechanismForecast.Bands b = o.bands();
         j.beginObject();
@@ -149,6 +347,8 @@ public final class PredictCommand implements Command {
             j.value(note);
         }
         j.endArray();
+        design.ifPresent(d -> writeDesignJson(d, j));
+        whatIf.ifPresent(w -> writeWhatIfJson(o, w, j));
         j.endObject().finish();
     }
 
@@ -157,7 +357,8 @@ public final class PredictCommand implements Command {
                 .field("high", band.high() * scale).endObject();
     }
 
-    private static void writeReport(MechanismSource m, MechanismForecast.Outcome o, PrintWriter out) {
+    private static void writeReport(MechanismSource m, MechanismForecast.Outcome o, Optional<SpecDesign.Answer> design,
+            PrintWriter out) {
         SwingForecast n = o.nominal();
         MechanismForecast.Bands b = o.bands();
         ForecastRequest r = o.request();
@@ -216,6 +417,7 @@ public final class PredictCommand implements Command {
         for (String note : o.notes()) {
             out.println("  note: " + note);
         }
+        design.ifPresent(d -> writeDesign(d, out));
         out.println();
         out.println(Caution.HAZARD);
         out.println(Caution.TEXT);

@@ -92,4 +92,54 @@ class PredictCommandTest {
         assertEquals(ExitCode.USAGE_OR_INPUT, run("predict", HATCH.toString(), "--theta0-deg", "20", "--fit", "nope"));
         assertTrue(err.toString().contains("no stored fit 'nope'"), err.toString());
     }
+
+    @Test
+    void aDesignAnswerIsCheckedBySimulatingWithTheFoundDamping() {
+        String[] arm = {"--mass", "2", "--centroid-distance", "0.4", "--pivot-inertia", "0.5"};
+        String[] args = concat(concat(new String[] {"predict"}, arm), new String[] {"--viscous", "0.01", "--theta0-deg",
+            "17", "--band-deg", "0.5", "--settle-within-s", "8", "--json"});
+        assertEquals(ExitCode.OK, run(args), err.toString());
+        String json = out.toString();
+        assertTrue(json.contains("\"meets\": true"), json);
+        double total = number(json, "\"total\"");
+        assertTrue(total > 0.01, json);
+        out.getBuffer().setLength(0);
+        // the simulate command, told the found damping, settles inside ±0.5° within the 8 s asked for
+        assertEquals(ExitCode.OK, run(concat(concat(new String[] {"simulate"}, arm), new String[] {"--viscous",
+            Double.toString(total), "--theta0-deg", "17", "--band-deg", "0.5", "--duration", "20", "--json"})), err.toString());
+        double settle = number(out.toString(), "\"settle_time_s\"");
+        // (to the root finder's accuracy: the answer is the smallest damping that meets the spec)
+        assertTrue(settle <= 8 + 1e-6 && settle > 7, "settles after " + settle);
+    }
+
+    @Test
+    void aSpeedSpecMustBeAnAngleAndASpeed() {
+        assertEquals(ExitCode.USAGE_OR_INPUT, run("predict", "--mass", "1", "--centroid-distance", "1", "--pivot-inertia", "1",
+                "--coulomb", "0.1", "--theta0-deg", "20", "--max-speed-at-deg", "fast"));
+        assertTrue(err.toString().contains("ANGLE:RAD_S"), err.toString());
+    }
+
+    @Test
+    void aWhatIfGivesTheChangedPeriodBesideTheBaseline(@org.junit.jupiter.api.io.TempDir Path dir) throws Exception {
+        // a point mass on r: T0 = 2π sqrt(r/g) (simple pendulum, the classic result); moving the bob
+        // from 1 m to 0.5 m shortens the period by the factor √2
+        Path parts = java.nio.file.Files.writeString(dir.resolve("bob.csv"), "name,shape,mass_kg,x_m,y_m,z_m\nbob,point,2,0,-1,0\n");
+        assertEquals(ExitCode.OK, run("predict", parts.toString(), "--viscous", "0.05", "--theta0-deg", "5",
+                "--set", "bob.y=-500mm", "--json"), err.toString());
+        String json = out.toString();
+        double g = 9.80665;
+        assertEquals(2 * Math.PI * Math.sqrt(1 / g), number(json, "\"baseline\": \\{[^}]*\"small_angle_period_s\""), 1e-9);
+        assertEquals(2 * Math.PI * Math.sqrt(0.5 / g), number(json, "\"changed\": \\{[^}]*\"small_angle_period_s\""), 1e-9);
+        assertEquals(2 * 0.25, number(json, "\"changed\": \\{[^}]*\"pivot_inertia_kg_m2\""), 1e-12);
+        out.getBuffer().setLength(0);
+        assertEquals(ExitCode.OK, run("predict", parts.toString(), "--viscous", "0.05", "--theta0-deg", "5",
+                "--set", "bob.y=-500mm"), err.toString());
+        assertTrue(out.toString().contains("What-if: bob.y=-500mm"), out.toString());
+    }
+
+    private static String[] concat(String[] a, String[] b) {
+        String[] all = java.util.Arrays.copyOf(a, a.length + b.length);
+        System.arraycopy(b, 0, all, a.length, b.length);
+        return all;
+    }
 }
