@@ -379,6 +379,9 @@ public final class PredictCommand implements Command {
             out.printf(Locale.ROOT, "  settles inside the band after %s s%s%n", Figures.significant(n.settleTime()),
                     range(b.settleTime(), 1));
             out.printf(Locale.ROOT, "  half-swings before that: %d%s%n", n.halfSwings(), wholeRange(b.halfSwings()));
+            if (!n.note().isEmpty()) {
+                out.println("  note: " + n.note());
+            }
         } else {
             out.println("  does not settle inside the band: " + n.note());
         }

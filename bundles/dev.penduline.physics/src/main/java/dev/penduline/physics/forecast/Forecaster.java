@@ -103,7 +103,13 @@ public final class Forecaster {
         String note = "";
         boolean settled;
         double settleTime;
-        final double restAngle = run.stopped() ? run.restAngle() - eq : Double.NaN;
+        final double restAngle = run.stopped() ? wrap(run.restAngle() - eq) : Double.NaN;
+        final double[] wrapped = new double[x.length];
+        double farthest = 0;
+        for (int i = 0; i < x.length; i++) {
+            wrapped[i] = wrap(x[i]);
+            farthest = Math.max(farthest, Math.abs(x[i]));
+        }
         if (run.stopped() && Math.abs(restAngle) > band) {
             settled = false;
             settleTime = Double.NaN;
@@ -116,7 +122,13 @@ public final class Forecaster {
                     + " simulated", Math.toDegrees(band), duration);
         } else {
             settled = true;
-            settleTime = settleTime(t, x, w, tps, eq, band);
+            settleTime = settleTime(t, wrapped, w, tps, eq, band);
+        }
+        if (farthest > Math.PI) {
+            final String over = String.format(Locale.ROOT, "it goes over the top (%d full turn(s)) before it swings;"
+                    + " angles of the band and the rest are taken modulo a turn", (int) Math.floor((farthest + Math.PI)
+                    / (2 * Math.PI)));
+            note = note.isEmpty() ? over : note + "; " + over;
         }
         final double end = settled ? settleTime : duration;
         int halfSwings = end > 0 ? 1 : 0;
@@ -138,12 +150,12 @@ public final class Forecaster {
         final double[] x = run.angles();
         final double last = t[t.length - 1];
         for (int i = x.length - 1; i >= 0 && t[i] >= last - period; i--) {
-            if (Math.abs(x[i] - eq) > band) {
+            if (Math.abs(wrap(x[i] - eq)) > band) {
                 return false;
             }
         }
         final List<TurningPoint> tps = run.turningPoints();
-        return tps.isEmpty() || Math.abs(tps.get(tps.size() - 1).angle() - eq) <= band;
+        return tps.isEmpty() || Math.abs(wrap(tps.get(tps.size() - 1).angle() - eq)) <= band;
     }
 
     /**
@@ -164,10 +176,10 @@ public final class Forecaster {
         double w0 = lastOut >= 0 ? w[lastOut] : 0;
         for (int k = tps.size() - 1; k >= 0; k--) {
             final TurningPoint p = tps.get(k);
-            if (Math.abs(p.angle() - eq) > band) {
+            if (Math.abs(wrap(p.angle() - eq)) > band) {
                 if (p.time() > t0) {
                     t0 = p.time();
-                    x0 = p.angle() - eq;
+                    x0 = wrap(p.angle() - eq);
                     w0 = 0;
                 }
                 break;
@@ -272,6 +284,15 @@ public final class Forecaster {
             return Optional.of(new AnglePass(a, time, omega, tip, 0.5 * inertia * omega * omega));
         }
         return Optional.empty();
+    }
+
+    /** An angle brought into (−π, π]: the same position of the body. */
+    private static double wrap(double a) {
+        if (a > -Math.PI && a <= Math.PI) {
+            return a;
+        }
+        final double r = Math.IEEEremainder(a, 2 * Math.PI);
+        return r <= -Math.PI ? r + 2 * Math.PI : r;
     }
 
     /** The cubic through the (up to) four samples around [t[i], t[i+1]], evaluated at {@code time}. */

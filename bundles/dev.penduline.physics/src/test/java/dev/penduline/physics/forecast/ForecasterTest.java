@@ -149,6 +149,18 @@ class ForecasterTest {
     }
 
     @Test
+    void aSwingThatGoesOverTheTopSettlesModuloATurn() {
+        // enough speed at release to pass the upright: ½ J0 ω0² > 2 m g Lc (energy balance), so the
+        // arm turns over before the Coulomb torque brings it back to swinging about the bottom
+        final double omega0 = 1.3 * Math.sqrt(4 * K / ARM.pivotInertia());
+        final SwingForecast f = new Forecaster(new SwingSimulator(ARM, FrictionTorques.coulombOnly(0.01 * K)))
+                .forecast(new ForecastRequest(0, omega0, 0.05, Double.NaN, Double.NaN));
+        assertTrue(f.settled(), f.note());
+        assertTrue(f.note().contains("over the top"), f.note());
+        assertTrue(Math.abs(f.restAngle()) <= f.restBand().upper() + 1e-12, "rest " + f.restAngle());
+    }
+
+    @Test
     void anAngleNeverReachedHasNoPassage() {
         final SwingForecast f = new Forecaster(new SwingSimulator(ARM, FrictionTorques.viscousOnly(0.5)))
                 .forecast(new ForecastRequest(0.2, 0, 0.01, 0.3, Double.NaN));
