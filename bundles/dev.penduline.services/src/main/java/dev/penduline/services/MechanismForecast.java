@@ -296,7 +296,7 @@ public final class MechanismForecast {
             StoredFit f = source.fit();
             double shift = changed.properties().pivotInertia() - mechanism.properties().pivotInertia();
             StoredFit shifted = new StoredFit(f.id(), f.name(), f.friction(), f.fittedInertia() + shift, f.parameters(),
-                    shiftedValues(f, shift), f.sigmas(), f.correlation(), f.stictionLower(), f.stictionUpper());
+                    shiftedValues(f, shift), f.sigmas(), f.correlation(), f.stictionLower(), f.stictionUpper(), f.stale());
             moved = new FrictionSource(shifted, source.friction(), source.description());
         }
         return forecast(changed, moved, request, draws, seed);

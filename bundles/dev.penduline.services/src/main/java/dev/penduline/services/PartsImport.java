@@ -5,15 +5,22 @@ import java.math.BigDecimal;
 import java.math.MathContext;
 import java.nio.file.NoSuchFileException;
 import java.nio.file.Path;
+import java.time.Instant;
+import java.time.temporal.ChronoUnit;
 import java.util.ArrayList;
 import java.util.List;
+import java.util.Locale;
 import java.util.Optional;
 import java.util.function.Consumer;
 
+import dev.penduline.model.FitResult;
 import dev.penduline.model.Mechanism;
+import dev.penduline.model.PendulineFactory;
+import dev.penduline.model.Setting;
 import dev.penduline.model.ShapeAxis;
 import dev.penduline.model.ShapeKind;
 import dev.penduline.model.TensorReference;
+import dev.penduline.model.adapt.MechanismAdapter;
 import dev.penduline.model.naming.NamedElements;
 import dev.penduline.physics.inertia.Axis;
 import dev.penduline.physics.inertia.Box;
@@ -98,9 +105,69 @@ public final class PartsImport {
      * @throws InputException when the list is bad, or the target exists or cannot be written
      */
     public static List<String> importFile(Path partsList, Path target, String name) throws InputException {
-        PartsList parts;
+        PartsList parts = read(partsList);
+        List<String> said = new ArrayList<>(parts.warnings());
+        write(name, parts, target, said::add);
+        return said;
+    }
+
+    /**
+     * Replaces the parts of an existing mechanism file with those of a parts list, keeping its
+     * sessions and stored fits; every fit stored before is marked stale (a {@code stale} setting
+     * saying when and how the calculated J0 moved), since it was made with the old parts. The
+     * change is made under the file's lock on its current content.
+     *
+     * @param partsList the parts-list CSV
+     * @param target    the mechanism file (must exist)
+     * @param when      when the parts were replaced (for the stale marks)
+     * @return the warnings of reading the list, what was done, and the notes of the save
+     * @throws InputException when the list is bad or the file cannot be read, changed or saved
+     */
+    public static List<String> replaceParts(Path partsList, Path target, Instant when) throws InputException {
+        PartsList parts = read(partsList);
+        List<String> said = new ArrayList<>(parts.warnings());
+        String stamp = when.truncatedTo(ChronoUnit.SECONDS).toString();
+        int marked = MechanismStore.update(target, m -> {
+            double before = calculatedInertia(m);
+            m.getParts().clear();
+            for (Part p : parts.parts()) {
+                add(m, p);
+            }
+            double after = calculatedInertia(m);
+            String why = String.format(Locale.ROOT, "parts replaced from %s at %s (calculated J0 %.6g -> %.6g"
+                    + " kg·m²): this fit was made with the parts before", Path.of(parts.source()).getFileName(), stamp,
+                    before, after);
+            for (FitResult r : m.getFitResults()) {
+                Setting stale = r.getSettings().stream().filter(x -> STALE.equals(x.getKey())).findFirst().orElse(null);
+                if (stale == null) {
+                    stale = PendulineFactory.eINSTANCE.createSetting();
+                    stale.setKey(STALE);
+                    r.getSettings().add(stale);
+                }
+                stale.setValue(why);
+            }
+            return m.getFitResults().size();
+        }, said::add);
+        said.add(String.format(Locale.ROOT, "replaced the parts of %s with the %d of %s; kept its sessions and"
+                + " fits%s", target, parts.parts().size(), partsList, marked == 0 ? "" : ", and marked the " + marked
+                + " stored fit(s) stale"));
+        return said;
+    }
+
+    /** The setting key that marks a stored fit made with parts that have changed since. */
+    public static final String STALE = "stale";
+
+    private static double calculatedInertia(Mechanism m) {
         try {
-            parts = new PartsListReader().read(partsList);
+            return MechanismAdapter.inertia(m).pivotInertia();
+        } catch (IllegalArgumentException e) {
+            return Double.NaN;
+        }
+    }
+
+    private static PartsList read(Path partsList) throws InputException {
+        try {
+            return new PartsListReader().read(partsList);
         } catch (NoSuchFileException e) {
             throw new InputException(partsList + ": no such file", e);
         } catch (IOException e) {
@@ -108,9 +175,6 @@ public final class PartsImport {
         } catch (RecordFormatException e) {
             throw new InputException(e.getMessage(), e);
         }
-        List<String> said = new ArrayList<>(parts.warnings());
-        write(name, parts, target, said::add);
-        return said;
     }
 
     private static void add(Mechanism m, Part p) {

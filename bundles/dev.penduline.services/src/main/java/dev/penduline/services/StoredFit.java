@@ -27,9 +27,11 @@ import dev.penduline.physics.motion.FrictionTorques;
  * @param correlation   their correlations (identity where none was stored)
  * @param stictionLower lower end of the static torque band of the stops (N·m), or NaN
  * @param stictionUpper upper end of that band (N·m), or NaN
+ * @param stale         why the fit is stale (its parts changed since), or empty
  */
 public record StoredFit(String id, String name, FrictionTorques friction, double fittedInertia, List<String> parameters,
-        double[] values, double[] sigmas, double[][] correlation, double stictionLower, double stictionUpper) {
+        double[] values, double[] sigmas, double[][] correlation, double stictionLower, double stictionUpper,
+        Optional<String> stale) {
 
     /** Copies the list so the record stays immutable. */
     public StoredFit {
@@ -112,7 +114,8 @@ public record StoredFit(String id, String name, FrictionTorques friction, double
         double ts = Double.isFinite(band[0]) ? Math.max(tc, 0.5 * (band[0] + band[1])) : tc;
         return new StoredFit(r.getId(), r.getName(), new FrictionTorques(b, tc, ts, c), j0, names,
                 values.stream().mapToDouble(Double::doubleValue).toArray(),
-                sigmas.stream().mapToDouble(Double::doubleValue).toArray(), correlation(r, names), band[0], band[1]);
+                sigmas.stream().mapToDouble(Double::doubleValue).toArray(), correlation(r, names), band[0], band[1],
+                Optional.ofNullable(setting(r, PartsImport.STALE)));
     }
 
     private static String setting(FitResult r, String key) {

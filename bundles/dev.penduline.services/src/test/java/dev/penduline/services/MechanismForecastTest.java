@@ -19,7 +19,7 @@ class MechanismForecastTest {
 
     private static StoredFit viscousFit(double b, double sigma) {
         return new StoredFit("f", "Fit f", FrictionTorques.viscousOnly(b), Double.NaN, List.of("b"), new double[] {b},
-                new double[] {sigma}, new double[][] {{1}}, Double.NaN, Double.NaN);
+                new double[] {sigma}, new double[][] {{1}}, Double.NaN, Double.NaN, java.util.Optional.empty());
     }
 
     @Test

@@ -115,4 +115,17 @@ final class FrictionOptions {
         }
         return FrictionSource.given(FrictionTorques.none(), "no friction (" + none + ")");
     }
+
+    /**
+     * Warns when the friction comes from a stored fit made with parts that have changed since.
+     *
+     * @param source the friction
+     * @param err    where the warning goes
+     */
+    static void warnIfStale(FrictionSource source, PrintWriter err) {
+        if (source.fit() != null && source.fit().stale().isPresent()) {
+            err.println("warning: stored fit " + source.fit().id() + " is stale: " + source.fit().stale().get()
+                    + "; fit again for friction that matches the parts");
+        }
+    }
 }

@@ -93,6 +93,7 @@ public final class PredictCommand implements Command {
         Arguments a = Arguments.parse(args, OPTIONS, Set.of("json", "no-fit"));
         MechanismSource mechanism = FrictionOptions.mechanism(a, err);
         MechanismForecast.FrictionSource source = FrictionOptions.resolve(a, true);
+        FrictionOptions.warnIfStale(source, err);
         ForecastRequest request;
         try {
             request = new ForecastRequest(Unit.DEGREE.toSi(a.requiredNumber("theta0-deg")),
@@ -302,6 +303,9 @@ public final class PredictCommand implements Command {
         MechanismForecast.Bands b = o.bands();
         j.beginObject();
         j.field("fit", o.source().fit() == null ? "options" : o.source().fit().id());
+        if (o.source().fit() != null && o.source().fit().stale().isPresent()) {
+            j.field("fit_stale", o.source().fit().stale().get());
+        }
         FrictionTorques f = o.source().friction();
         j.name("friction").beginObject().field("viscous_N_m_s_rad", f.viscous()).field("coulomb_N_m", f.coulomb())
                 .field("stiction_N_m", f.staticTorque()).field("drag_N_m_s2_rad2", f.drag()).endObject();

@@ -92,6 +92,7 @@ public final class SimulateCommand implements Command {
         double omega0 = Unit.DEG_PER_S.toSi(a.number("omega0-deg-s", 0));
         double band = Unit.DEGREE.toSi(a.number("band-deg", PredictCommand.DEFAULT_BAND_DEG));
         MechanismForecast.FrictionSource source = FrictionOptions.resolve(a, false);
+        FrictionOptions.warnIfStale(source, err);
         FrictionTorques friction = source.friction();
         MechanismProperties properties = MechanismForecast.properties(given, source);
         MechanismSource mechanism = given.withProperties(properties);
