@@ -90,6 +90,7 @@ public final class SwingRecordReader {
         final BufferedReader lines = new BufferedReader(Utf8Text.reader(hashed), 1 << 16);
         final BoundedLines bounded = new BoundedLines(lines, fileName, InputLimits.MAX_LINE_CHARS);
         final List<SampleLine> sniffed = new ArrayList<>();
+        StatedCounts stated = null;
         int lineNumber = 0;
         String line;
         while (sniffed.size() < SNIFF_LINES && (line = bounded.next()) != null) {
@@ -101,10 +102,13 @@ public final class SwingRecordReader {
             Utf8Text.check(line, lineNumber, !skipped, fileName);
             if (!skipped) {
                 sniffed.add(new SampleLine(line, lineNumber));
+            } else if (stated == null && sniffed.isEmpty()) {
+                stated = StatedCounts.find(line, lineNumber);
             }
         }
         final List<String> assumptions = new ArrayList<>();
-        final SwingRecordMapping mapping = LayoutSniffer.decide(sniffed, options, fileName, assumptions);
+        final SwingImportOptions withStated = StatedCounts.apply(stated, options, assumptions);
+        final SwingRecordMapping mapping = LayoutSniffer.decide(sniffed, withStated, fileName, assumptions);
         final int headerWidth = mapping.header()
                 ? DelimitedLine.split(sniffed.get(0).text(), mapping.delimiter(), fileName, sniffed.get(0).number()).size()
                 : 0;

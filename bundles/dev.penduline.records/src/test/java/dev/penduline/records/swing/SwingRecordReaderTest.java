@@ -109,6 +109,26 @@ class SwingRecordReaderTest {
     }
 
     @Test
+    void aRecordThatStatesItsCountsPerRevolutionIsReadWithThem() throws Exception {
+        final StringBuilder b = new StringBuilder("# rig 2, encoder 2048 counts/rev, quadrature decoded\ntime_us,counts\n");
+        for (int i = 0; i < 50; i++) {
+            b.append(i * 2000).append(',').append(1000 - i * i).append('\n');
+        }
+        final Path f = write("stated.csv", b.toString());
+        final SwingRecord r = read(f);
+        // one count is a 2048th of a turn: 2π/2048 rad
+        assertEquals(2 * Math.PI / 2048 * (1000 - 49 * 49), r.angles()[49], 1e-12);
+        assertTrue(String.join("\n", r.assumptions()).contains("2048 encoder counts per revolution, as the record's line 1"
+                + " says"), r.assumptions().toString());
+        final SwingRecord told = new SwingRecordReader().read(f, SwingImportOptions.defaults().withCountsPerRevolution(4096));
+        assertEquals(4096, told.mapping().countsPerRevolution(), "what the user says wins");
+        assertTrue(String.join("\n", told.assumptions()).contains("says 2048 counts per revolution; the 4096 given is used"),
+                told.assumptions().toString());
+        final Path other = write("other.csv", "# counts_per_rev = 1024\n" + b.substring(b.indexOf("time_us")));
+        assertEquals(1024, read(other).mapping().countsPerRevolution());
+    }
+
+    @Test
     void columnsChosenByNameOrPositionAndTheMappingReadsTheSameAgain() throws Exception {
         final StringBuilder b = new StringBuilder("sample,\"Time (ms)\",temp_c,pos_deg\n");
         for (int i = 0; i < 40; i++) {
