@@ -2,15 +2,28 @@ package dev.penduline.ui;
 
 import java.nio.file.Files;
 import java.nio.file.Path;
+import java.util.ArrayList;
+import java.util.Comparator;
+import java.util.List;
+import java.util.Optional;
 
+import org.eclipse.core.resources.IFile;
 import org.eclipse.core.resources.IProject;
 import org.eclipse.core.resources.IProjectDescription;
+import org.eclipse.core.resources.IResource;
 import org.eclipse.core.resources.IWorkspace;
 import org.eclipse.core.resources.IWorkspaceRoot;
 import org.eclipse.core.resources.ResourcesPlugin;
 import org.eclipse.core.runtime.CoreException;
 import org.eclipse.core.runtime.IPath;
 import org.eclipse.core.runtime.IProgressMonitor;
+import org.eclipse.e4.ui.model.application.ui.basic.MPart;
+import org.eclipse.e4.ui.workbench.modeling.EPartService;
+import org.eclipse.e4.ui.workbench.modeling.EPartService.PartState;
+import org.eclipse.ui.IWorkbenchWindow;
+
+import dev.penduline.ui.internal.MechanismSelection;
+import dev.penduline.ui.internal.ProjectFilesPart;
 
 /**
  * Opens a folder of the file system — a mechanism project kept next to the CAD in version
@@ -59,5 +72,43 @@ public final class ProjectFolders {
         project.create(description, monitor);
         project.open(monitor);
         return project;
+    }
+
+    /**
+     * The mechanism file a project opens on: the first {@code .penduline} file at its top level,
+     * by name, else the first one in a folder below it.
+     *
+     * @param project the open project
+     * @return the file, or empty when the project holds none
+     * @throws CoreException when the project's members cannot be listed
+     */
+    public static Optional<IFile> firstMechanismFile(IProject project) throws CoreException {
+        List<IFile> found = new ArrayList<>();
+        project.accept(resource -> {
+            if (resource instanceof IFile f && MechanismSelection.isMechanismFile(f)) {
+                found.add(f);
+            }
+            return true;
+        });
+        return found.stream().min(Comparator.<IFile>comparingInt(f -> f.getProjectRelativePath().segmentCount())
+                .thenComparing(f -> f.getProjectRelativePath().toString()));
+    }
+
+    /**
+     * Shows a resource in the Project Files view of a window and selects it, as if the user had
+     * clicked it, so that the views following the selection show it.
+     *
+     * @param window   the window, may be null (then nothing happens)
+     * @param resource the file or folder
+     */
+    public static void reveal(IWorkbenchWindow window, IResource resource) {
+        EPartService parts = window == null ? null : window.getService(EPartService.class);
+        if (parts == null) {
+            return;
+        }
+        MPart part = parts.showPart(PendulineViews.PROJECT_FILES, PartState.ACTIVATE);
+        if (part != null && part.getObject() instanceof ProjectFilesPart files) {
+            files.reveal(resource);
+        }
     }
 }

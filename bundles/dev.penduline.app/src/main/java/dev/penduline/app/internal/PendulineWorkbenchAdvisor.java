@@ -2,7 +2,11 @@ package dev.penduline.app.internal;
 
 import java.nio.file.Files;
 import java.nio.file.Path;
+import java.util.Optional;
 
+import org.eclipse.core.resources.IFile;
+import org.eclipse.core.resources.IProject;
+import org.eclipse.core.resources.IResource;
 import org.eclipse.core.resources.ResourcesPlugin;
 import org.eclipse.core.runtime.CoreException;
 import org.eclipse.core.runtime.ILog;
@@ -51,6 +55,7 @@ public class PendulineWorkbenchAdvisor extends WorkbenchAdvisor {
     @Override
     public void postStartup() {
         super.postStartup();
+        IProject first = null;
         for (String arg : Platform.getApplicationArgs()) {
             if (arg.startsWith("-")) {
                 continue;
@@ -58,12 +63,23 @@ public class PendulineWorkbenchAdvisor extends WorkbenchAdvisor {
             Path folder = Path.of(arg);
             if (Files.isDirectory(folder)) {
                 try {
-                    ProjectFolders.open(folder, new NullProgressMonitor());
+                    IProject project = ProjectFolders.open(folder, new NullProgressMonitor());
+                    first = first == null ? project : first;
                 } catch (CoreException e) {
                     ILog.of(getClass()).log(e.getStatus());
                 }
             } else {
                 ILog.of(getClass()).warn("not a folder, not opened: " + folder.toAbsolutePath());
+            }
+        }
+        if (first != null) {
+            // land on the folder's mechanism, not on "No mechanism selected"
+            try {
+                Optional<IFile> mechanism = ProjectFolders.firstMechanismFile(first);
+                IResource shown = mechanism.isPresent() ? mechanism.get() : first;
+                ProjectFolders.reveal(getWorkbenchConfigurer().getWorkbench().getActiveWorkbenchWindow(), shown);
+            } catch (CoreException e) {
+                ILog.of(getClass()).log(e.getStatus());
             }
         }
     }

@@ -36,4 +36,19 @@ class ProjectFoldersTest {
         project.delete(false, true, new NullProgressMonitor());
         assertArrayEquals(content, Files.readAllBytes(folder.resolve("parts.csv")), "files stay where they were");
     }
+
+    @Test
+    void aFolderOpensOnItsMechanismFile() throws Exception {
+        Path folder = Files.createDirectories(dir.resolve("hatch").resolve("records"));
+        Files.writeString(folder.resolve("old.penduline"), "<mechanism/>\n");
+        Files.writeString(folder.getParent().resolve("parts.csv"), "name,shape,mass_kg,x_m,y_m,z_m\n");
+        Files.writeString(folder.getParent().resolve("hatch.penduline"), "<mechanism/>\n");
+        IProject project = ProjectFolders.open(folder.getParent(), new NullProgressMonitor());
+        try {
+            assertEquals("hatch.penduline", ProjectFolders.firstMechanismFile(project).orElseThrow().getName(),
+                    "the top-level mechanism file comes before one in a folder");
+        } finally {
+            project.delete(false, true, new NullProgressMonitor());
+        }
+    }
 }

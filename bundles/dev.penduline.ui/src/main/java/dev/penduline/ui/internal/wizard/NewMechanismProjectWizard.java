@@ -7,19 +7,14 @@ import java.util.Optional;
 import org.eclipse.core.resources.IFile;
 import org.eclipse.core.runtime.CoreException;
 import org.eclipse.core.runtime.ILog;
-import org.eclipse.e4.ui.model.application.ui.basic.MPart;
-import org.eclipse.e4.ui.workbench.modeling.EPartService;
-import org.eclipse.e4.ui.workbench.modeling.EPartService.PartState;
 import org.eclipse.jface.dialogs.MessageDialog;
 import org.eclipse.jface.viewers.IStructuredSelection;
 import org.eclipse.jface.wizard.Wizard;
 import org.eclipse.ui.INewWizard;
 import org.eclipse.ui.IWorkbench;
-import org.eclipse.ui.IWorkbenchWindow;
 
 import dev.penduline.services.InputException;
-import dev.penduline.ui.PendulineViews;
-import dev.penduline.ui.internal.ProjectFilesPart;
+import dev.penduline.ui.ProjectFolders;
 
 /**
  * File › New › Mechanism Project: creates a workspace project with its mechanism file, empty or
@@ -84,15 +79,7 @@ public final class NewMechanismProjectWizard extends Wizard implements INewWizar
     }
 
     private void reveal(IFile file) {
-        IWorkbenchWindow window = workbench == null ? null : workbench.getActiveWorkbenchWindow();
-        EPartService parts = window == null ? null : window.getService(EPartService.class);
-        if (parts == null) {
-            return;
-        }
-        MPart part = parts.showPart(PendulineViews.PROJECT_FILES, PartState.ACTIVATE);
-        if (part != null && part.getObject() instanceof ProjectFilesPart files) {
-            files.reveal(file);
-        }
+        ProjectFolders.reveal(workbench == null ? null : workbench.getActiveWorkbenchWindow(), file);
     }
 
     /**
