@@ -50,8 +50,9 @@ final class PartLine {
         if (bad.isPresent()) {
             throw row.error(PartsColumn.NAME, bad.get());
         }
-        final String kind = row.text(PartsColumn.SHAPE).map(s -> s.toLowerCase(Locale.ROOT))
+        final String typed = row.text(PartsColumn.SHAPE)
                 .orElseThrow(() -> row.error(PartsColumn.SHAPE, "empty: use one of " + String.join(", ", SHAPES)));
+        final String kind = typed.toLowerCase(Locale.ROOT);
         final String why = "by a " + kind;
         final Set<PartsColumn> used = EnumSet.noneOf(PartsColumn.class);
         final PartShape shape = switch (kind) {
@@ -62,7 +63,7 @@ final class PartLine {
             case "sphere" -> new Sphere(positive(row, PartsColumn.RADIUS, why, used));
             case "ring" -> new ThinRing(positive(row, PartsColumn.RADIUS, why, used), axis(row, why, used));
             case "tensor" -> null;
-            default -> throw row.error(PartsColumn.SHAPE, "'" + kind + "' is not a shape: use one of "
+            default -> throw row.error(PartsColumn.SHAPE, "'" + typed + "' is not a shape: use one of "
                     + String.join(", ", SHAPES));
         };
         for (PartsColumn c : GEOMETRY) {

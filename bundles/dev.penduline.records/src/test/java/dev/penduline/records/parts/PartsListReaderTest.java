@@ -158,10 +158,13 @@ class PartsListReaderTest {
     }
 
     @Test
-    void shapeMistakesAreErrorsAtTheirLine() {
+    void shapeMistakesAreErrorsAtTheirLine() throws Exception {
         final String h = "name,shape,mass_kg,density_kg_m3,x_m,y_m,z_m,length_m,radius_m,inner_radius_m,axis,cutout,quantity\n";
         assertEquals("parts.csv:2: column 'shape': 'cube' is not a shape: use one of point, rod, box, cylinder,"
                 + " sphere, ring, tensor", failure(h + "a,cube,1,,0,0,0,,,,,,\n").getMessage());
+        // the shape is echoed as typed (a fuzz finding: it was shown lowercased, unlike the input)
+        assertTrue(failure(h + "a,Cube,1,,0,0,0,,,,,,\n").getMessage().contains("'Cube' is not a shape"));
+        assertEquals(1, read(h + "a,POINT,1,,0,-1,0,,,,,,\n").parts().size(), "shapes are not case-sensitive");
         assertEquals("parts.csv:2: column 'axis': empty, but it is needed by a rod (x, y or z)",
                 failure(h + "a,rod,1,,0,0,0,0.5,,,,,\n").getMessage());
         assertTrue(failure(h + "a,rod,1,,0,0,0,0.5,,,w,,\n").getMessage().contains("'w' is not an axis"));
