@@ -37,6 +37,15 @@ max_len=32768
 # guard of the regression run) is switched off and libFuzzer's per-input -timeout takes its place.
 settings="-Djazzer.max_duration=${seconds}s -Djunit.jupiter.execution.timeout.mode=disabled"
 settings+=" -Djazzer.internal.arg.0=fuzz -Djazzer.internal.arg.1=-max_len=$max_len -Djazzer.internal.arg.2=-timeout=10"
+# CI fuzzes from a fixed seed (FUZZ_SEED, default 1 there) so that a run of unchanged code explores
+# the same inputs first and a finding is reproducible; elsewhere libFuzzer picks a seed per run.
+fuzz_seed="${FUZZ_SEED:-}"
+if [ -z "$fuzz_seed" ] && [ "${CI:-}" = "true" ]; then
+  fuzz_seed=1
+fi
+if [ -n "$fuzz_seed" ]; then
+  settings+=" -Djazzer.internal.arg.3=-seed=$fuzz_seed"
+fi
 
 echo "fuzz.sh: building and running the seeds and committed findings (regression mode)" >&2
 if ! "$mvn" "${opts[@]}" -q clean test; then
