@@ -142,7 +142,7 @@ public final class MechanismForecast {
             throw new InputException(e.getMessage(), e);
         }
         List<String> notes = new ArrayList<>();
-        boolean fitSpread = fit != null && !allZero(fit.sigmas());
+        boolean fitSpread = fit != null && fit.hasUncertainty();
         boolean partsSpread = mechanism.hasTolerances();
         if (draws == 0 || !fitSpread && !partsSpread) {
             if (fit != null && !fitSpread && draws > 0) {
@@ -170,8 +170,7 @@ public final class MechanismForecast {
         int clamped = 0;
         Random stiction = new Random(seed ^ 0x5DEECE66DL);
         for (int n = 0; n < draws; n++) {
-            double[] friction = {source.friction().viscous(), source.friction().coulomb(), source.friction().drag()};
-            double ts = source.friction().staticTorque();
+            FrictionTorques torques = source.friction();
             double mass = base.mass();
             double lc = base.centroidDistance();
             double j0 = base.pivotInertia();
@@ -181,33 +180,13 @@ public final class MechanismForecast {
                 lc = d[1];
                 j0 = fitted ? j0 : d[2];
             }
-            boolean cut = false;
             if (sets != null) {
-                double[] set = sets[n];
-                for (int i = 0; i < set.length; i++) {
-                    String name = fit.parameters().get(i);
-                    double v = set[i];
-                    if ("J0".equals(name)) {
-                        if (fitted) {
-                            cut |= v < mass * lc * lc;
-                            j0 = v;
-                        }
-                        continue;
-                    }
-                    cut |= v < 0;
-                    int slot = switch (name) {
-                        case "b" -> 0;
-                        case "Tc" -> 1;
-                        default -> 2;
-                    };
-                    friction[slot] = Math.max(0, v);
-                }
-                ts = Double.isFinite(fit.stictionLower())
-                        ? fit.stictionLower() + stiction.nextDouble() * (fit.stictionUpper() - fit.stictionLower())
-                        : friction[1];
+                j0 = fit.inertiaOf(sets[n], j0);
+                double ts = Double.isFinite(fit.stictionLower())
+                        ? fit.stictionLower() + stiction.nextDouble() * (fit.stictionUpper() - fit.stictionLower()) : 0;
+                torques = fit.frictionOf(sets[n], ts);
+                clamped += fit.cutsFriction(sets[n]) || j0 < mass * lc * lc ? 1 : 0;
             }
-            clamped += cut ? 1 : 0;
-            FrictionTorques torques = new FrictionTorques(friction[0], friction[1], Math.max(ts, friction[1]), friction[2]);
             MechanismProperties props = new MechanismProperties(mass, lc, Math.max(j0, mass * lc * lc), 0, base.gravity(),
                     base.axisTilt());
             drawn.add(new Forecaster(new SwingSimulator(props, torques)).forecast(request));
@@ -314,15 +293,6 @@ public final class MechanismForecast {
 
     private static double minimumInertia(MechanismProperties p) {
         return p.mass() * p.centroidDistance() * p.centroidDistance();
-    }
-
-    private static boolean allZero(double[] values) {
-        for (double v : values) {
-            if (v != 0) {
-                return false;
-            }
-        }
-        return true;
     }
 
     private static Bands bands(SwingForecast n, List<SwingForecast> drawn) {

@@ -178,30 +178,16 @@ public final class SpecDesign {
     public static Answer design(MechanismProperties properties, StoredFit fit, ForecastRequest request, Spec spec, Term term,
             long seed) {
         final Answer nominal = design(properties, fit.friction(), request, spec, term);
-        if (Double.isNaN(nominal.added()) || allZero(fit.sigmas())) {
+        if (Double.isNaN(nominal.added()) || !fit.hasUncertainty()) {
             return nominal;
         }
         final double[][] sets = ParameterDraws.draw(fit.values(), fit.sigmas(), fit.correlation(), SENSITIVITY_DRAWS, seed);
         final List<Double> added = new ArrayList<>();
+        final double minimum = properties.mass() * properties.centroidDistance() * properties.centroidDistance();
         for (double[] set : sets) {
-            double b = fit.friction().viscous();
-            double tc = fit.friction().coulomb();
-            double c = fit.friction().drag();
-            double j0 = properties.pivotInertia();
-            for (int i = 0; i < set.length; i++) {
-                switch (fit.parameters().get(i)) {
-                    case "b" -> b = Math.max(0, set[i]);
-                    case "Tc" -> tc = Math.max(0, set[i]);
-                    case "c" -> c = Math.max(0, set[i]);
-                    case "J0" -> j0 = Double.isFinite(fit.fittedInertia()) ? set[i] : j0;
-                    default -> {
-                        // nuisance parameters are not read back
-                    }
-                }
-            }
-            final double minimum = properties.mass() * properties.centroidDistance() * properties.centroidDistance();
-            final MechanismProperties p = properties.withPivotInertia(Math.max(j0, minimum));
-            final FrictionTorques f = new FrictionTorques(b, tc, Math.max(tc, fit.friction().staticTorque()), c);
+            final MechanismProperties p = properties.withPivotInertia(Math.max(fit.inertiaOf(set, properties.pivotInertia()),
+                    minimum));
+            final FrictionTorques f = fit.frictionOf(set, fit.friction().staticTorque());
             final Answer a = design(p, f, request, spec, term);
             added.add(Double.isNaN(a.added()) ? Double.NaN : a.added());
         }
@@ -212,15 +198,6 @@ public final class SpecDesign {
 
     private static String name(Spec spec) {
         return spec.isSettle() ? "settle time (s)" : "speed passing the angle (rad/s)";
-    }
-
-    private static boolean allZero(double[] values) {
-        for (double v : values) {
-            if (v != 0) {
-                return false;
-            }
-        }
-        return true;
     }
 
     private static double solve(DoubleUnaryOperator figure, double target, double most) {

@@ -39,6 +39,72 @@ public record StoredFit(String id, String name, FrictionTorques friction, double
     }
 
     /**
+     * Whether any estimate carries an uncertainty, so that parameter sets can be drawn.
+     *
+     * @return true when a standard uncertainty is above zero
+     */
+    public boolean hasUncertainty() {
+        for (double s : sigmas) {
+            if (s > 0) {
+                return true;
+            }
+        }
+        return false;
+    }
+
+    /**
+     * The torques of a parameter set drawn in the order of {@link #parameters()}: terms not
+     * drawn keep the fit's value, negative draws are cut to zero.
+     *
+     * @param set          the drawn values
+     * @param staticTorque the static torque to use (raised to the Coulomb torque when below it)
+     * @return the torques
+     */
+    public FrictionTorques frictionOf(double[] set, double staticTorque) {
+        double b = friction.viscous();
+        double tc = friction.coulomb();
+        double c = friction.drag();
+        for (int i = 0; i < set.length; i++) {
+            switch (parameters.get(i)) {
+                case "b" -> b = Math.max(0, set[i]);
+                case "Tc" -> tc = Math.max(0, set[i]);
+                case "c" -> c = Math.max(0, set[i]);
+                default -> {
+                    // J0 is read by inertiaOf
+                }
+            }
+        }
+        return new FrictionTorques(b, tc, Math.max(staticTorque, tc), c);
+    }
+
+    /**
+     * Whether a drawn set has a friction term below zero (cut to zero by {@link #frictionOf}).
+     *
+     * @param set the drawn values
+     * @return true when b, Tc or c came out negative
+     */
+    public boolean cutsFriction(double[] set) {
+        for (int i = 0; i < set.length; i++) {
+            if (!"J0".equals(parameters.get(i)) && set[i] < 0) {
+                return true;
+            }
+        }
+        return false;
+    }
+
+    /**
+     * The pivot inertia of a drawn set: its J0 when the fit freed the inertia, else the fallback.
+     *
+     * @param set      the drawn values
+     * @param fallback the J0 to use otherwise (kg·m²)
+     * @return J0 (kg·m²), not yet limited to m·Lc²
+     */
+    public double inertiaOf(double[] set, double fallback) {
+        int i = parameters.indexOf("J0");
+        return i >= 0 && Double.isFinite(fittedInertia) ? set[i] : fallback;
+    }
+
+    /**
      * The most recently stored fit of a mechanism (the last in the file).
      *
      * @param mechanism the mechanism

@@ -91,4 +91,20 @@ class StoredFitTest {
         assertTrue(e.getMessage().contains("first, last"), e.getMessage());
         assertTrue(StoredFit.latest(F.createMechanism()).isEmpty());
     }
+
+    @Test
+    void aDrawnSetBecomesTorquesWithNegativeTermsCutAndJ0OnlyWhenFitted() throws Exception {
+        StoredFit s = StoredFit.of(fit("a"));
+        double[] set = {-0.001, 0.04, 0.63};
+        assertTrue(s.cutsFriction(set));
+        assertEquals(0, s.frictionOf(set, 0).viscous(), 0);
+        assertEquals(0.04, s.frictionOf(set, 0).coulomb(), 0);
+        assertEquals(0.04, s.frictionOf(set, 0).staticTorque(), 0, "the static torque is at least the Coulomb torque");
+        assertEquals(0.07, s.frictionOf(set, 0.07).staticTorque(), 0);
+        assertEquals(0.63, s.inertiaOf(set, 0.5), 0);
+        FitResult fixed = fit("b");
+        fixed.getSettings().get(0).setValue("fixed");
+        assertEquals(0.5, StoredFit.of(fixed).inertiaOf(set, 0.5), 0, "a fixed-inertia fit keeps the calculated J0");
+        assertTrue(s.hasUncertainty());
+    }
 }

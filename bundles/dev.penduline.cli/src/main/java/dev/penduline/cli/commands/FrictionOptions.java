@@ -8,6 +8,7 @@ import java.util.Optional;
 
 import dev.penduline.cli.Arguments;
 import dev.penduline.cli.UsageException;
+import dev.penduline.cli.json.JsonWriter;
 import dev.penduline.model.Mechanism;
 import dev.penduline.model.persistence.MechanismFormat;
 import dev.penduline.physics.motion.FrictionTorques;
@@ -127,5 +128,16 @@ final class FrictionOptions {
             err.println("warning: stored fit " + source.fit().id() + " is stale: " + source.fit().stale().get()
                     + "; fit again for friction that matches the parts");
         }
+    }
+
+    /**
+     * Writes the torques as the {@code friction} member of a JSON object, SI units in the keys.
+     *
+     * @param f the torques
+     * @param j the writer, inside an object
+     */
+    static void writeJson(FrictionTorques f, JsonWriter j) {
+        j.name("friction").beginObject().field("viscous_N_m_s_rad", f.viscous()).field("coulomb_N_m", f.coulomb())
+                .field("stiction_N_m", f.staticTorque()).field("drag_N_m_s2_rad2", f.drag()).endObject();
     }
 }

@@ -306,9 +306,7 @@ public final class PredictCommand implements Command {
         if (o.source().fit() != null && o.source().fit().stale().isPresent()) {
             j.field("fit_stale", o.source().fit().stale().get());
         }
-        FrictionTorques f = o.source().friction();
-        j.name("friction").beginObject().field("viscous_N_m_s_rad", f.viscous()).field("coulomb_N_m", f.coulomb())
-                .field("stiction_N_m", f.staticTorque()).field("drag_N_m_s2_rad2", f.drag()).endObject();
+        FrictionOptions.writeJson(o.source().friction(), j);
         j.field("pivot_inertia_kg_m2", o.pivotInertia()).field("pivot_inertia_source", o.inertiaSource());
         ForecastRequest r = o.request();
         j.field("theta0_deg", Unit.DEGREE.fromSi(r.releaseAngle()))

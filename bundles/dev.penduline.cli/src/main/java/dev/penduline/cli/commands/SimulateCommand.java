@@ -151,9 +151,7 @@ public final class SimulateCommand implements Command {
         SwingEnergy e = run.energy();
         j.beginObject();
         j.field("fit", source.fit() == null ? "none" : source.fit().id());
-        FrictionTorques f = source.friction();
-        j.name("friction").beginObject().field("viscous_N_m_s_rad", f.viscous()).field("coulomb_N_m", f.coulomb())
-                .field("stiction_N_m", f.staticTorque()).field("drag_N_m_s2_rad2", f.drag()).endObject();
+        FrictionOptions.writeJson(source.friction(), j);
         j.field("periods_s", run.periods());
         j.field("half_swing_durations_s", run.halfSwingDurations());
         j.name("turning_points").beginArray();

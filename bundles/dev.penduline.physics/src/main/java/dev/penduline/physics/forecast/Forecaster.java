@@ -64,14 +64,16 @@ public final class Forecaster {
         final double theta0 = m.equilibriumAngle() + request.releaseAngle();
         double duration = FIRST_PERIODS * period;
         SwingRun run;
+        boolean inside;
         while (true) {
             run = simulator.simulate(theta0, request.releaseVelocity(), duration, rate);
-            if (run.stopped() || endsInside(run, request.band(), period) || duration >= MAX_PERIODS * period) {
+            inside = !run.stopped() && endsInside(run, request.band(), period);
+            if (run.stopped() || inside || duration >= MAX_PERIODS * period) {
                 break;
             }
             duration = Math.min(4 * duration, MAX_PERIODS * period);
         }
-        return summarise(run, request, duration);
+        return summarise(run, request, duration, inside);
     }
 
     /**
@@ -84,10 +86,11 @@ public final class Forecaster {
      */
     public SwingForecast summarise(SwingRun run, ForecastRequest request) {
         final double[] t = run.times();
-        return summarise(run, request, t[t.length - 1]);
+        return summarise(run, request, t[t.length - 1],
+                !run.stopped() && endsInside(run, request.band(), simulator.mechanism().smallAnglePeriod()));
     }
 
-    private SwingForecast summarise(SwingRun run, ForecastRequest request, double duration) {
+    private SwingForecast summarise(SwingRun run, ForecastRequest request, double duration, boolean insideAtEnd) {
         final MechanismProperties m = simulator.mechanism();
         final double eq = m.equilibriumAngle();
         final double[] t = run.times();
@@ -115,7 +118,7 @@ public final class Forecaster {
             settleTime = Double.NaN;
             note = String.format(Locale.ROOT, "it comes to rest at %.4g° from the equilibrium, outside the ±%.4g° band:"
                     + " static friction holds it there", Math.toDegrees(restAngle), Math.toDegrees(band));
-        } else if (!run.stopped() && !endsInside(run, band, m.smallAnglePeriod())) {
+        } else if (!run.stopped() && !insideAtEnd) {
             settled = false;
             settleTime = Double.NaN;
             note = String.format(Locale.ROOT, "it is still outside the ±%.4g° band at the end of the %.4g s"
