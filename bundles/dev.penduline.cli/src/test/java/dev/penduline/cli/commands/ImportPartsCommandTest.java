@@ -3,8 +3,6 @@ package dev.penduline.cli.commands;
 import static org.junit.jupiter.api.Assertions.assertEquals;
 import static org.junit.jupiter.api.Assertions.assertTrue;
 
-import java.io.PrintWriter;
-import java.io.StringWriter;
 import java.nio.file.Files;
 import java.nio.file.Path;
 import java.util.regex.Matcher;
@@ -14,7 +12,6 @@ import org.junit.jupiter.api.Test;
 import org.junit.jupiter.api.io.TempDir;
 
 import dev.penduline.cli.ExitCode;
-import dev.penduline.cli.PendulineCommandLine;
 
 class ImportPartsCommandTest {
 
@@ -23,11 +20,10 @@ class ImportPartsCommandTest {
     @TempDir
     Path dir;
 
-    private final StringWriter out = new StringWriter();
-    private final StringWriter err = new StringWriter();
+    private final CommandHarness cli = new CommandHarness();
 
     private ExitCode run(String... args) {
-        return new PendulineCommandLine().run(args, new PrintWriter(out, true), new PrintWriter(err, true));
+        return cli.run(args);
     }
 
     private static int count(String text, String tag) {
@@ -45,26 +41,26 @@ class ImportPartsCommandTest {
         String before = Files.readString(file);
         // a point mass m = 2 kg at r = 1 m: J0 = m r² = 2 kg·m² (parallel-axis theorem)
         Path parts = Files.writeString(dir.resolve("new.csv"), "name,shape,mass_kg,x_m,y_m,z_m\nbob,point,2,0,-1,0\n");
-        assertEquals(ExitCode.OK, run("import-parts", parts.toString(), "--into", file.toString()), err.toString());
+        assertEquals(ExitCode.OK, run("import-parts", parts.toString(), "--into", file.toString()), cli.err());
         String after = Files.readString(file);
         assertEquals(1, count(after, "part"));
         assertEquals(count(before, "session"), count(after, "session"));
         assertEquals(count(before, "fitResult"), count(after, "fitResult"));
         assertTrue(after.contains("<key>stale</key>"), after);
-        assertTrue(out.toString().contains("marked the"), out.toString());
-        out.getBuffer().setLength(0);
-        assertEquals(ExitCode.OK, run("inertia", file.toString(), "--json"), err.toString());
-        assertTrue(out.toString().contains("\"pivot_inertia_kg_m2\": 2"), out.toString());
-        out.getBuffer().setLength(0);
+        assertTrue(cli.out().contains("marked the"), cli.out());
+        cli.clear();
+        assertEquals(ExitCode.OK, run("inertia", file.toString(), "--json"), cli.err());
+        assertTrue(cli.out().contains("\"pivot_inertia_kg_m2\": 2"), cli.out());
+        cli.clear();
         assertEquals(ExitCode.OK, run("predict", file.toString(), "--theta0-deg", "10", "--draws", "0", "--json"),
-                err.toString());
-        assertTrue(err.toString().contains("is stale: parts replaced from new.csv"), err.toString());
-        assertTrue(out.toString().contains("\"fit_stale\""), out.toString());
+                cli.err());
+        assertTrue(cli.err().contains("is stale: parts replaced from new.csv"), cli.err());
+        assertTrue(cli.out().contains("\"fit_stale\""), cli.out());
     }
 
     @Test
     void toAndIntoTogetherAreRefused() {
         assertEquals(ExitCode.USAGE_OR_INPUT, run("import-parts", "a.csv", "--to", "x.penduline", "--into", "y.penduline"));
-        assertTrue(err.toString().contains("either --to"), err.toString());
+        assertTrue(cli.err().contains("either --to"), cli.err());
     }
 }

@@ -3,8 +3,6 @@ package dev.penduline.cli.commands;
 import static org.junit.jupiter.api.Assertions.assertEquals;
 import static org.junit.jupiter.api.Assertions.assertTrue;
 
-import java.io.PrintWriter;
-import java.io.StringWriter;
 import java.nio.file.Path;
 import java.util.regex.Matcher;
 import java.util.regex.Pattern;
@@ -12,17 +10,15 @@ import java.util.regex.Pattern;
 import org.junit.jupiter.api.Test;
 
 import dev.penduline.cli.ExitCode;
-import dev.penduline.cli.PendulineCommandLine;
 
 class PredictCommandTest {
 
     private static final Path HATCH = Path.of("..", "..", "samples", "inspection-hatch", "hatch.penduline");
 
-    private final StringWriter out = new StringWriter();
-    private final StringWriter err = new StringWriter();
+    private final CommandHarness cli = new CommandHarness();
 
     private ExitCode run(String... args) {
-        return new PendulineCommandLine().run(args, new PrintWriter(out, true), new PrintWriter(err, true));
+        return cli.run(args);
     }
 
     private static double number(String json, String path) {
@@ -37,8 +33,8 @@ class PredictCommandTest {
         // ½ m L² ω² = m g L (1 − cos 60°), so ω = sqrt(g) = 3.13156 rad/s and the bob moves at
         // 3.13156 m/s (conservation of energy)
         assertEquals(ExitCode.OK, run("predict", "--mass", "1", "--centroid-distance", "1", "--pivot-inertia", "1",
-                "--viscous", "0", "--theta0-deg", "60", "--at-deg", "0", "--radius-m", "1", "--json"), err.toString());
-        String json = out.toString();
+                "--viscous", "0", "--theta0-deg", "60", "--at-deg", "0", "--radius-m", "1", "--json"), cli.err());
+        String json = cli.out();
         assertEquals("options", json.replaceAll("(?s).*\"fit\": \"([^\"]*)\".*", "$1"));
         assertEquals(-Math.sqrt(9.80665), number(json, "\"angular_velocity_rad_s\": \\{\\s*\"value\""), 1e-6);
         assertEquals(Math.sqrt(9.80665), number(json, "\"tip_speed_m_s\": \\{\\s*\"value\""), 1e-4);
@@ -49,8 +45,8 @@ class PredictCommandTest {
     @Test
     void theStoredFitIsUsedAndEveryFigureHasABand() {
         assertEquals(ExitCode.OK, run("predict", HATCH.toString(), "--theta0-deg", "40", "--at-deg", "0",
-                "--draws", "20", "--json"), err.toString());
-        String json = out.toString();
+                "--draws", "20", "--json"), cli.err());
+        String json = cli.out();
         assertTrue(json.contains("\"fit\": \"fit-"), json);
         for (String key : new String[] {"settle_time_s", "half_swings", "peak_angular_velocity_rad_s", "peak_time_s",
                 "max_overshoot_deg", "kinetic_energy_J"}) {
@@ -66,8 +62,8 @@ class PredictCommandTest {
 
     @Test
     void theReportCarriesTheHazardCaution() {
-        assertEquals(ExitCode.OK, run("predict", HATCH.toString(), "--theta0-deg", "30", "--draws", "0"), err.toString());
-        String text = out.toString();
+        assertEquals(ExitCode.OK, run("predict", HATCH.toString(), "--theta0-deg", "30", "--draws", "0"), cli.err());
+        String text = cli.out();
         assertTrue(text.contains("friction: stored fit fit-"), text);
         assertTrue(text.contains("settles inside the band after"), text);
         assertTrue(text.contains("never shows that a mechanism is safe"), text);
@@ -77,20 +73,20 @@ class PredictCommandTest {
     void withoutAStoredFitOrFrictionTheUserIsToldWhatToGive() {
         assertEquals(ExitCode.USAGE_OR_INPUT, run("predict", "--mass", "1", "--centroid-distance", "1",
                 "--pivot-inertia", "1", "--theta0-deg", "20"));
-        assertTrue(err.toString().contains("no stored fit to use"), err.toString());
+        assertTrue(cli.err().contains("no stored fit to use"), cli.err());
     }
 
     @Test
     void aRadiusNeedsAnAngle() {
         assertEquals(ExitCode.USAGE_OR_INPUT, run("predict", "--mass", "1", "--centroid-distance", "1",
                 "--pivot-inertia", "1", "--coulomb", "0.1", "--theta0-deg", "20", "--radius-m", "0.3"));
-        assertTrue(err.toString().contains("--at-deg"), err.toString());
+        assertTrue(cli.err().contains("--at-deg"), cli.err());
     }
 
     @Test
     void anUnknownFitIsNamedWithTheOnesThereAre() {
         assertEquals(ExitCode.USAGE_OR_INPUT, run("predict", HATCH.toString(), "--theta0-deg", "20", "--fit", "nope"));
-        assertTrue(err.toString().contains("no stored fit 'nope'"), err.toString());
+        assertTrue(cli.err().contains("no stored fit 'nope'"), cli.err());
     }
 
     @Test
@@ -98,16 +94,16 @@ class PredictCommandTest {
         String[] arm = {"--mass", "2", "--centroid-distance", "0.4", "--pivot-inertia", "0.5"};
         String[] args = concat(concat(new String[] {"predict"}, arm), new String[] {"--viscous", "0.01", "--theta0-deg",
             "17", "--band-deg", "0.5", "--settle-within-s", "8", "--json"});
-        assertEquals(ExitCode.OK, run(args), err.toString());
-        String json = out.toString();
+        assertEquals(ExitCode.OK, run(args), cli.err());
+        String json = cli.out();
         assertTrue(json.contains("\"meets\": true"), json);
         double total = number(json, "\"total\"");
         assertTrue(total > 0.01, json);
-        out.getBuffer().setLength(0);
+        cli.clear();
         // the simulate command, told the found damping, settles inside ±0.5° within the 8 s asked for
         assertEquals(ExitCode.OK, run(concat(concat(new String[] {"simulate"}, arm), new String[] {"--viscous",
-            Double.toString(total), "--theta0-deg", "17", "--band-deg", "0.5", "--duration", "20", "--json"})), err.toString());
-        double settle = number(out.toString(), "\"settle_time_s\"");
+            Double.toString(total), "--theta0-deg", "17", "--band-deg", "0.5", "--duration", "20", "--json"})), cli.err());
+        double settle = number(cli.out(), "\"settle_time_s\"");
         // (to the root finder's accuracy: the answer is the smallest damping that meets the spec)
         assertTrue(settle <= 8 + 1e-6 && settle > 7, "settles after " + settle);
     }
@@ -116,7 +112,7 @@ class PredictCommandTest {
     void aSpeedSpecMustBeAnAngleAndASpeed() {
         assertEquals(ExitCode.USAGE_OR_INPUT, run("predict", "--mass", "1", "--centroid-distance", "1", "--pivot-inertia", "1",
                 "--coulomb", "0.1", "--theta0-deg", "20", "--max-speed-at-deg", "fast"));
-        assertTrue(err.toString().contains("ANGLE:RAD_S"), err.toString());
+        assertTrue(cli.err().contains("ANGLE:RAD_S"), cli.err());
     }
 
     @Test
@@ -125,16 +121,16 @@ class PredictCommandTest {
         // from 1 m to 0.5 m shortens the period by the factor √2
         Path parts = java.nio.file.Files.writeString(dir.resolve("bob.csv"), "name,shape,mass_kg,x_m,y_m,z_m\nbob,point,2,0,-1,0\n");
         assertEquals(ExitCode.OK, run("predict", parts.toString(), "--viscous", "0.05", "--theta0-deg", "5",
-                "--set", "bob.y=-500mm", "--json"), err.toString());
-        String json = out.toString();
+                "--set", "bob.y=-500mm", "--json"), cli.err());
+        String json = cli.out();
         double g = 9.80665;
         assertEquals(2 * Math.PI * Math.sqrt(1 / g), number(json, "\"baseline\": \\{[^}]*\"small_angle_period_s\""), 1e-9);
         assertEquals(2 * Math.PI * Math.sqrt(0.5 / g), number(json, "\"changed\": \\{[^}]*\"small_angle_period_s\""), 1e-9);
         assertEquals(2 * 0.25, number(json, "\"changed\": \\{[^}]*\"pivot_inertia_kg_m2\""), 1e-12);
-        out.getBuffer().setLength(0);
+        cli.clear();
         assertEquals(ExitCode.OK, run("predict", parts.toString(), "--viscous", "0.05", "--theta0-deg", "5",
-                "--set", "bob.y=-500mm"), err.toString());
-        assertTrue(out.toString().contains("What-if: bob.y=-500mm"), out.toString());
+                "--set", "bob.y=-500mm"), cli.err());
+        assertTrue(cli.out().contains("What-if: bob.y=-500mm"), cli.out());
     }
 
     private static String[] concat(String[] a, String[] b) {
