@@ -4,7 +4,6 @@ import static org.junit.jupiter.api.Assertions.assertEquals;
 import static org.junit.jupiter.api.Assertions.assertFalse;
 import static org.junit.jupiter.api.Assertions.assertNotNull;
 import static org.junit.jupiter.api.Assertions.assertTrue;
-import static org.junit.jupiter.api.Assertions.fail;
 
 import java.math.BigDecimal;
 import java.nio.charset.StandardCharsets;
@@ -20,7 +19,6 @@ import org.eclipse.e4.ui.model.application.ui.basic.MPart;
 import org.eclipse.e4.ui.workbench.modeling.EPartService;
 import org.eclipse.e4.ui.workbench.modeling.EPartService.PartState;
 import org.eclipse.swt.SWT;
-import org.eclipse.swt.widgets.Display;
 import org.eclipse.swt.widgets.Event;
 import org.eclipse.swt.widgets.Shell;
 import org.eclipse.swt.widgets.Table;
@@ -69,15 +67,15 @@ final class FrictionViewScenario {
             """;
 
     private final Shell shell;
-    private final Display display;
     private final EPartService parts;
     private final Screenshots shots;
+    private final WorkbenchDriver driver;
 
     FrictionViewScenario(IWorkbenchWindow window, Screenshots shots) {
         this.shell = window.getShell();
-        this.display = shell.getDisplay();
         this.parts = window.getService(EPartService.class);
         this.shots = shots;
+        this.driver = new WorkbenchDriver(window, shots);
     }
 
     void run() throws Exception {
@@ -193,27 +191,10 @@ final class FrictionViewScenario {
     }
 
     private <T> T waitFor(String what, long nanos, Supplier<T> probe) throws InterruptedException {
-        long end = System.nanoTime() + nanos;
-        while (true) {
-            T value = probe.get();
-            if (value != null) {
-                flush();
-                return value;
-            }
-            if (System.nanoTime() > end) {
-                fail("waited " + nanos / 1_000_000_000L + " s for " + what);
-            }
-            if (!display.readAndDispatch()) {
-                Thread.sleep(10);
-            }
-        }
+        return driver.waitFor(what, nanos, probe);
     }
 
     private void flush() {
-        for (int i = 0; i < 50; i++) {
-            while (display.readAndDispatch()) {
-                // paint what the last result changed before a screenshot
-            }
-        }
+        driver.flush();
     }
 }

@@ -4,7 +4,6 @@ import static org.junit.jupiter.api.Assertions.assertEquals;
 import static org.junit.jupiter.api.Assertions.assertFalse;
 import static org.junit.jupiter.api.Assertions.assertNotNull;
 import static org.junit.jupiter.api.Assertions.assertTrue;
-import static org.junit.jupiter.api.Assertions.fail;
 
 import java.io.ByteArrayInputStream;
 import java.nio.charset.StandardCharsets;
@@ -21,7 +20,6 @@ import org.eclipse.e4.ui.workbench.modeling.EPartService;
 import org.eclipse.e4.ui.workbench.modeling.EPartService.PartState;
 import org.eclipse.jface.viewers.StructuredSelection;
 import org.eclipse.jface.wizard.WizardDialog;
-import org.eclipse.swt.widgets.Display;
 import org.eclipse.swt.widgets.Shell;
 import org.eclipse.swtchart.ISeries;
 import org.eclipse.ui.IWorkbenchWindow;
@@ -73,16 +71,16 @@ final class MechanismViewsScenario {
 
     private final IWorkbenchWindow window;
     private final Shell shell;
-    private final Display display;
     private final EPartService parts;
     private final Screenshots shots;
+    private final WorkbenchDriver driver;
 
     MechanismViewsScenario(IWorkbenchWindow window, Screenshots shots) {
         this.window = window;
         this.shell = window.getShell();
-        this.display = shell.getDisplay();
         this.parts = window.getService(EPartService.class);
         this.shots = shots;
+        this.driver = new WorkbenchDriver(window, shots);
     }
 
     void run() throws Exception {
@@ -218,27 +216,10 @@ final class MechanismViewsScenario {
     }
 
     private <T> T waitFor(String what, Supplier<T> probe) throws InterruptedException {
-        long end = System.nanoTime() + WAIT_NANOS;
-        while (true) {
-            T value = probe.get();
-            if (value != null) {
-                flush();
-                return value;
-            }
-            if (System.nanoTime() > end) {
-                fail("waited 20 s for " + what);
-            }
-            if (!display.readAndDispatch()) {
-                Thread.sleep(10);
-            }
-        }
+        return driver.waitFor(what, probe);
     }
 
     private void flush() {
-        for (int i = 0; i < 50; i++) {
-            while (display.readAndDispatch()) {
-                // paint what the last result changed before a screenshot
-            }
-        }
+        driver.flush();
     }
 }
