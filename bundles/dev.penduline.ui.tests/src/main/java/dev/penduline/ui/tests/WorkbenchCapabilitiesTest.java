@@ -42,6 +42,7 @@ class WorkbenchCapabilitiesTest {
         c.put("windowAndViews", WorkbenchCapabilitiesTest::windowAndViews);
         c.put("mechanismViews", d -> new MechanismViewsScenario(d.window(), d.shots()).run());
         c.put("frictionView", d -> new FrictionViewScenario(d.window(), d.shots()).run());
+        c.put("mechanismDocument", new MechanismDocumentCapability());
         return c;
     }
 

@@ -1,0 +1,88 @@
+package dev.penduline.ui.tests;
+
+import static org.junit.jupiter.api.Assertions.assertEquals;
+import static org.junit.jupiter.api.Assertions.assertFalse;
+import static org.junit.jupiter.api.Assertions.assertThrows;
+import static org.junit.jupiter.api.Assertions.assertTrue;
+
+import java.nio.charset.StandardCharsets;
+import java.nio.file.Files;
+import java.nio.file.Path;
+import java.util.ArrayList;
+import java.util.List;
+import java.util.Optional;
+
+import org.eclipse.core.resources.IFile;
+import org.eclipse.emf.edit.command.SetCommand;
+
+import dev.penduline.model.Mechanism;
+import dev.penduline.model.Part;
+import dev.penduline.model.PendulinePackage;
+import dev.penduline.services.InputException;
+import dev.penduline.services.MechanismLoader;
+import dev.penduline.services.MechanismStore;
+import dev.penduline.ui.internal.document.MechanismDocument;
+import dev.penduline.ui.internal.wizard.MechanismProjectCreation;
+
+/**
+ * The shared mechanism document in the live workbench: a change is one undoable command (dirty,
+ * undo, redo), a save reaches the file, a save over a file another writer changed is refused
+ * and keeps that writer's change, and a revert reads it back.
+ */
+final class MechanismDocumentCapability implements Capability {
+
+    /** INVENTED test mechanism: a rod with a disc at its tip. */
+    private static final String PARTS = """
+            # INVENTED test data for the workbench test, not a real product.
+            name,shape,mass_kg,x_mm,y_mm,z_mm,length_mm,radius_mm,inner_radius_mm,axis
+            arm,rod,2,0,-400,0,800,,,y
+            bob,cylinder,3,0,-900,0,20,100,0,z
+            """;
+
+    @Override
+    public void run(WorkbenchDriver driver) throws Exception {
+        Path scratch = Files.createTempDirectory("penduline-document-test");
+        Path csv = Files.writeString(scratch.resolve("document-arm-parts.csv"), PARTS, StandardCharsets.UTF_8);
+        IFile file = MechanismProjectCreation.create("document-arm", "Document arm (invented)", Optional.of(csv), null)
+                .mechanismFile();
+        MechanismDocument doc = MechanismDocument.read(file);
+        List<String> heard = new ArrayList<>();
+        doc.addListener(() -> heard.add("change"));
+        assertFalse(doc.isDirty(), "a document just read is clean");
+        Part arm = doc.mechanism().getParts().get(0);
+        assertEquals(2.0, arm.getMass(), "arm mass as read");
+
+        assertTrue(doc.execute(SetCommand.create(doc.domain(), arm, PendulinePackage.Literals.PART__MASS, 4.0)));
+        assertEquals(4.0, arm.getMass(), "after the change");
+        assertTrue(doc.isDirty(), "a change makes the document dirty");
+        assertFalse(heard.isEmpty(), "listeners hear the change");
+        doc.commandStack().undo();
+        assertEquals(2.0, arm.getMass(), "after undo");
+        assertFalse(doc.isDirty(), "undo back to the saved state is clean");
+        doc.commandStack().redo();
+        assertEquals(4.0, arm.getMass(), "after redo");
+
+        doc.save(false, note -> { });
+        assertFalse(doc.isDirty(), "clean after save");
+        assertEquals(4.0, MechanismLoader.readMechanism(doc.path()).getParts().get(0).getMass(), "mass in the file");
+
+        // Another writer (the command line, say) changes the file meanwhile.
+        MechanismStore.update(doc.path(), m -> {
+            m.setDescription("changed by another writer");
+            return null;
+        }, note -> { });
+        assertTrue(doc.changedOnDisk(), "the other writer's change is noticed");
+        doc.execute(SetCommand.create(doc.domain(), arm, PendulinePackage.Literals.PART__MASS, 5.0));
+        InputException refused = assertThrows(InputException.class, () -> doc.save(false, note -> { }));
+        assertTrue(refused.getMessage().contains("changed on disk"), refused.getMessage());
+        Mechanism onDisk = MechanismLoader.readMechanism(doc.path());
+        assertEquals("changed by another writer", onDisk.getDescription(), "the refused save wrote nothing");
+        assertEquals(4.0, onDisk.getParts().get(0).getMass(), "the refused save wrote nothing");
+
+        doc.reload();
+        assertFalse(doc.isDirty(), "clean after revert");
+        assertFalse(doc.commandStack().canUndo(), "revert drops the undo history");
+        assertEquals("changed by another writer", doc.mechanism().getDescription(), "revert reads the new content");
+        assertEquals(4.0, doc.mechanism().getParts().get(0).getMass(), "revert reads the new content");
+    }
+}
