@@ -90,10 +90,22 @@ public final class MechanismLoader {
      * @throws InputException when the file is missing, malformed or fails validation
      */
     public MechanismSource loadMechanismFile(Path file) throws InputException {
-        Mechanism mechanism = readMechanism(file);
+        return loadMechanism(readMechanism(file), file.toString());
+    }
+
+    /**
+     * Validates a mechanism already in memory (the workbench's live model, say) and computes
+     * its inertia, as {@link #loadMechanismFile(Path)} does for a file.
+     *
+     * @param mechanism the mechanism
+     * @param where     where it came from, for the messages (its file)
+     * @return the mechanism with its inertia breakdown
+     * @throws InputException when it fails validation or is physically inconsistent
+     */
+    public MechanismSource loadMechanism(Mechanism mechanism, String where) throws InputException {
         List<String> errors = MechanismValidation.errors(mechanism);
         if (!errors.isEmpty()) {
-            throw new InputException(file + ": " + errors.size() + " problem(s) to fix:\n  "
+            throw new InputException(where + ": " + errors.size() + " problem(s) to fix:\n  "
                     + String.join("\n  ", errors));
         }
         List<String> warnings = new ArrayList<>(MechanismValidation.problems(mechanism));
@@ -107,10 +119,10 @@ public final class MechanismLoader {
             }
             parts = MechanismAdapter.parts(mechanism);
         } catch (IllegalArgumentException e) {
-            throw new InputException(file + ": " + e.getMessage(), e);
+            throw new InputException(where + ": " + e.getMessage(), e);
         }
-        String label = mechanism.getName() == null || mechanism.getName().isBlank() ? file.toString()
-                : mechanism.getName() + " (" + file + ")";
+        String label = mechanism.getName() == null || mechanism.getName().isBlank() ? where
+                : mechanism.getName() + " (" + where + ")";
         return new MechanismLoader(frame).summarise(label, parts, warnings);
     }
 

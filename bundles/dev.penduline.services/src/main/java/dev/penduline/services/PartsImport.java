@@ -105,7 +105,7 @@ public final class PartsImport {
      * @throws InputException when the list is bad, or the target exists or cannot be written
      */
     public static List<String> importFile(Path partsList, Path target, String name) throws InputException {
-        PartsList parts = read(partsList);
+        PartsList parts = readPartsList(partsList);
         List<String> said = new ArrayList<>(parts.warnings());
         write(name, parts, target, said::add);
         return said;
@@ -124,7 +124,7 @@ public final class PartsImport {
      * @throws InputException when the list is bad or the file cannot be read, changed or saved
      */
     public static List<String> replaceParts(Path partsList, Path target, Instant when) throws InputException {
-        PartsList parts = read(partsList);
+        PartsList parts = readPartsList(partsList);
         List<String> said = new ArrayList<>(parts.warnings());
         String stamp = when.truncatedTo(ChronoUnit.SECONDS).toString();
         int marked = MechanismStore.update(target, m -> {
@@ -137,16 +137,7 @@ public final class PartsImport {
             String why = String.format(Locale.ROOT, "parts replaced from %s at %s (calculated J0 %.6g -> %.6g"
                     + " kg·m²): this fit was made with the parts before", Path.of(parts.source()).getFileName(), stamp,
                     before, after);
-            for (FitResult r : m.getFitResults()) {
-                Setting stale = r.getSettings().stream().filter(x -> STALE.equals(x.getKey())).findFirst().orElse(null);
-                if (stale == null) {
-                    stale = PendulineFactory.eINSTANCE.createSetting();
-                    stale.setKey(STALE);
-                    r.getSettings().add(stale);
-                }
-                stale.setValue(why);
-            }
-            return m.getFitResults().size();
+            return markFitsStale(m, why);
         }, said::add);
         said.add(String.format(Locale.ROOT, "replaced the parts of %s with the %d of %s; kept its sessions and"
                 + " fits%s", target, parts.parts().size(), partsList, marked == 0 ? "" : ", and marked the " + marked
@@ -157,7 +148,62 @@ public final class PartsImport {
     /** The setting key that marks a stored fit made with parts that have changed since. */
     public static final String STALE = "stale";
 
-    private static double calculatedInertia(Mechanism m) {
+    /**
+     * Marks every fit stored in a mechanism as stale (its {@code stale} setting, added or
+     * replaced), because the parts it was made with have changed.
+     *
+     * @param m   the mechanism
+     * @param why what changed and when, as the setting's value
+     * @return how many fits were marked
+     */
+    public static int markFitsStale(Mechanism m, String why) {
+        return markFitsStale(m, why, false);
+    }
+
+    /**
+     * Marks the fits stored in a mechanism as stale.
+     *
+     * @param m            the mechanism
+     * @param why          what changed and when, as the setting's value
+     * @param keepEarlier  leave a fit that is stale already with its first reason (the change that
+     *                     first left it behind), instead of replacing it
+     * @return how many fits were marked now
+     */
+    public static int markFitsStale(Mechanism m, String why, boolean keepEarlier) {
+        int marked = 0;
+        for (FitResult r : m.getFitResults()) {
+            Setting stale = r.getSettings().stream().filter(x -> STALE.equals(x.getKey())).findFirst().orElse(null);
+            if (stale != null && keepEarlier) {
+                continue;
+            }
+            marked++;
+            if (stale == null) {
+                stale = PendulineFactory.eINSTANCE.createSetting();
+                stale.setKey(STALE);
+                r.getSettings().add(stale);
+            }
+            stale.setValue(why);
+        }
+        return marked;
+    }
+
+    /**
+     * Why a stored fit is stale, if it is.
+     *
+     * @param fit the stored fit
+     * @return its {@code stale} setting's text, empty when the fit is current
+     */
+    public static Optional<String> staleReason(FitResult fit) {
+        return fit.getSettings().stream().filter(x -> STALE.equals(x.getKey())).map(Setting::getValue).findFirst();
+    }
+
+    /**
+     * The pivot inertia the mechanism's parts give now.
+     *
+     * @param m the mechanism
+     * @return J0 (kg·m²), NaN when the parts cannot be computed
+     */
+    public static double calculatedInertia(Mechanism m) {
         try {
             return MechanismAdapter.inertia(m).pivotInertia();
         } catch (IllegalArgumentException e) {
@@ -165,7 +211,14 @@ public final class PartsImport {
         }
     }
 
-    private static PartsList read(Path partsList) throws InputException {
+    /**
+     * Reads a parts list.
+     *
+     * @param partsList the CSV file
+     * @return its parts and the reader's warnings
+     * @throws InputException naming the file, line and field when it cannot be read
+     */
+    public static PartsList readPartsList(Path partsList) throws InputException {
         try {
             return new PartsListReader().read(partsList);
         } catch (NoSuchFileException e) {

@@ -330,7 +330,14 @@ public final class SessionRecords {
         return changeOf(session, record.sha256());
     }
 
-    private static Optional<String> changeOf(TestSession session, String now) {
+    /**
+     * Says so when a session's record has changed since it was added.
+     *
+     * @param session the session
+     * @param now     the SHA-256 of its record as it is now
+     * @return the message (session, file, both hashes shortened), or empty when unchanged or no hash is stored
+     */
+    public static Optional<String> changeOf(TestSession session, String now) {
         String stored = session.getContentHash();
         if (stored == null || stored.isBlank() || stored.equalsIgnoreCase(now)) {
             return Optional.empty();
@@ -471,7 +478,14 @@ public final class SessionRecords {
         }
     }
 
-    private static String sha256(Path file) throws IOException {
+    /**
+     * The SHA-256 of a file's content, read in blocks (a long record is never held whole).
+     *
+     * @param file the file
+     * @return the hash in lowercase hexadecimal
+     * @throws IOException when the file cannot be read
+     */
+    public static String sha256(Path file) throws IOException {
         try (InputStream in = Files.newInputStream(file)) {
             MessageDigest digest = MessageDigest.getInstance("SHA-256");
             byte[] buffer = new byte[1 << 16];
