@@ -17,6 +17,9 @@ public final class PendulineViews {
     public static final String FRICTION = "dev.penduline.ui.friction";
     /** The wizard that creates a mechanism project (File › New). */
     public static final String NEW_MECHANISM_PROJECT = "dev.penduline.ui.newMechanismProject";
+    /** The mechanism editor, for .penduline files. */
+    public static final String MECHANISM_EDITOR = "dev.penduline.ui.mechanismEditor";
+
     /** The platform's Properties view. */
     public static final String PROPERTIES = "org.eclipse.ui.views.PropertySheet";
     /** The platform's Problems view. */

@@ -11,7 +11,7 @@ import org.eclipse.ui.actions.ContributionItemFactory;
 import org.eclipse.ui.application.ActionBarAdvisor;
 import org.eclipse.ui.application.IActionBarConfigurer;
 
-/** File, Window and Help menus built from the platform's standard actions. */
+/** File, Edit, Window and Help menus built from the platform's standard actions. */
 final class PendulineActionBarAdvisor extends ActionBarAdvisor {
 
     private IWorkbenchAction quit;
@@ -19,6 +19,11 @@ final class PendulineActionBarAdvisor extends ActionBarAdvisor {
     private IWorkbenchAction about;
     private IWorkbenchAction newWizard;
     private IWorkbenchAction save;
+    private IWorkbenchAction saveAs;
+    private IWorkbenchAction revert;
+    private IWorkbenchAction close;
+    private IWorkbenchAction undo;
+    private IWorkbenchAction redo;
     private OpenFolderAction openFolder;
 
     PendulineActionBarAdvisor(IActionBarConfigurer configurer) {
@@ -29,6 +34,12 @@ final class PendulineActionBarAdvisor extends ActionBarAdvisor {
     protected void makeActions(IWorkbenchWindow window) {
         newWizard = register(ActionFactory.NEW.create(window));
         save = register(ActionFactory.SAVE.create(window));
+        saveAs = register(ActionFactory.SAVE_AS.create(window));
+        revert = register(ActionFactory.REVERT.create(window));
+        close = register(ActionFactory.CLOSE.create(window));
+        // retargeted: the active editor (the mechanism editor) supplies the command stack
+        undo = register(ActionFactory.UNDO.create(window));
+        redo = register(ActionFactory.REDO.create(window));
         openFolder = new OpenFolderAction(window);
         quit = register(ActionFactory.QUIT.create(window));
         preferences = register(ActionFactory.PREFERENCES.create(window));
@@ -49,10 +60,19 @@ final class PendulineActionBarAdvisor extends ActionBarAdvisor {
         newMenu.add(ContributionItemFactory.NEW_WIZARD_SHORTLIST.create(window));
         file.add(newMenu);
         file.add(openFolder);
+        file.add(new Separator());
+        file.add(close);
         file.add(save);
+        file.add(saveAs);
+        file.add(revert);
         file.add(new Separator(IWorkbenchActionConstants.MB_ADDITIONS));
         file.add(new Separator());
         file.add(quit);
+
+        MenuManager edit = new MenuManager("&Edit", IWorkbenchActionConstants.M_EDIT);
+        edit.add(undo);
+        edit.add(redo);
+        edit.add(new Separator(IWorkbenchActionConstants.MB_ADDITIONS));
 
         MenuManager windowMenu = new MenuManager("&Window", IWorkbenchActionConstants.M_WINDOW);
         MenuManager showView = new MenuManager("Show &View", "showView");
@@ -66,6 +86,7 @@ final class PendulineActionBarAdvisor extends ActionBarAdvisor {
         help.add(about);
 
         menuBar.add(file);
+        menuBar.add(edit);
         menuBar.add(new Separator(IWorkbenchActionConstants.MB_ADDITIONS));
         menuBar.add(windowMenu);
         menuBar.add(help);

@@ -58,13 +58,6 @@ final class FrictionViewScenario {
     /** Bound on the fit of two 12 s records (several candidate term sets and their bootstraps). */
     private static final long FIT_NANOS = 120_000_000_000L;
 
-    /** INVENTED test mechanism: a rod pivoted at its end with a disc at its tip. */
-    private static final String PARTS = """
-            # INVENTED test data for the workbench test, not a real product.
-            name,shape,mass_kg,x_mm,y_mm,z_mm,length_mm,radius_mm,inner_radius_mm,axis
-            arm,rod,2,0,-400,0,800,,,y
-            bob,cylinder,3,0,-900,0,20,100,0,z
-            """;
 
     private final Shell shell;
     private final EPartService parts;
@@ -80,7 +73,7 @@ final class FrictionViewScenario {
 
     void run() throws Exception {
         Path scratch = Files.createTempDirectory("penduline-friction-test");
-        Path csv = Files.writeString(scratch.resolve("fit-arm-parts.csv"), PARTS, StandardCharsets.UTF_8);
+        Path csv = Files.writeString(scratch.resolve("fit-arm-parts.csv"), TestMechanisms.ROD_AND_DISC, StandardCharsets.UTF_8);
         IFile file = MechanismProjectCreation.create("fit-arm", "Fit arm (invented)", Optional.of(csv), null)
                 .mechanismFile();
         Path path = MechanismSelection.pathOf(file);

@@ -31,18 +31,11 @@ import dev.penduline.ui.internal.wizard.MechanismProjectCreation;
  */
 final class MechanismDocumentCapability implements Capability {
 
-    /** INVENTED test mechanism: a rod with a disc at its tip. */
-    private static final String PARTS = """
-            # INVENTED test data for the workbench test, not a real product.
-            name,shape,mass_kg,x_mm,y_mm,z_mm,length_mm,radius_mm,inner_radius_mm,axis
-            arm,rod,2,0,-400,0,800,,,y
-            bob,cylinder,3,0,-900,0,20,100,0,z
-            """;
 
     @Override
     public void run(WorkbenchDriver driver) throws Exception {
         Path scratch = Files.createTempDirectory("penduline-document-test");
-        Path csv = Files.writeString(scratch.resolve("document-arm-parts.csv"), PARTS, StandardCharsets.UTF_8);
+        Path csv = Files.writeString(scratch.resolve("document-arm-parts.csv"), TestMechanisms.ROD_AND_DISC, StandardCharsets.UTF_8);
         IFile file = MechanismProjectCreation.create("document-arm", "Document arm (invented)", Optional.of(csv), null)
                 .mechanismFile();
         MechanismDocument doc = MechanismDocument.read(file);

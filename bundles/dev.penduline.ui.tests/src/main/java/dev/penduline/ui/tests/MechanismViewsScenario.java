@@ -58,16 +58,6 @@ final class MechanismViewsScenario {
     /** The longest wait for a job's result to reach a view. */
     private static final long WAIT_NANOS = 20_000_000_000L;
 
-    /**
-     * INVENTED test mechanism: a slender rod pivoted at its end with a disc at its tip (the
-     * services' own test uses it too).
-     */
-    private static final String PARTS = """
-            # INVENTED test data for the workbench test, not a real product.
-            name,shape,mass_kg,x_mm,y_mm,z_mm,length_mm,radius_mm,inner_radius_mm,axis
-            arm,rod,2,0,-400,0,800,,,y
-            bob,cylinder,3,0,-900,0,20,100,0,z
-            """;
 
     private final IWorkbenchWindow window;
     private final Shell shell;
@@ -85,7 +75,7 @@ final class MechanismViewsScenario {
 
     void run() throws Exception {
         Path scratch = Files.createTempDirectory("penduline-ui-test");
-        Path csv = Files.writeString(scratch.resolve("test-arm-parts.csv"), PARTS, StandardCharsets.UTF_8);
+        Path csv = Files.writeString(scratch.resolve("test-arm-parts.csv"), TestMechanisms.ROD_AND_DISC, StandardCharsets.UTF_8);
         IFile mechanismFile = createProjectWithWizard(csv);
         Path path = MechanismSelection.pathOf(mechanismFile);
 

@@ -18,21 +18,23 @@ public final class PendulinePerspective implements IPerspectiveFactory {
     @Override
     public void createInitialLayout(IPageLayout layout) {
         String editors = layout.getEditorArea();
-        layout.setEditorAreaVisible(false);
-        layout.addView(PendulineViews.PROJECT_FILES, IPageLayout.LEFT, 0.24f, editors);
+        // The editor area holds the mechanism editor at the top; the views that follow its live
+        // model sit below it, so an edit and its effect on the inertia are in sight together.
+        layout.setEditorAreaVisible(true);
+        layout.addView(PendulineViews.PROJECT_FILES, IPageLayout.LEFT, 0.2f, editors);
         IFolderLayout bottom = layout.createFolder("dev.penduline.ui.bottom", IPageLayout.BOTTOM, 0.6f,
                 PendulineViews.PROJECT_FILES);
         bottom.addView(PendulineViews.PROPERTIES);
         bottom.addView(PendulineViews.PROBLEMS);
         bottom.addPlaceholder(PendulineViews.PROGRESS);
-        // The editor area is hidden: the two centre folders share its space.
-        IFolderLayout centre = layout.createFolder("dev.penduline.ui.centre", IPageLayout.TOP, 0.55f, editors);
+        IFolderLayout centre = layout.createFolder("dev.penduline.ui.centre", IPageLayout.BOTTOM, 0.45f, editors);
         centre.addView(PendulineViews.MECHANISM);
         // Beside the Mechanism view rather than the chart: a stored fit is read next to the record
-        // it came from, and the chart below stays in sight.
+        // it came from, and the chart beside it stays in sight.
         centre.addView(PendulineViews.FRICTION);
         centre.addView(PendulineViews.SWING_DESK);
-        IFolderLayout charts = layout.createFolder("dev.penduline.ui.charts", IPageLayout.BOTTOM, 0.5f, editors);
+        IFolderLayout charts = layout.createFolder("dev.penduline.ui.charts", IPageLayout.RIGHT, 0.6f,
+                "dev.penduline.ui.centre");
         charts.addView(PendulineViews.SWING_CHART);
         for (String view : new String[] {PendulineViews.PROJECT_FILES, PendulineViews.MECHANISM,
                 PendulineViews.SWING_CHART, PendulineViews.FRICTION, PendulineViews.SWING_DESK, PendulineViews.PROPERTIES,

@@ -3,12 +3,14 @@ package dev.penduline.ui.internal;
 import jakarta.annotation.PostConstruct;
 import jakarta.annotation.PreDestroy;
 
+import org.eclipse.core.resources.IFile;
 import org.eclipse.core.resources.IResource;
 import org.eclipse.core.resources.IResourceChangeEvent;
 import org.eclipse.core.resources.IResourceChangeListener;
 import org.eclipse.core.resources.IWorkspace;
 import org.eclipse.core.resources.ResourcesPlugin;
 import org.eclipse.e4.ui.workbench.modeling.ESelectionService;
+import org.eclipse.jface.dialogs.MessageDialog;
 import org.eclipse.jface.viewers.IStructuredSelection;
 import org.eclipse.jface.viewers.StructuredSelection;
 import org.eclipse.jface.viewers.TreeViewer;
@@ -16,6 +18,10 @@ import org.eclipse.jface.viewers.Viewer;
 import org.eclipse.jface.viewers.ViewerFilter;
 import org.eclipse.swt.SWT;
 import org.eclipse.swt.widgets.Composite;
+import org.eclipse.ui.IWorkbenchWindow;
+import org.eclipse.ui.PartInitException;
+import org.eclipse.ui.PlatformUI;
+import org.eclipse.ui.ide.IDE;
 import org.eclipse.ui.model.WorkbenchContentProvider;
 import org.eclipse.ui.model.WorkbenchLabelProvider;
 
@@ -23,6 +29,7 @@ import jakarta.inject.Inject;
 
 import dev.penduline.model.persistence.AtomicFileWrite;
 import dev.penduline.model.persistence.SaveLock;
+import dev.penduline.ui.PendulineViews;
 
 /**
  * The workspace as a tree: one project per mechanism, with its mechanism file, parts lists and
@@ -65,6 +72,14 @@ public final class ProjectFilesPart {
         viewer.setInput(workspace.getRoot());
         viewer.addSelectionChangedListener(e -> selection.setSelection(
                 e.getSelection() instanceof IStructuredSelection s && s.size() == 1 ? s.getFirstElement() : e.getSelection()));
+        viewer.addDoubleClickListener(e -> {
+            Object first = e.getSelection() instanceof IStructuredSelection s ? s.getFirstElement() : null;
+            if (first instanceof IFile f && MechanismSelection.isMechanismFile(f)) {
+                openEditor(f);
+            } else if (first != null) {
+                viewer.setExpandedState(first, !viewer.getExpandedState(first));
+            }
+        });
         refresher = event -> {
             if (event.getType() == IResourceChangeEvent.POST_CHANGE && !viewer.getControl().isDisposed()) {
                 viewer.getControl().getDisplay().asyncExec(() -> {
@@ -75,6 +90,23 @@ public final class ProjectFilesPart {
             }
         };
         workspace.addResourceChangeListener(refresher, IResourceChangeEvent.POST_CHANGE);
+    }
+
+    /**
+     * Opens a mechanism file in the mechanism editor of the active workbench page.
+     *
+     * @param file the mechanism file
+     */
+    static void openEditor(IFile file) {
+        IWorkbenchWindow window = PlatformUI.getWorkbench().getActiveWorkbenchWindow();
+        if (window == null || window.getActivePage() == null) {
+            return;
+        }
+        try {
+            IDE.openEditor(window.getActivePage(), file, PendulineViews.MECHANISM_EDITOR);
+        } catch (PartInitException e) {
+            MessageDialog.openError(window.getShell(), "Cannot Open " + file.getName(), e.getMessage());
+        }
     }
 
     /**

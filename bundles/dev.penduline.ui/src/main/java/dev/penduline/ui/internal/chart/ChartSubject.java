@@ -72,6 +72,24 @@ public record ChartSubject(Path file, String name, List<TestSession> sessions, O
     }
 
     /**
+     * A subject of a mechanism in memory (a copy of an editor's live model, taken on the UI
+     * thread), computed through the services as {@link #open(Path)} does for its file.
+     *
+     * @param m    the mechanism (not shared with the UI thread)
+     * @param file its file, for the records' paths and the messages
+     * @return the subject
+     */
+    public static ChartSubject of(Mechanism m, Path file) {
+        String name = m.getName() != null && !m.getName().isBlank() ? m.getName() : String.valueOf(file.getFileName());
+        try {
+            return new ChartSubject(file, name, m.getSessions(), Optional.of(new MechanismLoader().loadMechanism(m,
+                    file.toString())), Optional.empty());
+        } catch (InputException e) {
+            return new ChartSubject(file, name, m.getSessions(), Optional.empty(), Optional.of(e.getMessage()));
+        }
+    }
+
+    /**
      * The content for a session: its record and what the analysis found in it.
      *
      * @param index the session's position in {@link #sessions()}

@@ -9,6 +9,7 @@ import jakarta.inject.Inject;
 import jakarta.inject.Named;
 
 import org.eclipse.core.resources.IFile;
+import org.eclipse.core.resources.IResource;
 import org.eclipse.core.resources.IResourceChangeEvent;
 import org.eclipse.core.resources.IResourceChangeListener;
 import org.eclipse.core.resources.ResourcesPlugin;
@@ -21,6 +22,7 @@ import org.eclipse.core.runtime.jobs.Job;
 import org.eclipse.e4.core.di.annotations.Optional;
 import org.eclipse.e4.ui.di.UISynchronize;
 import org.eclipse.e4.ui.services.IServiceConstants;
+import org.eclipse.emf.ecore.util.EcoreUtil;
 import org.eclipse.jface.layout.GridDataFactory;
 import org.eclipse.jface.layout.GridLayoutFactory;
 import org.eclipse.swt.SWT;
@@ -30,9 +32,11 @@ import org.eclipse.swt.widgets.Label;
 import org.eclipse.swt.widgets.Text;
 import org.eclipse.swtchart.Chart;
 
+import dev.penduline.model.Mechanism;
 import dev.penduline.model.TestSession;
 import dev.penduline.services.InputException;
 import dev.penduline.ui.internal.MechanismSelection;
+import dev.penduline.ui.internal.document.LiveModel;
 
 /**
  * The Swing Chart view: for the mechanism selected in Project Files, lists its test sessions;
@@ -55,6 +59,12 @@ public final class SwingChartPart {
     private ChartSubject subject;
     private SwingChartContent content;
     private IResourceChangeListener watcher;
+    private LiveModel live;
+    private int keepSession = -1;
+
+    /** A copy of an editor's live model to chart, and the session the user had chosen. */
+    private record Live(Mechanism mechanism, Path file, int session) {
+    }
 
     /**
      * Created by the workbench.
@@ -95,6 +105,12 @@ public final class SwingChartPart {
         summary.setBackground(parent.getBackground());
         summary.setText("Select a mechanism file in Project Files to see its swing records.");
         GridDataFactory.fillDefaults().grab(false, true).hint(330, SWT.DEFAULT).applyTo(summary);
+        live = new LiveModel(sync::asyncExec, () -> {
+            if (shownFile != null && !summary.isDisposed()) {
+                shownStamp = IResource.NULL_STAMP;
+                show(shownFile);
+            }
+        });
         watcher = this::reloadWhenChanged;
         ResourcesPlugin.getWorkspace().addResourceChangeListener(watcher, IResourceChangeEvent.POST_CHANGE);
         if (pending != null) {
@@ -105,7 +121,8 @@ public final class SwingChartPart {
     /** A session added to the shown file (by the command line, say) shows once the workspace sees it. */
     private void reloadWhenChanged(IResourceChangeEvent event) {
         IFile file = shownFile;
-        if (file == null || event.getDelta() == null || event.getDelta().findMember(file.getFullPath()) == null) {
+        if (file == null || live.document().isPresent() || event.getDelta() == null
+                || event.getDelta().findMember(file.getFullPath()) == null) {
             return;
         }
         sync.asyncExec(() -> {
@@ -138,6 +155,18 @@ public final class SwingChartPart {
      * @param file the file
      */
     public void show(IFile file) {
+        var open = live.follow(file);
+        if (open.isPresent()) {
+            // the editor's model, copied here on the UI thread; the job computes from the copy
+            int chosen = file.equals(shownFile) ? sessions.getSelectionIndex() : -1;
+            shownFile = file;
+            shownStamp = IResource.NULL_STAMP;
+            keepSession = chosen;
+            load("Simulating the swing of " + file.getName(), file.getName(), null,
+                    new Live(EcoreUtil.copy(open.get().mechanism()), MechanismSelection.pathOf(file), chosen));
+            return;
+        }
+        keepSession = -1;
         if (file.equals(shownFile) && file.getModificationStamp() == shownStamp) {
             return;
         }
@@ -168,9 +197,12 @@ public final class SwingChartPart {
                 ChartSubject opened;
                 SwingChartContent result;
                 try {
-                    opened = input instanceof ChartSubject s ? s : ChartSubject.open((Path) input);
+                    opened = input instanceof ChartSubject s ? s : input instanceof Live l ? ChartSubject.of(l.mechanism(), l.file())
+                            : ChartSubject.open((Path) input);
                     progress.worked(1);
-                    result = step == null ? opened.first() : step.apply(opened);
+                    int keep = input instanceof Live l ? l.session() : -1;
+                    result = step != null ? step.apply(opened) : keep > 0 && keep < opened.sessions().size()
+                            ? opened.session(keep) : opened.first();
                 } catch (InputException e) {
                     opened = null;
                     result = SwingChartContent.failed(fileName, e.getMessage());
@@ -202,6 +234,9 @@ public final class SwingChartPart {
         if (fresh) {
             subject = opened;
             fillSessions(opened);
+            if (opened != null && keepSession > 0 && keepSession < opened.sessions().size()) {
+                sessions.select(keepSession);
+            }
         }
         content = result;
         chart.draw(result);
@@ -263,6 +298,9 @@ public final class SwingChartPart {
     /** Stops a running job and the workspace listener. */
     @PreDestroy
     public void dispose() {
+        if (live != null) {
+            live.dispose();
+        }
         if (running != null) {
             running.cancel();
         }

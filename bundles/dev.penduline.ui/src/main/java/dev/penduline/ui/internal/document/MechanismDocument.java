@@ -3,10 +3,7 @@ package dev.penduline.ui.internal.document;
 import java.io.IOException;
 import java.nio.file.Files;
 import java.nio.file.Path;
-import java.security.MessageDigest;
-import java.security.NoSuchAlgorithmException;
 import java.util.ArrayList;
-import java.util.HexFormat;
 import java.util.List;
 import java.util.concurrent.CopyOnWriteArrayList;
 import java.util.function.Consumer;
@@ -26,6 +23,7 @@ import dev.penduline.model.persistence.SaveLock;
 import dev.penduline.services.InputException;
 import dev.penduline.services.MechanismLoader;
 import dev.penduline.services.MechanismStore;
+import dev.penduline.services.SessionRecords;
 import dev.penduline.ui.internal.MechanismSelection;
 
 /**
@@ -221,11 +219,6 @@ public final class MechanismDocument {
     }
 
     private static String hashOf(Path p) throws IOException {
-        try {
-            MessageDigest md = MessageDigest.getInstance("SHA-256");
-            return HexFormat.of().formatHex(md.digest(Files.readAllBytes(p)));
-        } catch (NoSuchAlgorithmException e) {
-            throw new IllegalStateException("SHA-256 is missing from this Java runtime", e);
-        }
+        return SessionRecords.sha256(p);
     }
 }

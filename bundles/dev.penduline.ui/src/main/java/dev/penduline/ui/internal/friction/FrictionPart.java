@@ -28,6 +28,7 @@ import org.eclipse.swt.widgets.Label;
 import org.eclipse.swt.widgets.Table;
 
 import dev.penduline.ui.internal.MechanismSelection;
+import dev.penduline.ui.internal.document.LiveModel;
 import dev.penduline.ui.internal.friction.FrictionHeader.Tone;
 
 /**
@@ -60,6 +61,7 @@ public final class FrictionPart {
     private String preferredId;
     private boolean keepOutcome;
     private IResourceChangeListener watcher;
+    private LiveModel live;
 
     /**
      * Created by the workbench.
@@ -86,6 +88,13 @@ public final class FrictionPart {
         caution.setText(CAUTION);
         caution.setFont(JFaceResources.getFontRegistry().getItalic(JFaceResources.DEFAULT_FONT));
         GridDataFactory.fillDefaults().grab(true, false).hint(300, SWT.DEFAULT).applyTo(caution);
+        live = new LiveModel(sync::asyncExec, () -> {
+            if (shownFile != null && !header.isDisposed()) {
+                shownStamp = IFile.NULL_STAMP;
+                keepOutcome = true;
+                show(shownFile);
+            }
+        });
         watcher = this::reloadWhenChanged;
         ResourcesPlugin.getWorkspace().addResourceChangeListener(watcher, IResourceChangeEvent.POST_CHANGE);
         if (pending != null) {
@@ -137,6 +146,14 @@ public final class FrictionPart {
             loading.cancel();
         }
         Path path = MechanismSelection.pathOf(file);
+        var open = live.follow(file);
+        if (open.isPresent()) {
+            // the editor's model, read on the UI thread: nothing to wait for
+            shownStamp = IFile.NULL_STAMP;
+            loading = null;
+            apply(ticket, FrictionSheet.of(open.get().mechanism(), file.getName(), path.toString()));
+            return;
+        }
         Job job = new Job("Reading the stored fits of " + file.getName()) {
             @Override
             protected IStatus run(IProgressMonitor monitor) {
@@ -225,7 +242,8 @@ public final class FrictionPart {
 
     private void reloadWhenChanged(IResourceChangeEvent event) {
         IFile file = shownFile;
-        if (file == null || event.getDelta() == null || event.getDelta().findMember(file.getFullPath()) == null) {
+        if (file == null || live.document().isPresent() || event.getDelta() == null
+                || event.getDelta().findMember(file.getFullPath()) == null) {
             return;
         }
         sync.asyncExec(() -> {
@@ -301,6 +319,9 @@ public final class FrictionPart {
     /** Stops the jobs and the workspace listener. */
     @PreDestroy
     public void dispose() {
+        if (live != null) {
+            live.dispose();
+        }
         if (loading != null) {
             loading.cancel();
         }

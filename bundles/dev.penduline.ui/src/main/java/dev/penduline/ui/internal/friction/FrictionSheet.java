@@ -45,6 +45,18 @@ public record FrictionSheet(String title, String source, int sessions, List<Stor
         } catch (InputException e) {
             return failed(title, file.toString(), e.getMessage());
         }
+        return of(m, title, file.toString());
+    }
+
+    /**
+     * The stored fits of a mechanism in memory (an editor's live model).
+     *
+     * @param m     the mechanism
+     * @param title the title when the mechanism has no name (its file's name)
+     * @param where its file, for the messages
+     * @return the sheet
+     */
+    public static FrictionSheet of(Mechanism m, String title, String where) {
         if (m.getName() != null && !m.getName().isBlank()) {
             title = m.getName();
         }
@@ -56,7 +68,7 @@ public record FrictionSheet(String title, String source, int sessions, List<Stor
         // in the same second the later in the file comes first after the reversal.
         fits.sort(Comparator.comparing(StoredFit::computedAt));
         Collections.reverse(fits);
-        return new FrictionSheet(title, file.toString(), m.getSessions().size(), fits, Optional.empty());
+        return new FrictionSheet(title, where, m.getSessions().size(), fits, Optional.empty());
     }
 
     /**

@@ -1,6 +1,7 @@
 package dev.penduline.ui.internal.friction;
 
 import java.util.ArrayList;
+import java.util.Collection;
 import java.util.HashMap;
 import java.util.HashSet;
 import java.util.List;
@@ -20,6 +21,7 @@ import dev.penduline.model.TermSetScore;
 import dev.penduline.model.TestSession;
 import dev.penduline.physics.identify.ParameterEstimate;
 import dev.penduline.physics.units.Unit;
+import dev.penduline.services.PartsImport;
 import dev.penduline.services.present.Figures;
 
 /**
@@ -110,7 +112,16 @@ public record StoredFit(String id, String computedAt, String status, String verd
                 + ("auto".equals(settings.get("terms")) ? " (chosen by BIC among the candidates)" : " (as asked)");
         return new StoredFit(r.getId(), String.valueOf(r.getComputedAt()), settings.getOrDefault("status", "unknown"),
                 verdict(r), shares(r), model, estimates(r, "free".equals(settings.get("inertia"))),
-                sessionRows(r, sessions), comparisons(r), List.copyOf(warnings.values()));
+                sessionRows(r, sessions), comparisons(r), warningsOf(r, warnings.values()));
+    }
+
+    /** The stored warnings, after the stale mark when the parts changed after the fit. */
+    private static List<String> warningsOf(FitResult r, Collection<String> stored) {
+        List<String> all = new ArrayList<>();
+        PartsImport.staleReason(r).ifPresent(why -> all.add("STALE: " + why + ". Fit again for results that match the"
+                + " mechanism as it is now."));
+        all.addAll(stored);
+        return List.copyOf(all);
     }
 
     /**

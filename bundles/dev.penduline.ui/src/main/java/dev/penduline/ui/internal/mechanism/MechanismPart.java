@@ -9,6 +9,7 @@ import jakarta.inject.Inject;
 import jakarta.inject.Named;
 
 import org.eclipse.core.resources.IFile;
+import org.eclipse.core.resources.IResource;
 import org.eclipse.core.resources.IResourceChangeEvent;
 import org.eclipse.core.resources.IResourceChangeListener;
 import org.eclipse.core.resources.ResourcesPlugin;
@@ -30,6 +31,8 @@ import org.eclipse.swt.widgets.Composite;
 import org.eclipse.swt.widgets.Label;
 
 import dev.penduline.ui.internal.MechanismSelection;
+import dev.penduline.ui.internal.document.LiveModel;
+import dev.penduline.ui.internal.document.MechanismDocument;
 
 /**
  * The Mechanism view: follows the file selected in Project Files (a mechanism file or a parts
@@ -57,6 +60,7 @@ public final class MechanismPart {
     private Job running;
     private MechanismSheet sheet;
     private IResourceChangeListener watcher;
+    private LiveModel live;
 
     /**
      * Created by the workbench.
@@ -96,6 +100,11 @@ public final class MechanismPart {
         caution.setText(CAUTION);
         caution.setFont(JFaceResources.getFontRegistry().getItalic(JFaceResources.DEFAULT_FONT));
         GridDataFactory.fillDefaults().grab(true, false).hint(300, SWT.DEFAULT).applyTo(caution);
+        live = new LiveModel(sync::asyncExec, () -> {
+            if (shownFile != null && !title.isDisposed()) {
+                show(shownFile, true);
+            }
+        });
         watcher = this::reloadWhenChanged;
         ResourcesPlugin.getWorkspace().addResourceChangeListener(watcher, IResourceChangeEvent.POST_CHANGE);
         if (pending != null) {
@@ -133,12 +142,22 @@ public final class MechanismPart {
     }
 
     /**
-     * Shows a file: loads it in a job unless it is already shown unchanged.
+     * Shows a file: its live model at once when an editor has it open, else loads it in a job
+     * unless it is already shown unchanged.
      *
      * @param file the mechanism file or parts list
      */
     public void show(IFile file) {
-        if (file.equals(shownFile) && file.getModificationStamp() == shownStamp && running == null) {
+        show(file, false);
+    }
+
+    private void show(IFile file, boolean again) {
+        var open = live.follow(file);
+        if (open.isPresent()) {
+            showLive(file, open.get());
+            return;
+        }
+        if (!again && file.equals(shownFile) && file.getModificationStamp() == shownStamp && running == null) {
             return;
         }
         shownFile = file;
@@ -177,6 +196,20 @@ public final class MechanismPart {
         job.schedule();
     }
 
+    /** The editor's model, computed on the UI thread: the services take milliseconds for a parts list. */
+    private void showLive(IFile file, MechanismDocument document) {
+        if (running != null) {
+            running.cancel();
+            running = null;
+        }
+        shownFile = file;
+        // whatever the stamp, the file is read again once the editor closes
+        shownStamp = IResource.NULL_STAMP;
+        source.setText(file.getFullPath() + " (open in the editor)");
+        long ticket = ++generation;
+        apply(ticket, MechanismSheet.live(document.mechanism(), file.getName(), MechanismSelection.pathOf(file)));
+    }
+
     private void apply(long ticket, MechanismSheet result) {
         if (ticket != generation || title.isDisposed()) {
             return;
@@ -194,7 +227,8 @@ public final class MechanismPart {
 
     private void reloadWhenChanged(IResourceChangeEvent event) {
         IFile file = shownFile;
-        if (file == null || event.getDelta() == null || event.getDelta().findMember(file.getFullPath()) == null) {
+        if (file == null || live.document().isPresent() || event.getDelta() == null
+                || event.getDelta().findMember(file.getFullPath()) == null) {
             return;
         }
         sync.asyncExec(() -> {
@@ -216,6 +250,9 @@ public final class MechanismPart {
     /** Stops the job and the workspace listener. */
     @PreDestroy
     public void dispose() {
+        if (live != null) {
+            live.dispose();
+        }
         if (running != null) {
             running.cancel();
         }

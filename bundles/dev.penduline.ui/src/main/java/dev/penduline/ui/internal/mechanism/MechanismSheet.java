@@ -59,6 +59,24 @@ public record MechanismSheet(String title, String source, List<TotalRow> totals,
     }
 
     /**
+     * Validates a mechanism in memory (an editor's live model) and computes its inertia through
+     * the services, as {@link #read(Path)} does for its file.
+     *
+     * @param m        the live model
+     * @param fileName the file's name, the title when the mechanism has no name
+     * @param file     the file, for the messages
+     * @return the sheet, with the error message when it failed
+     */
+    public static MechanismSheet live(Mechanism m, String fileName, Path file) {
+        String title = m.getName() != null && !m.getName().isBlank() ? m.getName() : fileName;
+        try {
+            return loaded(title, file.toString(), new MechanismLoader().loadMechanism(m, file.toString()));
+        } catch (InputException e) {
+            return failed(title, file.toString(), e.getMessage());
+        }
+    }
+
+    /**
      * A sheet of a mechanism the services loaded.
      *
      * @param title  the mechanism's name
