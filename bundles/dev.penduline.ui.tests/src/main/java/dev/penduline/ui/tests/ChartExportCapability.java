@@ -27,10 +27,14 @@ import org.eclipse.swt.graphics.ImageData;
 import org.eclipse.swt.graphics.ImageLoader;
 import org.eclipse.swt.graphics.Point;
 import org.eclipse.swt.graphics.RGB;
+import org.eclipse.swt.widgets.Composite;
 import org.eclipse.swt.widgets.Control;
+import org.eclipse.swt.widgets.Display;
 import org.eclipse.swt.widgets.Event;
+import org.eclipse.swt.widgets.Label;
 import org.eclipse.swt.widgets.Menu;
 import org.eclipse.swt.widgets.MenuItem;
+import org.eclipse.swt.widgets.Shell;
 import org.eclipse.swtchart.Chart;
 import org.eclipse.swtchart.IAxis;
 import org.eclipse.swtchart.ISeries;
@@ -175,6 +179,23 @@ final class ChartExportCapability implements Capability {
             assertTrue(suggested.get(0).startsWith("inspection-hatch") && suggested.get(0).endsWith(".svg"),
                     "suggested SVG name " + suggested.get(0));
             assertTrue(suggested.get(1).endsWith(".png"), "suggested PNG name " + suggested.get(1));
+
+            // An export that cannot be written says which file and why, and writes nothing.
+            Path taken = Files.createDirectories(scratch.resolve("taken.svg"));
+            ChartTools.choosePathsWith((shell, format, name) -> taken.toString());
+            List<String> said = new ArrayList<>();
+            answerDialog(driver, "Export chart", said);
+            choose(menu, ChartTools.EXPORT_SVG);
+            assertEquals(1, said.size(), "one error dialog: " + said);
+            assertTrue(said.get(0).contains(taken.toString()) && said.get(0).contains("could not be exported"),
+                    "the error names the file and says what failed: " + said.get(0));
+            assertTrue(Files.isDirectory(taken), "the folder in the way is still a folder");
+            try (Stream<Path> left = Files.list(scratch)) {
+                assertTrue(left.noneMatch(p -> p.getFileName().toString().endsWith(".saving")), "a temporary file was left");
+            }
+            try (Stream<Path> inside = Files.list(taken)) {
+                assertEquals(0, inside.count(), "something was written into the folder");
+            }
         } finally {
             ChartTools.choosePathsWith(before);
         }
@@ -344,6 +365,46 @@ final class ChartExportCapability implements Capability {
             menu.setVisible(false);
             driver.flush();
         }
+    }
+
+    /**
+     * Reads and closes the dialog with the given title once it opens (it runs its own event
+     * loop, so this runs from a timer inside it); after about 10 s any dialog is closed so that a
+     * failure cannot hang the workbench.
+     */
+    private static void answerDialog(WorkbenchDriver driver, String title, List<String> said) {
+        Display display = driver.display();
+        int[] tries = {0};
+        Runnable[] probe = new Runnable[1];
+        probe[0] = () -> {
+            for (Shell s : display.getShells()) {
+                if (s != driver.shell() && !s.isDisposed() && (title.equals(s.getText()) || tries[0] > 200)) {
+                    said.add(title.equals(s.getText()) ? labels(s) : "another dialog: " + s.getText());
+                    try {
+                        driver.shot(s, "chart-tools-export-error.png");
+                    } catch (IOException e) {
+                        said.add("no screenshot: " + e.getMessage());
+                    }
+                    s.close();
+                    return;
+                }
+            }
+            tries[0]++;
+            display.timerExec(50, probe[0]);
+        };
+        display.timerExec(50, probe[0]);
+    }
+
+    private static String labels(Composite c) {
+        StringBuilder out = new StringBuilder();
+        for (Control child : c.getChildren()) {
+            if (child instanceof Label l) {
+                out.append(l.getText()).append('\n');
+            } else if (child instanceof Composite inner) {
+                out.append(labels(inner));
+            }
+        }
+        return out.toString();
     }
 
     private static Event mouse(int x, int y, int button, int count, int state) {

@@ -361,7 +361,8 @@ public final class ChartTools {
             }
         } catch (IOException | RuntimeException e) {
             MessageDialog.openError(chart.getShell(), "Export chart",
-                    target + ": the chart could not be exported (" + e.getMessage() + ")");
+                    target + ": the chart could not be exported: "
+                            + (e.getMessage() == null ? "the file could not be written" : e.getMessage()));
         }
     }
 
