@@ -44,6 +44,7 @@ class WorkbenchCapabilitiesTest {
         c.put("frictionView", d -> new FrictionViewScenario(d.window(), d.shots()).run());
         c.put("mechanismDocument", new MechanismDocumentCapability());
         c.put("editorAndUndo", new EditorAndUndoCapability());
+        c.put("chartExport", new ChartExportCapability());
         return c;
     }
 

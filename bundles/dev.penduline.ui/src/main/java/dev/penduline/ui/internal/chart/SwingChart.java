@@ -15,7 +15,8 @@ import org.eclipse.swtchart.LineStyle;
 
 /**
  * The SWTChart chart of the Swing Chart view: the angle curve, the turning points as markers and
- * the release as a dashed vertical line, with axis titles in the units plotted.
+ * the release as a dashed vertical line, with axis titles in the units plotted; zoom, pan, the
+ * hover readout and the exports come from {@link ChartTools}.
  */
 final class SwingChart {
 
@@ -36,6 +37,7 @@ final class SwingChart {
         axes.getXAxis(0).getTitle().setText("time (s)");
         axes.getYAxis(0).getTitle().setText("angle (°)");
         chart.getLegend().setPosition(SWT.BOTTOM);
+        ChartTools.install(chart);
     }
 
     Chart control() {

@@ -10,5 +10,9 @@
  * only ({@link dev.penduline.ui.internal.chart.PlotThinning}, keeping each run's extremes so
  * that peaks survive), never for the analysis. Record angles are in the sensor's frame (the
  * offset is not removed); a prediction is measured from the hanging equilibrium.
+ *
+ * <p>{@link dev.penduline.ui.internal.chart.ChartTools#install} gives any SWTChart chart its zoom,
+ * pan, hover readout and PNG/SVG export ({@link dev.penduline.ui.internal.chart.ChartSvg} draws the
+ * SVG from the series); axis titles must read "quantity (unit)" for the readout to name units.
  */
 package dev.penduline.ui.internal.chart;
