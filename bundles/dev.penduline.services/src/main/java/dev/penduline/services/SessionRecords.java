@@ -330,7 +330,15 @@ public final class SessionRecords {
         return changeOf(session, record.sha256());
     }
 
-    private static Optional<String> changeOf(TestSession session, String now) {
+    /**
+     * Says so when a session's record has changed since it was added, from the SHA-256 of its
+     * content now (see {@link #sha256(Path)}).
+     *
+     * @param session the session
+     * @param now     the SHA-256 of the record's content now, in hexadecimal
+     * @return the message (session, file, both hashes shortened), or empty when unchanged or no hash is stored
+     */
+    public static Optional<String> changeOf(TestSession session, String now) {
         String stored = session.getContentHash();
         if (stored == null || stored.isBlank() || stored.equalsIgnoreCase(now)) {
             return Optional.empty();
@@ -471,7 +479,14 @@ public final class SessionRecords {
         }
     }
 
-    private static String sha256(Path file) throws IOException {
+    /**
+     * The SHA-256 of a file's bytes, as a session stores it.
+     *
+     * @param file the file (a session's record, checked by {@link #recordFile(Path, TestSession)})
+     * @return the hash in lower-case hexadecimal
+     * @throws IOException when the file cannot be read
+     */
+    public static String sha256(Path file) throws IOException {
         try (InputStream in = Files.newInputStream(file)) {
             MessageDigest digest = MessageDigest.getInstance("SHA-256");
             byte[] buffer = new byte[1 << 16];
