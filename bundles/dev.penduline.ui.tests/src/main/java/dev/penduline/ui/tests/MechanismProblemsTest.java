@@ -12,6 +12,11 @@ import org.junit.jupiter.api.BeforeEach;
 import org.junit.jupiter.api.Test;
 import org.junit.jupiter.api.io.TempDir;
 
+import dev.penduline.model.FrictionHypothesis;
+import dev.penduline.model.FrictionKind;
+import dev.penduline.model.Mechanism;
+import dev.penduline.model.naming.NamedElements;
+import dev.penduline.model.persistence.MechanismFiles;
 import dev.penduline.services.InputException;
 import dev.penduline.services.MechanismLoader;
 import dev.penduline.ui.internal.problems.MechanismProblems;
@@ -93,6 +98,25 @@ class MechanismProblemsTest {
         assertEquals(1, onSession.size(), onSession.toString());
         assertEquals(Severity.ERROR, onSession.get(0).severity());
         assertTrue(refusal(outside).contains(onSession.get(0).message()), onSession.get(0).message());
+    }
+
+    @Test
+    void aTermsProblemIsOnItsHypothesisAndAFitsOnTheFit() throws Exception {
+        Mechanism m = MechanismFiles.load(files.valid);
+        FrictionHypothesis h = NamedElements.addHypothesis(m, "dry and viscous");
+        NamedElements.addTerm(h, FrictionKind.COULOMB).setLowerBound(-1);
+        NamedElements.addFitResult(m, "first fit", "yesterday");
+        Path file = project.resolve("fits.penduline");
+        MechanismFiles.save(m, file);
+        List<Problem> problems = MechanismProblems.of(file);
+        Problem term = only(problems, ElementKind.HYPOTHESIS);
+        assertEquals("dry-and-viscous", term.elementId(), "a term's problem is on the hypothesis that holds it");
+        assertEquals("hypothesis 'dry and viscous'", term.location());
+        assertTrue(term.message().contains("lower bound must be zero or positive"), term.message());
+        Problem fit = problems.stream().filter(p -> p.kind() == ElementKind.FIT).findFirst().orElseThrow();
+        assertEquals("first-fit", fit.elementId());
+        assertEquals("fit 'first fit'", fit.location());
+        assertTrue(fit.message().contains("yesterday"), fit.message());
     }
 
     @Test
