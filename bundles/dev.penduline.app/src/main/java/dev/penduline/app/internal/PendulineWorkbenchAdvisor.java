@@ -12,6 +12,7 @@ import org.eclipse.core.runtime.CoreException;
 import org.eclipse.core.runtime.ILog;
 import org.eclipse.core.runtime.NullProgressMonitor;
 import org.eclipse.core.runtime.Platform;
+import org.eclipse.jface.resource.ResourceLocator;
 import org.eclipse.ui.application.IWorkbenchConfigurer;
 import org.eclipse.ui.application.IWorkbenchWindowConfigurer;
 import org.eclipse.ui.application.WorkbenchAdvisor;
@@ -36,6 +37,20 @@ public class PendulineWorkbenchAdvisor extends WorkbenchAdvisor {
         configurer.setSaveAndRestore(true);
         // Adapters that let the platform's views show workspace resources (labels, properties).
         IDE.registerAdapters();
+        declareProblemImages(configurer);
+    }
+
+    /**
+     * The severity icons of the Problems view. The IDE's own advisor declares them; without them
+     * every marker shows the red square of a missing image, a warning as much as an error.
+     */
+    private static void declareProblemImages(IWorkbenchConfigurer configurer) {
+        String[][] images = {{"IMG_OBJS_ERROR_PATH", "error_tsk.png"}, {"IMG_OBJS_WARNING_PATH", "warn_tsk.png"},
+            {"IMG_OBJS_INFO_PATH", "info_tsk.png"}};
+        for (String[] image : images) {
+            ResourceLocator.imageDescriptorFromBundle("org.eclipse.ui.ide", "icons/full/obj16/" + image[1])
+                    .ifPresent(d -> configurer.declareImage(image[0], d, true));
+        }
     }
 
     @Override

@@ -45,6 +45,7 @@ class WorkbenchCapabilitiesTest {
         c.put("mechanismDocument", new MechanismDocumentCapability());
         c.put("editorAndUndo", new EditorAndUndoCapability());
         c.put("chartExport", new ChartExportCapability());
+        c.put("problemsMarkers", new ProblemsMarkersCapability());
         return c;
     }
 

@@ -116,7 +116,7 @@ public final class ProjectFilesPart {
      * @param name the file's name
      * @return true for the lock and temporary files
      */
-    static boolean isSaveHousekeeping(String name) {
+    public static boolean isSaveHousekeeping(String name) {
         return name.startsWith(".") && (name.endsWith(SaveLock.LOCK_SUFFIX) || name.endsWith(AtomicFileWrite.TEMPORARY_SUFFIX));
     }
 
