@@ -26,6 +26,7 @@ import org.eclipse.swt.graphics.Image;
 import org.eclipse.swt.widgets.Composite;
 import org.eclipse.swt.widgets.Control;
 import org.eclipse.swt.widgets.Event;
+import org.eclipse.swt.widgets.Table;
 import org.eclipse.swt.widgets.Tree;
 import org.eclipse.swt.widgets.TreeColumn;
 import org.eclipse.swt.widgets.TreeItem;
@@ -33,6 +34,7 @@ import org.eclipse.ui.IViewPart;
 import org.eclipse.ui.IWorkbenchPage;
 
 import dev.penduline.ui.PendulineViews;
+import dev.penduline.ui.internal.editor.MechanismEditor;
 import dev.penduline.ui.internal.problems.MechanismProblems;
 import dev.penduline.ui.internal.problems.ProblemMarkerUpdater;
 import dev.penduline.ui.internal.problems.ProblemMarkers;
@@ -121,6 +123,23 @@ final class ProblemsMarkersCapability implements Capability {
         d.shot(d.shell(), "problems-markers.png");
         d.page().setPartState(d.page().getReference(view), IWorkbenchPage.STATE_RESTORED);
 
+        // Double-clicking a marker opens the mechanism editor at its element.
+        TreeItem missingItem = item(tree, missingMessage);
+        tree.setSelection(missingItem);
+        Event open = new Event();
+        open.item = missingItem;
+        tree.notifyListeners(SWT.Selection, open);
+        tree.notifyListeners(SWT.DefaultSelection, open);
+        MechanismEditor editor = d.waitFor("the editor to open at the marker's session",
+                () -> d.page().getActiveEditor() instanceof MechanismEditor m ? m : null);
+        assertEquals("sessions", editor.getActivePageInstance().getId(), "the page of the marker's element");
+        Table sessionsTable = firstTable((Composite) editor.getActivePageInstance().getPartControl());
+        assertEquals(1, sessionsTable.getSelectionCount(), "the marker's session is selected");
+        assertEquals("release at 12", sessionsTable.getSelection()[0].getText(0));
+        assertEquals("missing", sessionsTable.getSelection()[0].getText(2), "its record state");
+        d.shot(d.shell(), "problems-marker-opens-editor.png");
+        d.page().closeEditor(editor, false);
+
         // A change that keeps the problem replaces the marker.
         Files.writeString(files.broken, Files.readString(files.broken) + "<!-- still broken -->\n");
         broken.refreshLocal(IResource.DEPTH_ZERO, null);
@@ -149,6 +168,21 @@ final class ProblemsMarkersCapability implements Capability {
 
         project.delete(true, true, null);
         d.flush();
+    }
+
+    private static Table firstTable(Composite root) {
+        for (Control c : root.getChildren()) {
+            if (c instanceof Table t) {
+                return t;
+            }
+            if (c instanceof Composite k) {
+                Table t = firstTable(k);
+                if (t != null) {
+                    return t;
+                }
+            }
+        }
+        return null;
     }
 
     private static List<IMarker> markers(IFile file) {

@@ -31,6 +31,7 @@ import org.eclipse.ui.part.FileEditorInput;
 import dev.penduline.services.InputException;
 import dev.penduline.ui.internal.document.MechanismDocument;
 import dev.penduline.ui.internal.document.MechanismDocuments;
+import dev.penduline.ui.internal.problems.ProblemMarkers;
 
 /**
  * The editor of a mechanism file ({@code .penduline}): pages for the parts, the pivot and
@@ -45,10 +46,6 @@ public final class MechanismEditor extends FormEditor implements IGotoMarker {
 
     /** The editor's id. */
     public static final String ID = "dev.penduline.ui.mechanismEditor";
-    /** Marker attribute: the stable id of the element a problem is about. */
-    public static final String ELEMENT_ID = "dev.penduline.ui.elementId";
-    /** Marker attribute: the kind of that element (part, session, fit, hypothesis, file). */
-    public static final String ELEMENT_KIND = "dev.penduline.ui.elementKind";
 
     private final Runnable changed = this::changed;
     private final IResourceChangeListener disk = this::diskChanged;
@@ -258,8 +255,8 @@ public final class MechanismEditor extends FormEditor implements IGotoMarker {
 
     @Override
     public void gotoMarker(IMarker marker) {
-        String id = marker.getAttribute(ELEMENT_ID, "");
-        String kind = marker.getAttribute(ELEMENT_KIND, "");
+        String id = marker.getAttribute(ProblemMarkers.ELEMENT_ID, "");
+        String kind = marker.getAttribute(ProblemMarkers.ELEMENT_KIND, "");
         String pageId = switch (kind) {
             case "session" -> SessionsPage.ID;
             case "fit" -> FitsPage.ID;
