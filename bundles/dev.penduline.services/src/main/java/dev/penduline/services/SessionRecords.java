@@ -112,6 +112,85 @@ public final class SessionRecords {
     private static Added addLocked(Path mechanismFile, Path recordFile, SwingImportOptions options, String name,
             double releaseAngle, String notes, Consumer<String> saveNotes) throws InputException {
         Mechanism mechanism = MechanismLoader.readMechanism(mechanismFile);
+        Pending pending = pending(mechanism, mechanismFile, recordFile, options, name, releaseAngle, notes);
+        TestSession session = pending.addTo(mechanism);
+        MechanismStore.check(mechanism, mechanismFile);
+        boolean copied = pending.copyIn();
+        try {
+            MechanismStore.save(mechanism, mechanismFile).forEach(saveNotes);
+        } catch (InputException e) {
+            if (copied) {
+                deleteQuietly(pending.storedAt());
+            }
+            throw e;
+        }
+        return new Added(session, pending.record(), copied, pending.storedAt());
+    }
+
+    /**
+     * A record read and checked to become a session of a mechanism, not yet added: where it
+     * will lie in the project, its session's name, the record as read with its mapping.
+     *
+     * @param source       the record as given
+     * @param storedAt     where the session's record lies in the project (the source itself when
+     *                     it is inside, else under {@code records/})
+     * @param relative     the session's record path, relative to the project, '/' separated
+     * @param name         the session's name
+     * @param record       the record as read
+     * @param releaseAngle the release angle if known (rad), NaN if not
+     * @param notes        notes, or null
+     */
+    public record Pending(Path source, Path storedAt, String relative, String name, SwingRecord record,
+            double releaseAngle, String notes) {
+
+        /**
+         * Adds the session to a mechanism (for an undoable command: nothing else is touched).
+         *
+         * @param mechanism the mechanism
+         * @return the new session, with the mapping and the record's SHA-256
+         */
+        public TestSession addTo(Mechanism mechanism) {
+            TestSession session = NamedElements.addSession(mechanism, name, relative);
+            store(session, record.mapping());
+            session.setContentHash(record.sha256());
+            if (!Double.isNaN(releaseAngle)) {
+                session.setReleaseAngle(releaseAngle);
+            }
+            if (notes != null) {
+                session.setNotes(PlainText.note(notes));
+            }
+            return session;
+        }
+
+        /**
+         * Copies the record into the project's {@code records/} folder when it lies outside; an
+         * existing different file of that name is never overwritten.
+         *
+         * @return true when a copy was made (false: in place, or the same content was there)
+         * @throws InputException when the copy fails or a different file has the name
+         */
+        public boolean copyIn() throws InputException {
+            return !storedAt.equals(source) && copyInto(source, storedAt, record.sha256());
+        }
+    }
+
+    /**
+     * Reads and checks a record to be added to a mechanism as a session, as {@code add-session}
+     * does, without changing anything.
+     *
+     * @param mechanism     the mechanism as it is now (sessions already there, or about to be added, count)
+     * @param mechanismFile the mechanism file (its folder is the project)
+     * @param recordFile    the raw record
+     * @param options       how to read it
+     * @param name          the session's name (null: the record's file name)
+     * @param releaseAngle  the release angle if known (rad), NaN if not
+     * @param notes         notes, or null
+     * @return the pending session
+     * @throws InputException when the record cannot be read, lies outside through a link, is a
+     *                        session already, or the name is not usable
+     */
+    public static Pending pending(Mechanism mechanism, Path mechanismFile, Path recordFile, SwingImportOptions options,
+            String name, double releaseAngle, String notes) throws InputException {
         Path project = projectOf(mechanismFile);
         Path source = recordFile.toAbsolutePath().normalize();
         Path stored = source.startsWith(project) ? source
@@ -126,26 +205,7 @@ public final class SessionRecords {
             throw new InputException("the session's name " + (name != null ? "" : "(the record's file name) ") + badName.get()
                     + (name != null ? "" : "; give another with --name"));
         }
-        TestSession session = NamedElements.addSession(mechanism, sessionName, relative);
-        store(session, record.mapping());
-        session.setContentHash(record.sha256());
-        if (!Double.isNaN(releaseAngle)) {
-            session.setReleaseAngle(releaseAngle);
-        }
-        if (notes != null) {
-            session.setNotes(PlainText.note(notes));
-        }
-        MechanismStore.check(mechanism, mechanismFile);
-        boolean copied = !stored.equals(source) && copyInto(source, stored, record.sha256());
-        try {
-            MechanismStore.save(mechanism, mechanismFile).forEach(saveNotes);
-        } catch (InputException e) {
-            if (copied) {
-                deleteQuietly(stored);
-            }
-            throw e;
-        }
-        return new Added(session, record, copied, stored);
+        return new Pending(source, stored, relative, sessionName, record, releaseAngle, notes);
     }
 
     /**

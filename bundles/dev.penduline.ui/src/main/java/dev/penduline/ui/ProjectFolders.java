@@ -111,4 +111,17 @@ public final class ProjectFolders {
             files.reveal(resource);
         }
     }
+
+    /**
+     * Lands on a project just opened: selects its mechanism file in Project Files (or the project
+     * when it has none), so the views show the mechanism rather than "No mechanism selected".
+     *
+     * @param window  the window, may be null (then nothing happens)
+     * @param project the project
+     * @throws CoreException when the project's members cannot be listed
+     */
+    public static void land(IWorkbenchWindow window, IProject project) throws CoreException {
+        Optional<IFile> mechanism = firstMechanismFile(project);
+        reveal(window, mechanism.isPresent() ? mechanism.get() : project);
+    }
 }

@@ -32,7 +32,7 @@ final class OpenFolderAction extends Action {
             return;
         }
         try {
-            ProjectFolders.open(Path.of(chosen), new NullProgressMonitor());
+            ProjectFolders.land(window, ProjectFolders.open(Path.of(chosen), new NullProgressMonitor()));
         } catch (CoreException e) {
             ErrorDialog.openError(window.getShell(), "Open Mechanism Folder", "The folder could not be opened.",
                     e.getStatus());

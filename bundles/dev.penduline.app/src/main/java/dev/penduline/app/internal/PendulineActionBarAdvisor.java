@@ -19,6 +19,7 @@ final class PendulineActionBarAdvisor extends ActionBarAdvisor {
     private IWorkbenchAction about;
     private IWorkbenchAction newWizard;
     private IWorkbenchAction save;
+    private IWorkbenchAction importWizards;
     private IWorkbenchAction saveAs;
     private IWorkbenchAction revert;
     private IWorkbenchAction close;
@@ -34,6 +35,7 @@ final class PendulineActionBarAdvisor extends ActionBarAdvisor {
     protected void makeActions(IWorkbenchWindow window) {
         newWizard = register(ActionFactory.NEW.create(window));
         save = register(ActionFactory.SAVE.create(window));
+        importWizards = register(ActionFactory.IMPORT.create(window));
         saveAs = register(ActionFactory.SAVE_AS.create(window));
         revert = register(ActionFactory.REVERT.create(window));
         close = register(ActionFactory.CLOSE.create(window));
@@ -65,6 +67,8 @@ final class PendulineActionBarAdvisor extends ActionBarAdvisor {
         file.add(save);
         file.add(saveAs);
         file.add(revert);
+        file.add(new Separator());
+        file.add(importWizards);
         file.add(new Separator(IWorkbenchActionConstants.MB_ADDITIONS));
         file.add(new Separator());
         file.add(quit);

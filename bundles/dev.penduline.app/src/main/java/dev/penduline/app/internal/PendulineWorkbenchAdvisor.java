@@ -2,11 +2,8 @@ package dev.penduline.app.internal;
 
 import java.nio.file.Files;
 import java.nio.file.Path;
-import java.util.Optional;
 
-import org.eclipse.core.resources.IFile;
 import org.eclipse.core.resources.IProject;
-import org.eclipse.core.resources.IResource;
 import org.eclipse.core.resources.ResourcesPlugin;
 import org.eclipse.core.runtime.CoreException;
 import org.eclipse.core.runtime.ILog;
@@ -90,9 +87,7 @@ public class PendulineWorkbenchAdvisor extends WorkbenchAdvisor {
         if (first != null) {
             // land on the folder's mechanism, not on "No mechanism selected"
             try {
-                Optional<IFile> mechanism = ProjectFolders.firstMechanismFile(first);
-                IResource shown = mechanism.isPresent() ? mechanism.get() : first;
-                ProjectFolders.reveal(getWorkbenchConfigurer().getWorkbench().getActiveWorkbenchWindow(), shown);
+                ProjectFolders.land(getWorkbenchConfigurer().getWorkbench().getActiveWorkbenchWindow(), first);
             } catch (CoreException e) {
                 ILog.of(getClass()).log(e.getStatus());
             }

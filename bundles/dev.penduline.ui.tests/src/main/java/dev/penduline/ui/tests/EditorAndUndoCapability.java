@@ -8,7 +8,6 @@ import static org.junit.jupiter.api.Assertions.assertTrue;
 import java.nio.charset.StandardCharsets;
 import java.nio.file.Files;
 import java.nio.file.Path;
-import java.util.ArrayList;
 import java.util.Arrays;
 import java.util.List;
 import java.util.Optional;
@@ -43,7 +42,6 @@ import dev.penduline.ui.internal.editor.EditorDialogs;
 import dev.penduline.ui.internal.editor.MechanismEditor;
 import dev.penduline.ui.internal.mechanism.InertiaTotal;
 import dev.penduline.ui.internal.mechanism.MechanismPart;
-import dev.penduline.ui.internal.wizard.MechanismProjectCreation;
 
 /**
  * The mechanism editor through its widgets: a length typed in millimetres reaches the model in
@@ -70,9 +68,7 @@ final class EditorAndUndoCapability implements Capability {
     public void run(WorkbenchDriver d) throws Exception {
         this.driver = d;
         Path scratch = Files.createTempDirectory("penduline-editor-test");
-        Path csv = Files.writeString(scratch.resolve("editor-arm-parts.csv"), TestMechanisms.ROD_AND_DISC, StandardCharsets.UTF_8);
-        IFile file = MechanismProjectCreation.create("editor-arm", "Editor arm (invented)", Optional.of(csv), null)
-                .mechanismFile();
+        IFile file = TestMechanisms.rodAndDisc(scratch, "editor-arm", "Editor arm (invented)");
         Path path = file.getLocation().toPath();
         // A fit stored before the edits, with the J0 the parts gave then (the handbook value of
         // TestMechanisms.ROD_AND_DISC).
@@ -262,14 +258,7 @@ final class EditorAndUndoCapability implements Capability {
     }
 
     private static List<Control> all(Composite root) {
-        List<Control> out = new ArrayList<>();
-        for (Control c : root.getChildren()) {
-            out.add(c);
-            if (c instanceof Composite k) {
-                out.addAll(all(k));
-            }
-        }
-        return out;
+        return TestMechanisms.widgets(root);
     }
 
     private static int column(Table t, String header) {

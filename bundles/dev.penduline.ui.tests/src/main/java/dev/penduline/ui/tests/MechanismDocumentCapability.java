@@ -5,12 +5,10 @@ import static org.junit.jupiter.api.Assertions.assertFalse;
 import static org.junit.jupiter.api.Assertions.assertThrows;
 import static org.junit.jupiter.api.Assertions.assertTrue;
 
-import java.nio.charset.StandardCharsets;
 import java.nio.file.Files;
 import java.nio.file.Path;
 import java.util.ArrayList;
 import java.util.List;
-import java.util.Optional;
 
 import org.eclipse.core.resources.IFile;
 import org.eclipse.emf.edit.command.SetCommand;
@@ -22,7 +20,6 @@ import dev.penduline.services.InputException;
 import dev.penduline.services.MechanismLoader;
 import dev.penduline.services.MechanismStore;
 import dev.penduline.ui.internal.document.MechanismDocument;
-import dev.penduline.ui.internal.wizard.MechanismProjectCreation;
 
 /**
  * The shared mechanism document in the live workbench: a change is one undoable command (dirty,
@@ -35,9 +32,7 @@ final class MechanismDocumentCapability implements Capability {
     @Override
     public void run(WorkbenchDriver driver) throws Exception {
         Path scratch = Files.createTempDirectory("penduline-document-test");
-        Path csv = Files.writeString(scratch.resolve("document-arm-parts.csv"), TestMechanisms.ROD_AND_DISC, StandardCharsets.UTF_8);
-        IFile file = MechanismProjectCreation.create("document-arm", "Document arm (invented)", Optional.of(csv), null)
-                .mechanismFile();
+        IFile file = TestMechanisms.rodAndDisc(scratch, "document-arm", "Document arm (invented)");
         MechanismDocument doc = MechanismDocument.read(file);
         List<String> heard = new ArrayList<>();
         doc.addListener(() -> heard.add("change"));

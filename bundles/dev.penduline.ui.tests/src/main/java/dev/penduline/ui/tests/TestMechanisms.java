@@ -1,5 +1,18 @@
 package dev.penduline.ui.tests;
 
+import java.nio.charset.StandardCharsets;
+import java.nio.file.Files;
+import java.nio.file.Path;
+import java.util.ArrayList;
+import java.util.List;
+import java.util.Optional;
+
+import org.eclipse.core.resources.IFile;
+import org.eclipse.swt.widgets.Composite;
+import org.eclipse.swt.widgets.Control;
+
+import dev.penduline.ui.internal.wizard.MechanismProjectCreation;
+
 /** The INVENTED test data the workbench tests share. */
 final class TestMechanisms {
 
@@ -17,5 +30,37 @@ final class TestMechanisms {
             """;
 
     private TestMechanisms() {
+    }
+
+    /**
+     * A workspace project holding the rod-and-disc mechanism, made as the New Mechanism Project
+     * wizard makes it (from the parts list, which lies in {@code scratch}).
+     *
+     * @param scratch a folder for the parts list
+     * @param project the project's name, e.g. {@code editor-arm}
+     * @param title   the mechanism's name
+     * @return the mechanism file
+     * @throws Exception when the project cannot be made
+     */
+    static IFile rodAndDisc(Path scratch, String project, String title) throws Exception {
+        Path csv = Files.writeString(scratch.resolve(project + "-parts.csv"), ROD_AND_DISC, StandardCharsets.UTF_8);
+        return MechanismProjectCreation.create(project, title, Optional.of(csv), null).mechanismFile();
+    }
+
+    /**
+     * Every control below a composite, depth first.
+     *
+     * @param root the composite
+     * @return its descendants
+     */
+    static List<Control> widgets(Composite root) {
+        List<Control> out = new ArrayList<>();
+        for (Control c : root.getChildren()) {
+            out.add(c);
+            if (c instanceof Composite k) {
+                out.addAll(widgets(k));
+            }
+        }
+        return out;
     }
 }

@@ -46,6 +46,8 @@ class WorkbenchCapabilitiesTest {
         c.put("editorAndUndo", new EditorAndUndoCapability());
         c.put("chartExport", new ChartExportCapability());
         c.put("problemsMarkers", new ProblemsMarkersCapability());
+        c.put("importWizard", new ImportWizardCapability());
+        c.put("firstLanding", new FirstLandingCapability());
         return c;
     }
 

@@ -1,5 +1,8 @@
 package dev.penduline.ui.internal;
 
+import java.nio.file.Path;
+import java.util.Arrays;
+
 import jakarta.annotation.PostConstruct;
 import jakarta.annotation.PreDestroy;
 
@@ -15,8 +18,13 @@ import org.eclipse.jface.viewers.IStructuredSelection;
 import org.eclipse.jface.viewers.StructuredSelection;
 import org.eclipse.jface.viewers.TreeViewer;
 import org.eclipse.jface.viewers.Viewer;
+import org.eclipse.jface.viewers.ViewerDropAdapter;
 import org.eclipse.jface.viewers.ViewerFilter;
 import org.eclipse.swt.SWT;
+import org.eclipse.swt.dnd.DND;
+import org.eclipse.swt.dnd.FileTransfer;
+import org.eclipse.swt.dnd.Transfer;
+import org.eclipse.swt.dnd.TransferData;
 import org.eclipse.swt.widgets.Composite;
 import org.eclipse.ui.IWorkbenchWindow;
 import org.eclipse.ui.PartInitException;
@@ -30,6 +38,7 @@ import jakarta.inject.Inject;
 import dev.penduline.model.persistence.AtomicFileWrite;
 import dev.penduline.model.persistence.SaveLock;
 import dev.penduline.ui.PendulineViews;
+import dev.penduline.ui.internal.wizard.RecordImportWizard;
 
 /**
  * The workspace as a tree: one project per mechanism, with its mechanism file, parts lists and
@@ -72,6 +81,25 @@ public final class ProjectFilesPart {
         viewer.setInput(workspace.getRoot());
         viewer.addSelectionChangedListener(e -> selection.setSelection(
                 e.getSelection() instanceof IStructuredSelection s && s.size() == 1 ? s.getFirstElement() : e.getSelection()));
+        // swing records dropped on a mechanism file open the record import on it
+        viewer.addDropSupport(DND.DROP_COPY | DND.DROP_DEFAULT, new Transfer[] {FileTransfer.getInstance()},
+                new ViewerDropAdapter(viewer) {
+                    @Override
+                    public boolean validateDrop(Object target, int operation, TransferData type) {
+                        return target instanceof IFile f && MechanismSelection.isMechanismFile(f)
+                                && FileTransfer.getInstance().isSupportedType(type);
+                    }
+
+                    @Override
+                    public boolean performDrop(Object data) {
+                        if (!(getCurrentTarget() instanceof IFile f) || !(data instanceof String[] paths)) {
+                            return false;
+                        }
+                        RecordImportWizard.open(viewer.getControl().getShell(), f,
+                                Arrays.stream(paths).map(Path::of).toList());
+                        return true;
+                    }
+                });
         viewer.addDoubleClickListener(e -> {
             Object first = e.getSelection() instanceof IStructuredSelection s ? s.getFirstElement() : null;
             if (first instanceof IFile f && MechanismSelection.isMechanismFile(f)) {

@@ -104,21 +104,36 @@ public record ChartSubject(Path file, String name, List<TestSession> sessions, O
         } catch (InputException e) {
             return SwingChartContent.failed(title, e.getMessage());
         }
-        SwingRecord record = read.record();
+        List<String> warnings = new ArrayList<>(read.warnings());
+        problem.ifPresent(p -> warnings.add("without the mechanism (no period check, no SI estimates): " + p));
+        return ofRecord(title, read.record(), mechanism, warnings);
+    }
+
+    /**
+     * The content for a record: the recorded angle, its turning points, the release and the stop
+     * the analysis finds, and its summary; also for a record not yet added (the import wizard).
+     *
+     * @param title     the chart's title
+     * @param record    the record as read
+     * @param mechanism the mechanism, when it could be computed (for the period check and SI estimates)
+     * @param warnings  warnings to show before the record's and the analysis' own
+     * @return the content
+     */
+    public static SwingChartContent ofRecord(String title, SwingRecord record, Optional<MechanismSource> mechanism,
+            List<String> warnings) {
         double[] degrees = degrees(record.angles());
         PlotThinning.Points curve = PlotThinning.keepExtremes(record.times(), degrees, SwingChartContent.DRAWN_POINTS);
-        List<String> warnings = new ArrayList<>(read.warnings());
-        warnings.addAll(record.warnings());
-        problem.ifPresent(p -> warnings.add("without the mechanism (no period check, no SI estimates): " + p));
+        List<String> all = new ArrayList<>(warnings);
+        all.addAll(record.warnings());
         SwingAnalysis analysis;
         try {
             analysis = SwingSessionAnalysis.analyse(record, mechanism);
         } catch (InputException e) {
             return new SwingChartContent(title, curve, record.size(), new PlotThinning.Points(new double[0],
-                    new double[0]), Double.NaN, false, List.of("Not analysed: " + e.getMessage()), warnings,
+                    new double[0]), Double.NaN, Double.NaN, false, List.of("Not analysed: " + e.getMessage()), all,
                     Optional.empty());
         }
-        warnings.addAll(analysis.warnings());
+        all.addAll(analysis.warnings());
         int n = analysis.turningPoints().size();
         double[] tt = new double[n];
         double[] ta = new double[n];
@@ -126,8 +141,9 @@ public record ChartSubject(Path file, String name, List<TestSession> sessions, O
             tt[i] = analysis.turningPoints().get(i).time();
             ta[i] = Unit.DEGREE.fromSi(analysis.turningPoints().get(i).angle());
         }
+        double stop = analysis.stop().stopped() ? analysis.stop().time() : Double.NaN;
         return new SwingChartContent(title, curve, record.size(), new PlotThinning.Points(tt, ta),
-                analysis.release().time(), false, AnalysisSummary.lines(analysis, mechanism.isPresent()), warnings,
+                analysis.release().time(), stop, false, AnalysisSummary.lines(analysis, mechanism.isPresent()), all,
                 Optional.empty());
     }
 
@@ -171,7 +187,7 @@ public record ChartSubject(Path file, String name, List<TestSession> sessions, O
                         + "; small-angle period T0: " + Figures.significant(t0) + " s.");
         PlotThinning.Points curve = PlotThinning.keepExtremes(run.times(), degrees(run.angles()),
                 SwingChartContent.DRAWN_POINTS);
-        return new SwingChartContent(title, curve, run.size(), new PlotThinning.Points(tt, ta), 0, true, summary,
+        return new SwingChartContent(title, curve, run.size(), new PlotThinning.Points(tt, ta), 0, Double.NaN, true, summary,
                 m.warnings(), Optional.empty());
     }
 

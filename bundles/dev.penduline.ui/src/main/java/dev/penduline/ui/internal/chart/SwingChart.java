@@ -18,7 +18,7 @@ import org.eclipse.swtchart.LineStyle;
  * the release as a dashed vertical line, with axis titles in the units plotted; zoom, pan, the
  * hover readout and the exports come from {@link ChartTools}.
  */
-final class SwingChart {
+public final class SwingChart {
 
     /** Series id of the recorded (or predicted) angle. */
     static final String CURVE = "angle";
@@ -26,10 +26,17 @@ final class SwingChart {
     static final String TURNING_POINTS = "turning points";
     /** Series id of the release marker. */
     static final String RELEASE = "release";
+    /** Series id of the stop marker. */
+    static final String STOP = "stop";
 
     private final Chart chart;
 
-    SwingChart(Composite parent) {
+    /**
+     * A chart of swings, with the chart tools (zoom, pan, values on hover, export).
+     *
+     * @param parent the parent
+     */
+    public SwingChart(Composite parent) {
         chart = new Chart(parent, SWT.NONE);
         chart.getTitle().setText("No mechanism selected");
         chart.getTitle().setFont(JFaceResources.getBannerFont());
@@ -40,11 +47,17 @@ final class SwingChart {
         ChartTools.install(chart);
     }
 
-    Chart control() {
+    /** @return the SWTChart widget */
+    public Chart control() {
         return chart;
     }
 
-    void draw(SwingChartContent c) {
+    /**
+     * Draws a content, replacing what was drawn.
+     *
+     * @param c the content
+     */
+    public void draw(SwingChartContent c) {
         ISeriesSet set = chart.getSeriesSet();
         for (ISeries<?> s : set.getSeries()) {
             set.deleteSeries(s.getId());
@@ -64,21 +77,29 @@ final class SwingChart {
                 turns.setXSeries(c.turningPoints().x());
                 turns.setYSeries(c.turningPoints().y());
             }
+            double lo = Double.POSITIVE_INFINITY;
+            double hi = Double.NEGATIVE_INFINITY;
+            for (double y : c.curve().y()) {
+                lo = Math.min(lo, y);
+                hi = Math.max(hi, y);
+            }
             if (Double.isFinite(c.releaseTime())) {
-                double lo = Double.POSITIVE_INFINITY;
-                double hi = Double.NEGATIVE_INFINITY;
-                for (double y : c.curve().y()) {
-                    lo = Math.min(lo, y);
-                    hi = Math.max(hi, y);
-                }
-                ILineSeries<?> release = line(set, RELEASE, "release", color(SWT.COLOR_DARK_GREEN));
-                release.setLineStyle(LineStyle.DASH);
-                release.setXSeries(new double[] {c.releaseTime(), c.releaseTime()});
-                release.setYSeries(new double[] {lo, hi});
+                marker(set, RELEASE, "release", c.releaseTime(), lo, hi, color(SWT.COLOR_DARK_GREEN));
+            }
+            if (Double.isFinite(c.stopTime())) {
+                marker(set, STOP, "stop (at rest)", c.stopTime(), lo, hi, color(SWT.COLOR_DARK_MAGENTA));
             }
         }
         chart.getAxisSet().adjustRange();
         chart.redraw();
+    }
+
+    /** A dashed vertical line across the curve's range at an instant. */
+    private static void marker(ISeriesSet set, String id, String description, double time, double lo, double hi, Color color) {
+        ILineSeries<?> m = line(set, id, description, color);
+        m.setLineStyle(LineStyle.DASH);
+        m.setXSeries(new double[] {time, time});
+        m.setYSeries(new double[] {lo, hi});
     }
 
     private static ILineSeries<?> line(ISeriesSet set, String id, String description, Color color) {

@@ -14,13 +14,14 @@ import java.util.Optional;
  * @param turningPoints the turning points found by the analysis (or the simulator), time (s)
  *                      and angle (°)
  * @param releaseTime   the release instant (s), NaN when unknown
+ * @param stopTime      when the body came to rest (s), NaN when it did not or it is unknown
  * @param predicted     true when the curve is a prediction, not a record
  * @param summary       the short summary under the chart (first look from the decay, release, offset, estimates)
  * @param warnings      what the user should know about the record or the analysis
  * @param error         what went wrong, when nothing could be drawn
  */
 public record SwingChartContent(String title, PlotThinning.Points curve, int curvePoints,
-        PlotThinning.Points turningPoints, double releaseTime, boolean predicted, List<String> summary,
+        PlotThinning.Points turningPoints, double releaseTime, double stopTime, boolean predicted, List<String> summary,
         List<String> warnings, Optional<String> error) {
 
     /** The most points drawn of one curve; longer records are thinned keeping their extremes. */
@@ -42,7 +43,7 @@ public record SwingChartContent(String title, PlotThinning.Points curve, int cur
      * @return the content
      */
     public static SwingChartContent failed(String title, String message) {
-        return new SwingChartContent(title, NONE, 0, NONE, Double.NaN, false, List.of(), List.of(),
+        return new SwingChartContent(title, NONE, 0, NONE, Double.NaN, Double.NaN, false, List.of(), List.of(),
                 Optional.of(message));
     }
 }
