@@ -43,6 +43,7 @@ class WorkbenchCapabilitiesTest {
         c.put("mechanismViews", d -> new MechanismViewsScenario(d.window(), d.shots()).run());
         c.put("frictionView", d -> new FrictionViewScenario(d.window(), d.shots()).run());
         c.put("mechanismDocument", new MechanismDocumentCapability());
+        c.put("preferences", new PreferencesCapability());
         return c;
     }
 
