@@ -7,12 +7,15 @@ import static org.junit.jupiter.api.Assertions.assertNotNull;
 import static org.junit.jupiter.api.Assertions.assertNull;
 import static org.junit.jupiter.api.Assertions.assertTrue;
 
+import java.math.BigDecimal;
 import java.nio.file.Files;
 import java.nio.file.Path;
 import java.util.ArrayList;
 import java.util.List;
 import java.util.Optional;
 
+import org.eclipse.core.resources.IFile;
+import org.eclipse.e4.ui.workbench.modeling.EPartService.PartState;
 import org.eclipse.jface.dialogs.IDialogConstants;
 import org.eclipse.jface.preference.PreferenceDialog;
 import org.eclipse.swt.SWT;
@@ -29,6 +32,11 @@ import org.eclipse.ui.dialogs.PreferencesUtil;
 import dev.penduline.services.Defaults;
 import dev.penduline.services.MechanismLoader;
 import dev.penduline.services.present.Figures;
+import dev.penduline.ui.PendulineViews;
+import dev.penduline.ui.internal.MechanismSelection;
+import dev.penduline.ui.internal.mechanism.InertiaTotal;
+import dev.penduline.ui.internal.mechanism.MechanismPart;
+import dev.penduline.ui.internal.mechanism.MechanismSheet;
 import dev.penduline.ui.internal.preferences.PendulinePreferencePage;
 import dev.penduline.ui.internal.preferences.WorkbenchDefaults;
 import dev.penduline.ui.internal.wizard.MechanismProjectCreation;
@@ -38,9 +46,17 @@ import dev.penduline.ui.internal.wizard.MechanismProjectCreation;
  * a value typed into its field and Apply or OK reach the per-user defaults file (here in a
  * temporary folder, through the {@value Defaults#CONFIG_DIR_PROPERTY} seam) and the workbench
  * (display precision, gravity of a new mechanism); a bad value shows the page's error naming the
- * key, disables OK and Apply, and writes nothing.
+ * key, disables OK and Apply, and writes nothing. A new mechanism project then has the user's
+ * gravity and the Mechanism view shows its period to the user's digits.
  */
 final class PreferencesCapability implements Capability {
+
+    /** INVENTED test part: a 2 kg point mass 0.5 m below the pivot axis. */
+    private static final String BOB = """
+            # INVENTED test data for the workbench test, not a real product.
+            name,shape,mass_kg,x_m,y_m,z_m
+            bob,point,2,0,-0.5,0
+            """;
 
     @Override
     public void run(WorkbenchDriver driver) throws Exception {
@@ -122,10 +138,24 @@ final class PreferencesCapability implements Capability {
         assertEquals(new Defaults(9.81, 15, 1, 12, 6), saved, "the file after OK");
         assertEquals(saved, WorkbenchDefaults.current());
 
-        // the workbench's new mechanism takes the user's gravity
-        Path made = MechanismProjectCreation.create("preferences-gate", "Preferences gate (invented)", Optional.empty(), null)
-                .mechanismFile().getLocation().toFile().toPath();
-        assertEquals(9.81, MechanismLoader.readMechanism(made).getGravity(), "gravity of a new mechanism");
+        // a new mechanism project takes the user's gravity, and the Mechanism view shows it to the user's digits
+        Path csv = Files.writeString(Files.createTempDirectory("penduline-preferences-parts").resolve("bob.csv"), BOB);
+        IFile made = MechanismProjectCreation.create("preferences-bob", "Preferences bob (invented)", Optional.of(csv), null)
+                .mechanismFile();
+        assertEquals(9.81, MechanismLoader.readMechanism(MechanismSelection.pathOf(made)).getGravity(), "gravity of a new mechanism");
+        driver.reveal(made);
+        MechanismPart view = (MechanismPart) driver.part(PendulineViews.MECHANISM).getObject();
+        MechanismSheet sheet = driver.waitFor("the Mechanism view to show the new mechanism", () -> {
+            MechanismSheet s = view.sheet();
+            return s != null && "Preferences bob (invented)".equals(s.title())
+                    && s.shown(InertiaTotal.SMALL_ANGLE_PERIOD).isPresent() ? s : null;
+        });
+        String period = sheet.shown(InertiaTotal.SMALL_ANGLE_PERIOD).orElseThrow();
+        // a point mass 0.5 m below the axis is a simple pendulum: T0 = 2π √(L/g) (any mechanics textbook)
+        assertEquals(6, new BigDecimal(period).precision(), "six significant digits in the view: " + period);
+        assertEquals(2 * Math.PI * Math.sqrt(0.5 / 9.81), Double.parseDouble(period), 0.5e-5, "T0 with the user's gravity");
+        driver.parts().showPart(PendulineViews.MECHANISM, PartState.ACTIVATE);
+        driver.shot(driver.shell(), "preferences-mechanism.png");
         try (var left = Files.list(file.getParent())) {
             assertEquals(List.of(file), left.toList(), "only the defaults file: no temporary file is left");
         }
