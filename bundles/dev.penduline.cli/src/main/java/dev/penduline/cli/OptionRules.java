@@ -1,7 +1,8 @@
 package dev.penduline.cli;
 
-import java.util.Locale;
 import java.util.Map;
+
+import dev.penduline.services.ValueRange;
 
 /**
  * The one table of what every numeric option accepts: its range, whether it must be a whole
@@ -35,9 +36,7 @@ public final class OptionRules {
          * @return true when inside the range (and whole when required)
          */
         public boolean accepts(double v) {
-            boolean lowOk = lowOpen ? v > low : v >= low;
-            boolean highOk = highOpen ? v < high : v <= high;
-            return lowOk && highOk && (!whole || v == Math.rint(v));
+            return range().accepts(v);
         }
 
         /**
@@ -46,25 +45,16 @@ public final class OptionRules {
          * @return the description
          */
         public String describe() {
-            String u = unit.isEmpty() ? "" : unit.startsWith("°") ? unit : " " + unit;
-            String lo = (lowOpen ? "above " : "from ") + number(low);
-            String hi = (highOpen ? "below " : "at most ") + number(high);
-            String kind = whole ? "a whole number " : "a value ";
-            if (low == -high && lowOpen == highOpen) {
-                return kind + (highOpen ? "strictly between " : "between ") + number(low) + " and " + number(high) + u;
-            }
-            return kind + lo + " and " + hi + u;
+            return range().describe(unit);
         }
 
-        private static String number(double v) {
-            if (v == Math.rint(v) && Math.abs(v) < 1e7) {
-                return String.valueOf((long) v);
-            }
-            String e = String.format(Locale.ROOT, "%.0e", v);
-            if (Double.parseDouble(e) == v) {
-                return e.replace("e+0", "e").replace("e+", "e");
-            }
-            return String.format(Locale.ROOT, "%.3g", v);
+        /**
+         * The range alone, as the user's defaults file checks its settings too.
+         *
+         * @return the range
+         */
+        public ValueRange range() {
+            return new ValueRange(low, lowOpen, high, highOpen, whole);
         }
     }
 
@@ -145,8 +135,8 @@ public final class OptionRules {
     public static double check(String option, String raw, double value) throws UsageException {
         Rule r = of(option);
         if (!r.accepts(value)) {
-            String why = r.whole() && value != Math.rint(value) ? "is not a whole number" : "is out of range";
-            throw new UsageException("option --" + option + ": '" + shown(raw) + "' " + why + ": give " + r.describe()
+            throw new UsageException("option --" + option + ": '" + shown(raw) + "' " + r.range().refusal(value) + ": give "
+                    + r.describe()
                     + (r.hint().isEmpty() ? "" : " (" + r.hint() + ")"));
         }
         return value;

@@ -17,11 +17,21 @@ import dev.penduline.cli.commands.InertiaCommand;
 import dev.penduline.cli.commands.SimulateCommand;
 import dev.penduline.cli.internal.FaultReport;
 import dev.penduline.cli.internal.PrintableWriter;
+import dev.penduline.services.Defaults;
+import dev.penduline.services.InputException;
+import dev.penduline.services.present.Figures;
 
 /** Dispatches {@code penduline COMMAND ...} to its {@link Command}; prints help and versions. */
 public final class PendulineCommandLine {
 
     private static final String PROGRAM = "penduline";
+
+    /**
+     * The global option that makes commands take their defaults (gravity, verdict margin, settle
+     * band, resamples, significant digits) from the user's defaults file; without it the command
+     * line never reads that file.
+     */
+    public static final String USE_PREFERENCES = "--use-preferences";
 
     private final Map<String, Command> commands = new LinkedHashMap<>();
 
@@ -62,7 +72,29 @@ public final class PendulineCommandLine {
         }
     }
 
-    private ExitCode dispatch(String[] args, PrintWriter out, PrintWriter err) {
+    private ExitCode dispatch(String[] given, PrintWriter out, PrintWriter err) {
+        List<String> rest = new ArrayList<>(List.of(given));
+        if (!rest.removeIf(USE_PREFERENCES::equals)) {
+            return dispatch(given, Defaults.BUILT_IN, out, err);
+        }
+        Defaults defaults;
+        try {
+            defaults = Defaults.read();
+        } catch (InputException e) {
+            err.println(PROGRAM + ": " + e.getMessage() + " (the defaults file that " + USE_PREFERENCES
+                    + " reads; fix it in the workbench's preferences or by hand, or run without " + USE_PREFERENCES + ")");
+            return ExitCode.USAGE_OR_INPUT;
+        }
+        // the display precision holds for this command only (an in-process caller runs others after it)
+        int digits = Figures.useDigits(defaults.significantDigits());
+        try {
+            return dispatch(rest.toArray(String[]::new), defaults, out, err);
+        } finally {
+            Figures.useDigits(digits);
+        }
+    }
+
+    private ExitCode dispatch(String[] args, Defaults defaults, PrintWriter out, PrintWriter err) {
         if (args.length == 0) {
             printHelp(out);
             return ExitCode.USAGE_OR_INPUT;
@@ -84,7 +116,7 @@ public final class PendulineCommandLine {
                     return ExitCode.USAGE_OR_INPUT;
                 }
                 try {
-                    return command.run(new ArrayList<>(List.of(args).subList(1, args.length)), out, err);
+                    return command.run(new ArrayList<>(List.of(args).subList(1, args.length)), defaults, out, err);
                 } catch (UsageException e) {
                     out.flush();
                     err.println(PROGRAM + " " + command.name() + ": " + e.getMessage());
@@ -132,6 +164,13 @@ public final class PendulineCommandLine {
         for (String[] r : rows) {
             out.printf("  %-" + width + "s  %s%n", r[0], r[1]);
         }
+        out.println();
+        out.println("Global option (anywhere on the line):");
+        out.println("  " + USE_PREFERENCES + "  take the defaults of gravity (parts lists, lumped properties, new files),");
+        out.println("                     the fit's verdict margin and resamples, the settle band and the significant");
+        out.println("                     digits of the reports from " + Defaults.location());
+        out.println("                     (the workbench's preferences); options given on the line still win.");
+        out.println("                     Without it that file is never read.");
         out.println();
         out.println("Exit codes: 0 ok, 1 a computation failed, 2 a usage or input error.");
     }

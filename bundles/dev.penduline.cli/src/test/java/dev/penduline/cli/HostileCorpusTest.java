@@ -180,6 +180,8 @@ class HostileCorpusTest {
             ProcessBuilder pb = new ProcessBuilder(command).directory(dir.toFile()).redirectErrorStream(true)
                     .redirectInput(ProcessBuilder.Redirect.from(Path.of("/dev/null").toFile()));
             pb.environment().put("PENDULINE_LOG_DIR", dir.resolve(".penduline-logs").toString());
+            // the user's defaults file (--use-preferences) is the entry's own, never the real user's
+            pb.environment().put("XDG_CONFIG_HOME", dir.resolve(".config").toString());
             Result r = start(pb, e.limitSeconds());
             assertFalse(r.timedOut(), where + ": did not finish within " + e.limitSeconds() + " s; printed: " + r.output());
             String text = r.output();

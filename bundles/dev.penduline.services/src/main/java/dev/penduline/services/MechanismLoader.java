@@ -60,6 +60,19 @@ public final class MechanismLoader {
     }
 
     /**
+     * Returns a loader whose gravity applies where the mechanism states none of its own: a parts
+     * list (and, through {@link #lumped}, lumped properties take it from the caller); a mechanism
+     * file keeps its own local g. The user's default gravity ({@link Defaults#gravity()}) comes
+     * in here; an explicit {@link #withGravity} given after it wins everywhere.
+     *
+     * @param g local gravitational acceleration (m/s²)
+     * @return the loader
+     */
+    public MechanismLoader withDefaultGravity(double g) {
+        return new MechanismLoader(engine.withGravity(g), gravityOverride);
+    }
+
+    /**
      * Loads a mechanism from a file, chosen by its extension: {@code .csv} is a parts list,
      * {@code .penduline} a mechanism file.
      *

@@ -9,6 +9,7 @@ import dev.penduline.model.Mechanism;
 import dev.penduline.model.naming.NamedElements;
 import dev.penduline.model.naming.StableIds;
 import dev.penduline.model.persistence.MechanismFormat;
+import dev.penduline.physics.MechanismProperties;
 import dev.penduline.records.RecordFormatException;
 import dev.penduline.records.parts.PartsList;
 import dev.penduline.records.parts.PartsListReader;
@@ -63,11 +64,26 @@ public final class NewMechanismFile {
      * @throws InputException when the target exists or cannot be written
      */
     public static void write(String name, Optional<PartsList> parts, Path target) throws InputException {
+        write(name, parts, target, MechanismProperties.STANDARD_GRAVITY);
+    }
+
+    /**
+     * Writes a new mechanism file for a given local gravity (the user's default,
+     * {@link Defaults#gravity()}); otherwise as {@link #write(String, Optional, Path)}.
+     *
+     * @param name    the mechanism's name
+     * @param parts   the parts as read, or empty
+     * @param target  the mechanism file to create; it must not exist
+     * @param gravity the mechanism's local gravity (m/s²)
+     * @throws InputException when the target exists or cannot be written
+     */
+    public static void write(String name, Optional<PartsList> parts, Path target, double gravity) throws InputException {
         if (parts.isPresent()) {
-            PartsImport.write(name, parts.get(), target);
+            PartsImport.write(name, parts.get(), target, gravity, note -> { });
             return;
         }
         Mechanism mechanism = NamedElements.mechanism(name);
+        mechanism.setGravity(gravity);
         MechanismStore.createNew(mechanism, target, note -> { });
     }
 }

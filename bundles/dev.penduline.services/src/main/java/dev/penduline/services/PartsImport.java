@@ -22,6 +22,7 @@ import dev.penduline.model.ShapeKind;
 import dev.penduline.model.TensorReference;
 import dev.penduline.model.adapt.MechanismAdapter;
 import dev.penduline.model.naming.NamedElements;
+import dev.penduline.physics.MechanismProperties;
 import dev.penduline.physics.inertia.Axis;
 import dev.penduline.physics.inertia.Box;
 import dev.penduline.physics.inertia.Cylinder;
@@ -87,11 +88,29 @@ public final class PartsImport {
      * @throws InputException when the target exists or cannot be written
      */
     public static void write(String name, PartsList parts, Path target, Consumer<String> notes) throws InputException {
+        write(name, parts, target, MechanismProperties.STANDARD_GRAVITY, notes);
+    }
+
+    /**
+     * Writes a new mechanism file from a parts list for a given local gravity; refuses to
+     * overwrite an existing file.
+     *
+     * @param name    the mechanism's name
+     * @param parts   the parts as read
+     * @param target  the mechanism file to create
+     * @param gravity the mechanism's local gravity (m/s²)
+     * @param notes   receives notes of the save for the user
+     * @throws InputException when the target exists or cannot be written
+     */
+    public static void write(String name, PartsList parts, Path target, double gravity, Consumer<String> notes)
+            throws InputException {
         Optional<String> badName = PlainText.nameProblem(name);
         if (badName.isPresent()) {
             throw new InputException("the mechanism's name " + badName.get());
         }
-        MechanismStore.createNew(toMechanism(name, parts), target, notes);
+        Mechanism m = toMechanism(name, parts);
+        m.setGravity(gravity);
+        MechanismStore.createNew(m, target, notes);
     }
 
     /**
@@ -105,9 +124,25 @@ public final class PartsImport {
      * @throws InputException when the list is bad, or the target exists or cannot be written
      */
     public static List<String> importFile(Path partsList, Path target, String name) throws InputException {
+        return importFile(partsList, target, name, MechanismProperties.STANDARD_GRAVITY);
+    }
+
+    /**
+     * Reads a parts-list CSV and writes it as a new mechanism file for a given local gravity (the
+     * user's default, {@link Defaults#gravity()}); standard gravity is not written, as the
+     * file format's default.
+     *
+     * @param partsList the parts-list CSV
+     * @param target    the mechanism file to create (must not exist)
+     * @param name      the mechanism's name
+     * @param gravity   the mechanism's local gravity (m/s²)
+     * @return the warnings of reading the list and the notes of the save
+     * @throws InputException when the list is bad, or the target exists or cannot be written
+     */
+    public static List<String> importFile(Path partsList, Path target, String name, double gravity) throws InputException {
         PartsList parts = readPartsList(partsList);
         List<String> said = new ArrayList<>(parts.warnings());
-        write(name, parts, target, said::add);
+        write(name, parts, target, gravity, said::add);
         return said;
     }
 

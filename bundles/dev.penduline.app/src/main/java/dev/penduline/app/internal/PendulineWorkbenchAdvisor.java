@@ -18,6 +18,7 @@ import org.eclipse.ui.ide.IDE;
 
 import dev.penduline.ui.PendulineViews;
 import dev.penduline.ui.ProjectFolders;
+import dev.penduline.ui.internal.preferences.WorkbenchDefaults;
 
 /**
  * Opens the Penduline perspective and keeps the workspace saved. Public (to the test bundle
@@ -34,6 +35,8 @@ public class PendulineWorkbenchAdvisor extends WorkbenchAdvisor {
         configurer.setSaveAndRestore(true);
         // Adapters that let the platform's views show workspace resources (labels, properties).
         IDE.registerAdapters();
+        // The user's defaults (display precision, fit resamples, gravity of new mechanisms) before any view draws.
+        WorkbenchDefaults.reload();
         declareProblemImages(configurer);
     }
 

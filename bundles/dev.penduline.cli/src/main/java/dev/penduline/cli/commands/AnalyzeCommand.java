@@ -25,6 +25,7 @@ import dev.penduline.physics.swing.SwingCycle;
 import dev.penduline.physics.units.Unit;
 import dev.penduline.records.swing.SwingImportOptions;
 import dev.penduline.records.swing.SwingRecord;
+import dev.penduline.services.Defaults;
 import dev.penduline.services.InputException;
 import dev.penduline.services.MechanismSource;
 import dev.penduline.services.SessionRecords;
@@ -71,11 +72,16 @@ public final class AnalyzeCommand implements Command {
 
     @Override
     public ExitCode run(List<String> args, PrintWriter out, PrintWriter err) throws UsageException {
+        return run(args, Defaults.BUILT_IN, out, err);
+    }
+
+    @Override
+    public ExitCode run(List<String> args, Defaults defaults, PrintWriter out, PrintWriter err) throws UsageException {
         Arguments a = Arguments.parse(args, OPTIONS, Set.of("json"));
         if (a.positional().size() != 1) {
             throw new UsageException("give exactly one record file. " + usage());
         }
-        Optional<MechanismSource> mechanism = MechanismOptions.optional(a);
+        Optional<MechanismSource> mechanism = MechanismOptions.optional(a, defaults);
         SwingRecord record;
         SwingAnalysis analysis;
         Optional<String> change = Optional.empty();

@@ -11,6 +11,7 @@ import dev.penduline.cli.ExitCode;
 import dev.penduline.cli.UsageException;
 import dev.penduline.physics.motion.FrictionTorques;
 import dev.penduline.physics.units.Unit;
+import dev.penduline.services.Defaults;
 import dev.penduline.services.DemoRecords;
 import dev.penduline.services.InputException;
 import dev.penduline.services.MechanismSource;
@@ -58,11 +59,17 @@ public final class DemoRecordCommand implements Command {
 
     @Override
     public ExitCode run(List<String> args, PrintWriter out, PrintWriter err) throws UsageException {
+        return run(args, Defaults.BUILT_IN, out, err);
+    }
+
+    @Override
+    public ExitCode run(List<String> args, Defaults defaults, PrintWriter out, PrintWriter err) throws UsageException {
         Arguments a = Arguments.parse(args, OPTIONS, Set.of("force"));
         if (!a.has("out")) {
             throw new UsageException("--out RECORD.csv is required");
         }
-        MechanismSource mechanism = MechanismOptions.resolve(a, a.positional().isEmpty() ? null : a.positional().get(0));
+        MechanismSource mechanism = MechanismOptions.resolve(a, a.positional().isEmpty() ? null : a.positional().get(0),
+                defaults);
         try {
             FrictionTorques friction = new FrictionTorques(a.number("viscous", 0), a.number("coulomb", 0),
                     a.number("stiction", 0), a.number("drag", 0));

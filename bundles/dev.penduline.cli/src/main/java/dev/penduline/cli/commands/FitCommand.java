@@ -19,6 +19,7 @@ import dev.penduline.physics.identify.FitControl;
 import dev.penduline.physics.identify.FitSettings;
 import dev.penduline.physics.identify.FitStatus;
 import dev.penduline.physics.identify.FrictionTerm;
+import dev.penduline.services.Defaults;
 import dev.penduline.services.FitRecorder;
 import dev.penduline.services.FrictionIdentification;
 import dev.penduline.services.FrictionIdentification.Outcome;
@@ -68,12 +69,14 @@ public final class FitCommand implements Command {
                                            viscous+drag; viscous+coulomb+drag, each with stiction when
                                            a record shows a stop. Or a list such as viscous,coulomb,stiction
                   --fix-inertia            hold the pivot inertia at the calculated value
-                  --resamples N            bootstrap refits for the resampling uncertainty (default 40)
+                  --resamples N            bootstrap refits for the resampling uncertainty (default 40;
+                                           with --use-preferences: the defaults file's)
                   --max-iterations N       iteration limit of each fit (default 100)
                   --seed N                 seed of the bootstrap (default fixed: results repeat)
                   --verdict-margin PP      lead in percentage points of the energy lost that one loss
                                            needs over the next to be called dominant (default 15);
-                                           otherwise the verdict is "mixed"
+                                           otherwise the verdict is "mixed" (--use-preferences:
+                                           the defaults file's)
                   --no-save                do not store the result in the mechanism file
                   --accept-changed-records fit a session whose record changed since it was added (it is
                                            refused otherwise) and store the new content's hash with the fit
@@ -83,15 +86,20 @@ public final class FitCommand implements Command {
 
     @Override
     public ExitCode run(List<String> args, PrintWriter out, PrintWriter err) throws UsageException {
+        return run(args, Defaults.BUILT_IN, out, err);
+    }
+
+    @Override
+    public ExitCode run(List<String> args, Defaults defaults, PrintWriter out, PrintWriter err) throws UsageException {
         Arguments a = Arguments.parse(args, OPTIONS, Set.of("json", "fix-inertia", "no-save", ACCEPT_CHANGED));
         if (a.positional().size() > 1) {
             throw new UsageException("at most one mechanism file; got " + a.positional());
         }
         String file = a.positional().isEmpty() ? null : a.positional().get(0);
-        MechanismSource mechanism = MechanismOptions.resolve(a, file);
+        MechanismSource mechanism = MechanismOptions.resolve(a, file, defaults);
         boolean mechanismFile = file != null && file.endsWith(".penduline");
         Optional<Set<FrictionTerm>> terms = terms(a.value("terms"));
-        FitSettings settings = FitSettings.defaults();
+        FitSettings settings = defaults.applyTo(FitSettings.defaults());
         if (a.has("resamples") || a.has("seed")) {
             settings = settings.withResampling((int) a.whole("resamples", settings.resamples()),
                     a.whole("seed", settings.seed()), settings.parallel());

@@ -12,6 +12,7 @@ import dev.penduline.cli.json.JsonWriter;
 import dev.penduline.model.Mechanism;
 import dev.penduline.model.persistence.MechanismFormat;
 import dev.penduline.physics.motion.FrictionTorques;
+import dev.penduline.services.Defaults;
 import dev.penduline.services.InputException;
 import dev.penduline.services.MechanismForecast.FrictionSource;
 import dev.penduline.services.MechanismLoader;
@@ -48,16 +49,17 @@ final class FrictionOptions {
      * The mechanism given as the only positional argument (or by lumped properties), its warnings
      * printed.
      *
-     * @param a   the arguments
-     * @param err where warnings go
+     * @param a        the arguments
+     * @param defaults the gravity of a parts list or lumped properties without --gravity
+     * @param err      where warnings go
      * @return the mechanism
      * @throws UsageException when more than one file is given or the mechanism is bad
      */
-    static MechanismSource mechanism(Arguments a, PrintWriter err) throws UsageException {
+    static MechanismSource mechanism(Arguments a, Defaults defaults, PrintWriter err) throws UsageException {
         if (a.positional().size() > 1) {
             throw new UsageException("at most one mechanism file; got " + a.positional());
         }
-        MechanismSource mechanism = MechanismOptions.resolve(a, file(a));
+        MechanismSource mechanism = MechanismOptions.resolve(a, file(a), defaults);
         for (String w : mechanism.warnings()) {
             err.println("warning: " + w);
         }

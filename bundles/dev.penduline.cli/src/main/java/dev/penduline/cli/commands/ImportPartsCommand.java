@@ -10,6 +10,7 @@ import dev.penduline.cli.Arguments;
 import dev.penduline.cli.Command;
 import dev.penduline.cli.ExitCode;
 import dev.penduline.cli.UsageException;
+import dev.penduline.services.Defaults;
 import dev.penduline.services.InputException;
 import dev.penduline.services.PartsImport;
 
@@ -40,11 +41,18 @@ public final class ImportPartsCommand implements Command {
 
                   --to FILE     the mechanism file to create (.penduline)
                   --into FILE   the existing mechanism file whose parts to replace
-                  --name NAME   the mechanism's name (default: the parts list's file name; --to only)""";
+                  --name NAME   the mechanism's name (default: the parts list's file name; --to only)
+
+                With --use-preferences a new file (--to) gets the defaults file's gravity.""";
     }
 
     @Override
     public ExitCode run(List<String> args, PrintWriter out, PrintWriter err) throws UsageException {
+        return run(args, Defaults.BUILT_IN, out, err);
+    }
+
+    @Override
+    public ExitCode run(List<String> args, Defaults defaults, PrintWriter out, PrintWriter err) throws UsageException {
         Arguments a = Arguments.parse(args, Set.of("to", "into", "name"), Set.of());
         if (a.positional().size() != 1 || a.has("to") == a.has("into")) {
             throw new UsageException("give one parts list and either --to FILE.penduline (a new file) or --into"
@@ -70,7 +78,7 @@ public final class ImportPartsCommand implements Command {
         }
         String name = a.has("name") ? a.value("name") : csv.getFileName().toString().replaceFirst("\\.[^.]*$", "");
         try {
-            for (String w : PartsImport.importFile(csv, target, name)) {
+            for (String w : PartsImport.importFile(csv, target, name, defaults.gravity())) {
                 err.println("warning: " + w);
             }
         } catch (InputException e) {

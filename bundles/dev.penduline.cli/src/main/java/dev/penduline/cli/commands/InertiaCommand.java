@@ -17,6 +17,7 @@ import dev.penduline.physics.inertia.InertiaSummary;
 import dev.penduline.physics.inertia.PartContribution;
 import dev.penduline.physics.inertia.ToleranceSpread;
 import dev.penduline.physics.units.Unit;
+import dev.penduline.services.Defaults;
 import dev.penduline.services.InputException;
 import dev.penduline.services.MechanismForecast;
 import dev.penduline.services.MechanismLoader;
@@ -53,7 +54,8 @@ public final class InertiaCommand implements Command {
                 mass, Lc, J0 and the period can move within them: a Monte Carlo standard deviation
                 and 5th/95th percentiles, with the linearised (GUM) standard uncertainty beside.
 
-                  --gravity M_S2   local gravity (default 9.80665 m/s²)
+                  --gravity M_S2   local gravity (default 9.80665 m/s², or the mechanism file's;
+                                   with --use-preferences the defaults file's for a parts list)
                   --draws N        Monte Carlo draws over the tolerances (default 2000)
                   --seed N         their seed (default 20261202), so results repeat
                   --json           print a JSON object instead of the table""";
@@ -61,11 +63,16 @@ public final class InertiaCommand implements Command {
 
     @Override
     public ExitCode run(List<String> args, PrintWriter out, PrintWriter err) throws UsageException {
+        return run(args, Defaults.BUILT_IN, out, err);
+    }
+
+    @Override
+    public ExitCode run(List<String> args, Defaults defaults, PrintWriter out, PrintWriter err) throws UsageException {
         Arguments a = Arguments.parse(args, Set.of("gravity", "draws", "seed"), Set.of("json"));
         if (a.positional().size() != 1) {
             throw new UsageException("give exactly one parts list or mechanism file. " + usage());
         }
-        MechanismLoader loader = new MechanismLoader();
+        MechanismLoader loader = new MechanismLoader().withDefaultGravity(defaults.gravity());
         if (a.has("gravity")) {
             loader = loader.withGravity(a.number("gravity", Double.NaN));
         }

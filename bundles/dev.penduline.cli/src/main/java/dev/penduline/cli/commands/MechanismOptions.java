@@ -8,7 +8,7 @@ import java.util.Set;
 
 import dev.penduline.cli.Arguments;
 import dev.penduline.cli.UsageException;
-import dev.penduline.physics.MechanismProperties;
+import dev.penduline.services.Defaults;
 import dev.penduline.services.InputException;
 import dev.penduline.services.MechanismLoader;
 import dev.penduline.services.MechanismSource;
@@ -28,7 +28,9 @@ final class MechanismOptions {
               FILE | --mass KG --centroid-distance M --pivot-inertia KG_M2
                                the mechanism: a mechanism file (.penduline), a parts list (.csv),
                                or its lumped properties
-              --gravity M_S2   local gravity (default 9.80665 m/s², or the mechanism file's)
+              --gravity M_S2   local gravity (default 9.80665 m/s², or the mechanism file's;
+                               with --use-preferences the defaults file's for a parts list or
+                               lumped properties)
             """;
 
     private MechanismOptions() {
@@ -49,15 +51,16 @@ final class MechanismOptions {
     /**
      * Resolves an optional mechanism given by {@code --mechanism FILE} or lumped properties.
      *
-     * @param a the arguments (with "mechanism" among the value options)
+     * @param a        the arguments (with "mechanism" among the value options)
+     * @param defaults the gravity where neither --gravity nor the mechanism file gives one
      * @return the mechanism, or empty when none was given
      * @throws UsageException when the input is bad
      */
-    static Optional<MechanismSource> optional(Arguments a) throws UsageException {
+    static Optional<MechanismSource> optional(Arguments a, Defaults defaults) throws UsageException {
         if (!a.has("mechanism") && !lumpedGiven(a)) {
             return Optional.empty();
         }
-        return Optional.of(resolve(a, a.value("mechanism")));
+        return Optional.of(resolve(a, a.value("mechanism"), defaults));
     }
 
     /**
@@ -73,12 +76,14 @@ final class MechanismOptions {
     /**
      * Resolves the mechanism.
      *
-     * @param a    the arguments
-     * @param file the mechanism or parts file, or null when lumped properties are expected
+     * @param a        the arguments
+     * @param file     the mechanism or parts file, or null when lumped properties are expected
+     * @param defaults the gravity of a parts list or lumped properties when --gravity is not given
+     *                 (a mechanism file keeps its own)
      * @return the mechanism
      * @throws UsageException when neither or both ways are given, or the input is bad
      */
-    static MechanismSource resolve(Arguments a, String file) throws UsageException {
+    static MechanismSource resolve(Arguments a, String file, Defaults defaults) throws UsageException {
         try {
             if (lumpedGiven(a)) {
                 if (file != null) {
@@ -86,13 +91,13 @@ final class MechanismOptions {
                             + "--pivot-inertia, not both");
                 }
                 return MechanismLoader.lumped(a.requiredNumber("mass"), a.requiredNumber("centroid-distance"),
-                        a.requiredNumber("pivot-inertia"), a.number("gravity", MechanismProperties.STANDARD_GRAVITY));
+                        a.requiredNumber("pivot-inertia"), a.number("gravity", defaults.gravity()));
             }
             if (file == null) {
                 throw new UsageException("which mechanism? Give a mechanism file (.penduline), a parts list (.csv), "
                         + "or --mass, --centroid-distance and --pivot-inertia");
             }
-            MechanismLoader loader = new MechanismLoader();
+            MechanismLoader loader = new MechanismLoader().withDefaultGravity(defaults.gravity());
             if (a.has("gravity")) {
                 loader = loader.withGravity(a.number("gravity", Double.NaN));
             }

@@ -24,6 +24,7 @@ import dev.penduline.physics.inertia.Part;
 import dev.penduline.physics.motion.FrictionTorques;
 import dev.penduline.physics.motion.SwingEnergy;
 import dev.penduline.physics.units.Unit;
+import dev.penduline.services.Defaults;
 import dev.penduline.services.InputException;
 import dev.penduline.services.MechanismForecast;
 import dev.penduline.services.MechanismLoader;
@@ -34,9 +35,6 @@ import dev.penduline.services.present.Figures;
 
 /** {@code penduline predict}: what a mechanism does after a release, with the friction of its stored fit. */
 public final class PredictCommand implements Command {
-
-    /** The settle band's half-width unless told otherwise (degrees). */
-    static final double DEFAULT_BAND_DEG = 1;
 
     private static final Set<String> OPTIONS = MechanismOptions.with("theta0-deg", "omega0-deg-s", "band-deg", "at-deg",
             "radius-m", "draws", "seed", "viscous", "coulomb", "stiction", "drag", "fit", "settle-within-s", "max-speed-at-deg",
@@ -68,7 +66,8 @@ public final class PredictCommand implements Command {
 
                   --theta0-deg DEG      release angle (required)
                   --omega0-deg-s DEG_S  initial angular velocity (default 0: released from rest)
-                  --band-deg DEG        half-width of the settle band (default 1°)
+                  --band-deg DEG        half-width of the settle band (default 1°; with
+                                        --use-preferences the defaults file's)
                   --at-deg DEG          report the first passage through this angle (e.g. the closed position)
                   --radius-m M          distance from the pivot axis of the point whose speed is wanted there
                 """ + FrictionOptions.USAGE + """
@@ -90,14 +89,19 @@ public final class PredictCommand implements Command {
 
     @Override
     public ExitCode run(List<String> args, PrintWriter out, PrintWriter err) throws UsageException {
+        return run(args, Defaults.BUILT_IN, out, err);
+    }
+
+    @Override
+    public ExitCode run(List<String> args, Defaults defaults, PrintWriter out, PrintWriter err) throws UsageException {
         Arguments a = Arguments.parse(args, OPTIONS, Set.of("json", "no-fit"));
-        MechanismSource mechanism = FrictionOptions.mechanism(a, err);
+        MechanismSource mechanism = FrictionOptions.mechanism(a, defaults, err);
         MechanismForecast.FrictionSource source = FrictionOptions.resolve(a, true);
         FrictionOptions.warnIfStale(source, err);
         ForecastRequest request;
         try {
             request = new ForecastRequest(Unit.DEGREE.toSi(a.requiredNumber("theta0-deg")),
-                    Unit.DEG_PER_S.toSi(a.number("omega0-deg-s", 0)), Unit.DEGREE.toSi(a.number("band-deg", DEFAULT_BAND_DEG)),
+                    Unit.DEG_PER_S.toSi(a.number("omega0-deg-s", 0)), Unit.DEGREE.toSi(a.number("band-deg", defaults.settleBand())),
                     a.has("at-deg") ? Unit.DEGREE.toSi(a.number("at-deg", 0)) : Double.NaN, a.number("radius-m", Double.NaN));
         } catch (IllegalArgumentException e) {
             throw new UsageException(e.getMessage());

@@ -19,6 +19,7 @@ import dev.penduline.physics.motion.SwingEnergy;
 import dev.penduline.physics.motion.SwingRun;
 import dev.penduline.physics.motion.TurningPoint;
 import dev.penduline.physics.units.Unit;
+import dev.penduline.services.Defaults;
 import dev.penduline.services.InputException;
 import dev.penduline.services.MechanismForecast;
 import dev.penduline.services.MechanismSource;
@@ -59,7 +60,8 @@ public final class SimulateCommand implements Command {
                   --theta0-deg DEG      release angle (required)
                   --omega0-deg-s DEG_S  initial angular velocity (default 0: released from rest)
                 """ + FrictionOptions.USAGE + """
-                  --band-deg DEG        half-width of the settle band (default 1°)
+                  --band-deg DEG        half-width of the settle band (default 1°; with
+                                        --use-preferences the defaults file's)
                   --duration S          simulated time (default 20 s)
                   --rate HZ             output samples per second (default 1000)
                   --out FILE.csv        write time_s,angle_deg,velocity_deg_s (never over a record,
@@ -77,8 +79,13 @@ public final class SimulateCommand implements Command {
 
     @Override
     public ExitCode run(List<String> args, PrintWriter out, PrintWriter err) throws UsageException {
+        return run(args, Defaults.BUILT_IN, out, err);
+    }
+
+    @Override
+    public ExitCode run(List<String> args, Defaults defaults, PrintWriter out, PrintWriter err) throws UsageException {
         Arguments a = Arguments.parse(args, OPTIONS, Set.of("json", "force", "no-fit"));
-        MechanismSource given = FrictionOptions.mechanism(a, err);
+        MechanismSource given = FrictionOptions.mechanism(a, defaults, err);
         if (a.has("out")) {
             checkOut(Path.of(a.value("out")), a.flag("force"));
         }
@@ -90,7 +97,7 @@ public final class SimulateCommand implements Command {
                     + "on them");
         }
         double omega0 = Unit.DEG_PER_S.toSi(a.number("omega0-deg-s", 0));
-        double band = Unit.DEGREE.toSi(a.number("band-deg", PredictCommand.DEFAULT_BAND_DEG));
+        double band = Unit.DEGREE.toSi(a.number("band-deg", defaults.settleBand()));
         MechanismForecast.FrictionSource source = FrictionOptions.resolve(a, false);
         FrictionOptions.warnIfStale(source, err);
         FrictionTorques friction = source.friction();

@@ -44,10 +44,17 @@ import java.math.RoundingMode;
  * Rounding is half-up on the shortest decimal that reads back as the same {@code double} (what
  * {@link Double#toString(double)} prints), so 0.125 rounds to 0.13 as on paper; the binary
  * representation's tail never decides a tie. A value that is not finite prints {@value #NOT_AVAILABLE};
- * a value whose uncertainty is unknown (NaN) or zero prints alone, to {@value #DEFAULT_DIGITS}
+ * a value whose uncertainty is unknown (NaN) or zero prints alone, to {@link #digits()}
  * significant digits; an infinite uncertainty (the data do not determine the value) prints as
  * {@code ± ∞}. A value that rounds to zero prints without a sign. Everything is independent of
  * the default locale.
+ *
+ * <h2>Display precision</h2>
+ * A figure without an uncertainty has {@value #DEFAULT_DIGITS} significant digits unless the
+ * user's defaults ({@code significant_digits} in {@link dev.penduline.services.Defaults}) ask for
+ * another number: the workbench applies them at start and on every change of its preferences, the
+ * command line with {@code --use-preferences} for the duration of one command
+ * ({@link #useDigits(int)}). Uncertainties keep their two digits.
  */
 public final class Figures {
 
@@ -64,17 +71,47 @@ public final class Figures {
 
     private static final BigDecimal PLAIN_BELOW = new BigDecimal("1000");
 
+    /** The digits of {@link #significant(double)}: one setting for the process (one user's display). */
+    private static volatile int digits = DEFAULT_DIGITS;
+
     private Figures() {
     }
 
     /**
-     * A figure without an uncertainty, to {@value #DEFAULT_DIGITS} significant digits.
+     * The significant digits a figure without an uncertainty is written with now.
+     *
+     * @return {@value #DEFAULT_DIGITS} unless {@link #useDigits(int)} set another number
+     */
+    public static int digits() {
+        return digits;
+    }
+
+    /**
+     * Sets the significant digits of {@link #significant(double)} for the whole process (the
+     * user's display precision); a caller that sets it for a while restores the value it returns.
+     *
+     * @param count significant digits, 1 to 17
+     * @return the number used before
+     * @throws IllegalArgumentException when {@code count} is outside 1 to 17
+     */
+    public static int useDigits(int count) {
+        if (count < 1 || count > 17) {
+            throw new IllegalArgumentException("significant digits must be 1 to 17, not " + count);
+        }
+        int before = digits;
+        digits = count;
+        return before;
+    }
+
+    /**
+     * A figure without an uncertainty, to {@link #digits()} significant digits
+     * ({@value #DEFAULT_DIGITS} unless the user's defaults say otherwise).
      *
      * @param v the value (any unit)
      * @return the text; {@value #NOT_AVAILABLE} when {@code v} is not finite
      */
     public static String significant(double v) {
-        return significant(v, DEFAULT_DIGITS);
+        return significant(v, digits);
     }
 
     /**

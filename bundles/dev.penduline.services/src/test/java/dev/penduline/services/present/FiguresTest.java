@@ -27,6 +27,25 @@ class FiguresTest {
     private static final Pattern SINGLE = Pattern.compile("^(-?[0-9.]+)(?:e(-?[0-9]+))?$");
 
     @Test
+    void theDisplayPrecisionChangesFiguresWithoutAnUncertaintyOnly() {
+        int before = Figures.useDigits(6);
+        try {
+            assertEquals(6, Figures.digits());
+            // pi to six significant digits, from memory: 3.14159
+            assertEquals("3.14159", Figures.significant(Math.PI));
+            assertEquals("2.00000", Figures.significant(2.0));
+            assertEquals("3.14159", Figures.measured(Math.PI, Double.NaN));
+            // the uncertainty keeps its two digits (JCGM 100:2008 §7.2.6)
+            assertEquals("10.058 ± 0.027", Figures.measured(10.05762, 0.027));
+            assertThrows(IllegalArgumentException.class, () -> Figures.useDigits(0));
+        } finally {
+            Figures.useDigits(before);
+        }
+        assertEquals(Figures.DEFAULT_DIGITS, Figures.digits());
+        assertEquals("3.142", Figures.significant(Math.PI));
+    }
+
+    @Test
     void theGumRoundsTheEstimateToItsUncertainty() {
         // JCGM 100:2008 §7.2.6 (text checked against a published quotation): "if y = 10,057 62 Ω
         // with uc(y) = 27 mΩ, y should be rounded to 10,058 Ω".

@@ -48,6 +48,7 @@ class WorkbenchCapabilitiesTest {
         c.put("problemsMarkers", new ProblemsMarkersCapability());
         c.put("importWizard", new ImportWizardCapability());
         c.put("firstLanding", new FirstLandingCapability());
+        c.put("preferences", new PreferencesCapability());
         return c;
     }
 

@@ -21,6 +21,7 @@ import org.eclipse.core.runtime.jobs.Job;
 import dev.penduline.physics.identify.FitControl;
 import dev.penduline.physics.identify.FitMonitor;
 import dev.penduline.physics.identify.FitSettings;
+import dev.penduline.ui.internal.preferences.WorkbenchDefaults;
 import dev.penduline.physics.identify.FitStatus;
 import dev.penduline.physics.identify.FrictionFit;
 import dev.penduline.physics.units.Unit;
@@ -91,7 +92,7 @@ final class FrictionFitJob extends Job {
             FitControl control = FitControl.cancelledWhen(monitor::isCanceled)
                     .withMonitor(new Throttled(monitor, progressLine));
             Outcome outcome = FrictionIdentification.identify(mechanism, sessions, Optional.empty(), false,
-                    FitSettings.defaults(), control);
+                    WorkbenchDefaults.current().applyTo(FitSettings.defaults()), control);
             progress.worked(8);
             attempt = conclude(path, outcome, progress.newChild(1));
         } catch (InputException e) {

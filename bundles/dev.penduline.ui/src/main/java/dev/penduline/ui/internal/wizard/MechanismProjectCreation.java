@@ -15,6 +15,7 @@ import org.eclipse.core.runtime.SubMonitor;
 import dev.penduline.records.parts.PartsList;
 import dev.penduline.services.InputException;
 import dev.penduline.services.NewMechanismFile;
+import dev.penduline.ui.internal.preferences.WorkbenchDefaults;
 
 /**
  * Creates a mechanism project in the workspace: reads the parts list first (so a bad list
@@ -58,7 +59,8 @@ public final class MechanismProjectCreation {
         try {
             project.open(progress.split(1));
             IFile file = project.getFile(NewMechanismFile.fileName(mechanismName));
-            NewMechanismFile.write(mechanismName, parts, file.getLocation().toFile().toPath());
+            NewMechanismFile.write(mechanismName, parts, file.getLocation().toFile().toPath(),
+                    WorkbenchDefaults.current().gravity());
             project.refreshLocal(IResource.DEPTH_INFINITE, progress.split(1));
             return new Created(file, parts.map(PartsList::warnings).orElse(List.of()));
         } catch (InputException | CoreException | RuntimeException e) {
