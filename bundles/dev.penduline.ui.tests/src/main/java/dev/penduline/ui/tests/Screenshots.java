@@ -4,6 +4,8 @@ import java.io.IOException;
 import java.nio.file.Files;
 import java.nio.file.Path;
 import java.nio.file.Paths;
+import java.nio.file.StandardCopyOption;
+import java.util.Set;
 
 import org.eclipse.swt.SWT;
 import org.eclipse.swt.graphics.GC;
@@ -14,13 +16,22 @@ import org.eclipse.swt.graphics.Rectangle;
 import org.eclipse.swt.widgets.Display;
 import org.eclipse.swt.widgets.Shell;
 
-/** Saves what a shell shows as a PNG under {@code penduline.screenshotDir} (default {@code target/screenshots}). */
+/**
+ * Saves what a shell shows as a PNG under {@code penduline.screenshotDir} (default {@code
+ * target/screenshots}); the shots named in {@code penduline.readmeShots} (comma separated) are
+ * also copied to {@code penduline.readmeDir}, the README's pictures, so they never go stale.
+ */
 final class Screenshots {
 
     private final Path dir;
+    private final Path readmeDir;
+    private final Set<String> readmeShots;
 
     Screenshots() {
         dir = Paths.get(System.getProperty("penduline.screenshotDir", "target/screenshots"));
+        String readme = System.getProperty("penduline.readmeDir", "");
+        readmeDir = readme.isBlank() ? null : Paths.get(readme);
+        readmeShots = Set.of(System.getProperty("penduline.readmeShots", "").split("\\s*,\\s*"));
     }
 
     /**
@@ -47,6 +58,10 @@ final class Screenshots {
         } finally {
             gc.dispose();
             image.dispose();
+        }
+        if (readmeDir != null && readmeShots.contains(name)) {
+            Files.createDirectories(readmeDir);
+            Files.copy(file, readmeDir.resolve(name), StandardCopyOption.REPLACE_EXISTING);
         }
         return file;
     }
