@@ -21,6 +21,7 @@ import org.eclipse.jface.wizard.ProgressMonitorPart;
 import org.eclipse.jface.wizard.WizardDialog;
 import org.eclipse.swt.SWT;
 import org.eclipse.swt.widgets.Button;
+import org.eclipse.swt.widgets.Combo;
 import org.eclipse.swt.widgets.Composite;
 import org.eclipse.swt.widgets.Control;
 import org.eclipse.swt.widgets.Event;
@@ -90,7 +91,8 @@ final class FitWizardCapability implements Capability {
         Table sessions = setup.sessionsTable();
         assertEquals(2, sessions.getItemCount(), "both sessions listed");
         assertEquals("unchanged", sessions.getItem(0).getText(2), "the record state of the first session");
-        assertTrue(setup.automaticButton().getSelection(), "automatic term sets by default, as the CLI");
+        assertEquals(0, setup.termsChoice().getSelectionIndex(), "automatic term sets by default, as the CLI");
+        assertEquals(0, setup.inertiaChoice().getSelectionIndex(), "J0 fitted by default, as the CLI");
         assertEquals(FitSettings.defaults().resamples(), setup.resamplesSpinner().getSelection(),
                 "the CLI's --resamples default");
         driver.shot(dialog.getShell(), "fit-wizard-setup.png");
@@ -128,8 +130,7 @@ final class FitWizardCapability implements Capability {
         check.item = second;
         check.detail = SWT.CHECK;
         sessions.notifyListeners(SWT.Selection, check);
-        choose(setup.automaticButton(), false);
-        choose(setup.chosenButton(), true);
+        pick(setup.termsChoice(), 1);
         for (Button term : setup.termButtons()) {
             boolean wanted = term.getText().startsWith("viscous") || term.getText().startsWith("Coulomb");
             if (term.getSelection() != wanted) {
@@ -137,9 +138,7 @@ final class FitWizardCapability implements Capability {
                 term.notifyListeners(SWT.Selection, new Event());
             }
         }
-        for (Control c : setup.inertiaHeldButton().getParent().getChildren()) {
-            choose((Button) c, c == setup.inertiaHeldButton());
-        }
+        pick(setup.inertiaChoice(), 1);
         setup.resamplesSpinner().setSelection(5);
         setup.resamplesSpinner().notifyListeners(SWT.Modify, new Event());
         driver.shot(dialog.getShell(), "fit-wizard-chosen.png");
@@ -188,6 +187,7 @@ final class FitWizardCapability implements Capability {
                 .orElseThrow().getValue(), "J0 held");
         driver.waitFor("the stored fit in the Friction view", () -> view.shown() != null
                 && view.shown().id().equals(fit.getId()) ? view.shown() : null);
+        driver.shot(driver.shell(), "fit-wizard-stored.png");
 
         // With the editor open, Finish adds the fit to its document as one command; Undo removes it.
         IEditorPart editor = IDE.openEditor(driver.page(), file, PendulineViews.MECHANISM_EDITOR);
@@ -196,8 +196,7 @@ final class FitWizardCapability implements Capability {
         WizardDialog again = open(driver, view);
         FitWizard inEditor = wizardOf(again);
         inEditor.setupPage().resamplesSpinner().setSelection(0);
-        choose(inEditor.setupPage().automaticButton(), false);
-        choose(inEditor.setupPage().chosenButton(), true);
+        pick(inEditor.setupPage().termsChoice(), 1);
         press(again, IDialogConstants.NEXT_ID);
         driver.waitFor("the last page in the editor's case", FIT_NANOS,
                 () -> again.getCurrentPage() == inEditor.resultsPage() ? again : null);
@@ -286,11 +285,9 @@ final class FitWizardCapability implements Capability {
         return null;
     }
 
-    private static void choose(Button b, boolean selected) {
-        if (b.getSelection() != selected) {
-            b.setSelection(selected);
-            b.notifyListeners(SWT.Selection, new Event());
-        }
+    private static void pick(Combo combo, int index) {
+        combo.select(index);
+        combo.notifyListeners(SWT.Selection, new Event());
     }
 
     private static TableItem rowOf(Table table, String symbol) {

@@ -14,6 +14,7 @@ import org.eclipse.jface.layout.GridLayoutFactory;
 import org.eclipse.jface.wizard.WizardPage;
 import org.eclipse.swt.SWT;
 import org.eclipse.swt.widgets.Button;
+import org.eclipse.swt.widgets.Combo;
 import org.eclipse.swt.widgets.Composite;
 import org.eclipse.swt.widgets.Group;
 import org.eclipse.swt.widgets.Label;
@@ -38,6 +39,10 @@ import dev.penduline.services.present.Figures;
  */
 public final class FitSetupPage extends WizardPage {
 
+    private static final String AUTOMATIC = "Automatic: compare the candidate term sets, keep the best by BIC"
+            + " (as 'penduline fit')";
+    private static final String CHOSEN = "Chosen terms:";
+
     /** Most bootstrap refits the page offers (the command line's limit too). */
     public static final int MAX_RESAMPLES = 1_000;
 
@@ -45,11 +50,9 @@ public final class FitSetupPage extends WizardPage {
     private final List<TestSession> sessions;
     private final double calculatedInertia;
     private Table table;
-    private Button automatic;
-    private Button chosen;
+    private Combo termsChoice;
     private final List<Button> termButtons = new ArrayList<>();
-    private Button inertiaFree;
-    private Button inertiaHeld;
+    private Combo inertiaChoice;
     private Spinner resamples;
 
     FitSetupPage(Path mechanismFile, List<TestSession> sessions, double calculatedInertia) {
@@ -88,9 +91,10 @@ public final class FitSetupPage extends WizardPage {
         terms.setText("Friction terms");
         GridLayoutFactory.swtDefaults().numColumns(5).applyTo(terms);
         GridDataFactory.fillDefaults().grab(true, false).applyTo(terms);
-        automatic = radio(terms, "Automatic: compare the candidate term sets and keep the best by BIC (as 'penduline fit')");
-        GridDataFactory.fillDefaults().span(5, 1).applyTo(automatic);
-        chosen = radio(terms, "Chosen terms:");
+        termsChoice = new Combo(terms, SWT.READ_ONLY | SWT.DROP_DOWN);
+        termsChoice.setItems(AUTOMATIC, CHOSEN);
+        termsChoice.select(0);
+        termsChoice.addListener(SWT.Selection, e -> validate());
         for (FrictionTerm t : List.of(FrictionTerm.VISCOUS, FrictionTerm.COULOMB, FrictionTerm.STICTION,
                 FrictionTerm.DRAG)) {
             Button b = new Button(terms, SWT.CHECK);
@@ -100,15 +104,14 @@ public final class FitSetupPage extends WizardPage {
             b.addListener(SWT.Selection, e -> validate());
             termButtons.add(b);
         }
-        automatic.setSelection(true);
 
-        Group inertia = new Group(c, SWT.NONE);
-        inertia.setText("Pivot inertia J0");
-        GridLayoutFactory.swtDefaults().numColumns(2).applyTo(inertia);
-        GridDataFactory.fillDefaults().grab(true, false).applyTo(inertia);
-        inertiaFree = radio(inertia, "Fitted (free)");
-        inertiaHeld = radio(inertia, "Held at the calculated value, " + Figures.significant(calculatedInertia) + " kg·m²");
-        inertiaFree.setSelection(true);
+        Composite inertia = new Composite(c, SWT.NONE);
+        GridLayoutFactory.fillDefaults().numColumns(2).applyTo(inertia);
+        new Label(inertia, SWT.NONE).setText("Pivot inertia J0:");
+        inertiaChoice = new Combo(inertia, SWT.READ_ONLY | SWT.DROP_DOWN);
+        inertiaChoice.setItems("fitted (free)", "held at the calculated value, " + Figures.significant(calculatedInertia)
+                + " kg·m²");
+        inertiaChoice.select(0);
 
         Composite row = new Composite(c, SWT.NONE);
         GridLayoutFactory.fillDefaults().numColumns(3).applyTo(row);
@@ -119,13 +122,6 @@ public final class FitSetupPage extends WizardPage {
         hint.setText("for the resampling ± (0 turns it off; above 200 adds little)");
         setControl(c);
         validate();
-    }
-
-    private Button radio(Composite parent, String text) {
-        Button b = new Button(parent, SWT.RADIO);
-        b.setText(text);
-        b.addListener(SWT.Selection, e -> validate());
-        return b;
     }
 
     private String stateOf(TestSession s) {
@@ -140,7 +136,7 @@ public final class FitSetupPage extends WizardPage {
 
     private void validate() {
         for (Button b : termButtons) {
-            b.setEnabled(chosen.getSelection());
+            b.setEnabled(termsChoice.getSelectionIndex() == 1);
         }
         String error = null;
         if (chosenSessions().isEmpty()) {
@@ -169,7 +165,7 @@ public final class FitSetupPage extends WizardPage {
 
     /** @return the chosen terms, empty for the automatic comparison */
     public Optional<Set<FrictionTerm>> terms() {
-        if (automatic.getSelection()) {
+        if (termsChoice.getSelectionIndex() != 1) {
             return Optional.empty();
         }
         Set<FrictionTerm> set = EnumSet.noneOf(FrictionTerm.class);
@@ -183,7 +179,7 @@ public final class FitSetupPage extends WizardPage {
 
     /** @return whether J0 is held at the calculated value */
     public boolean fixInertia() {
-        return inertiaHeld.getSelection();
+        return inertiaChoice.getSelectionIndex() == 1;
     }
 
     /** @return the bootstrap refits */
@@ -196,14 +192,9 @@ public final class FitSetupPage extends WizardPage {
         return table;
     }
 
-    /** @return the radio button of the automatic comparison, for tests */
-    public Button automaticButton() {
-        return automatic;
-    }
-
-    /** @return the radio button of chosen terms, for tests */
-    public Button chosenButton() {
-        return chosen;
+    /** @return the choice of term sets (0: automatic, 1: the chosen terms), for tests */
+    public Combo termsChoice() {
+        return termsChoice;
     }
 
     /** @return the term check boxes (viscous, Coulomb, stiction, drag), for tests */
@@ -211,9 +202,9 @@ public final class FitSetupPage extends WizardPage {
         return List.copyOf(termButtons);
     }
 
-    /** @return the radio button that holds J0, for tests */
-    public Button inertiaHeldButton() {
-        return inertiaHeld;
+    /** @return the choice of the inertia (0: fitted, 1: held at the calculated value), for tests */
+    public Combo inertiaChoice() {
+        return inertiaChoice;
     }
 
     /** @return the spinner of bootstrap refits, for tests */

@@ -31,6 +31,7 @@ import org.eclipse.swt.widgets.Table;
 import dev.penduline.services.InputException;
 import dev.penduline.ui.internal.MechanismSelection;
 import dev.penduline.ui.internal.document.LiveModel;
+import dev.penduline.ui.internal.document.MechanismDocuments;
 import dev.penduline.ui.internal.friction.FrictionHeader.Tone;
 
 /**
@@ -229,8 +230,8 @@ public final class FrictionPart {
         if (header.isDisposed()) {
             return;
         }
-        header.say("Stored fit '" + id + "' in " + file.getName() + (live.document().isPresent()
-                ? " (in the open editor: save it there; Edit > Undo removes it)." : "."), Tone.NEWS);
+        // short: the line shares its row with the list and the button
+        header.say(MechanismDocuments.of(file).isPresent() ? "Fit stored in the editor (unsaved)." : "Fit stored.", Tone.NEWS);
         if (file.equals(shownFile)) {
             preferredId = id;
             shownStamp = IFile.NULL_STAMP;
