@@ -66,13 +66,24 @@ public final class FitRecorder {
      */
     public static String store(Path mechanismFile, FrictionIdentification.Outcome outcome, Instant computedAt,
             Consumer<String> notes) throws InputException {
+        return MechanismStore.update(mechanismFile, m -> addTo(m, outcome, computedAt), notes);
+    }
+
+    /**
+     * Adds the fit to a mechanism in memory, as {@link #store} adds it to the file's content: the
+     * workbench runs this inside one undoable command on an open document.
+     *
+     * @param m          the mechanism
+     * @param outcome    the fit
+     * @param computedAt when it was computed
+     * @return the added result's identifier
+     */
+    public static String addTo(Mechanism m, FrictionIdentification.Outcome outcome, Instant computedAt) {
         String when = computedAt.truncatedTo(ChronoUnit.SECONDS).toString();
-        return MechanismStore.update(mechanismFile, m -> {
-            FitResult r = NamedElements.addFitResult(m, "Fit " + when, when);
-            fill(r, outcome);
-            keepFittedContent(m, outcome);
-            return r.getId();
-        }, notes);
+        FitResult r = NamedElements.addFitResult(m, "Fit " + when, when);
+        fill(r, outcome);
+        keepFittedContent(m, outcome);
+        return r.getId();
     }
 
     /**

@@ -8,7 +8,6 @@ import java.util.Locale;
 import java.util.Optional;
 import java.util.Set;
 
-import dev.penduline.model.Mechanism;
 import dev.penduline.model.TestSession;
 import dev.penduline.physics.MechanismProperties;
 import dev.penduline.physics.identify.FitControl;
@@ -127,14 +126,42 @@ public final class FrictionIdentification {
      */
     public static List<SessionInput> sessionsOf(Path mechanismFile, MechanismSource mechanism, boolean acceptChanged)
             throws InputException {
-        Mechanism m = MechanismLoader.readMechanism(mechanismFile);
-        if (m.getSessions().isEmpty()) {
-            throw new InputException(mechanismFile + ": has no test sessions; add records with 'penduline add-session'"
-                    + " or give them with --session");
+        return sessionsOf(mechanismFile, MechanismLoader.readMechanism(mechanismFile).getSessions(), mechanism,
+                acceptChanged);
+    }
+
+    /**
+     * Why a mechanism file cannot be fitted from its own sessions when it has none.
+     *
+     * @param mechanismFile the mechanism file
+     * @return the message, naming the file and what to do
+     */
+    public static String noSessions(Path mechanismFile) {
+        return mechanismFile + ": has no test sessions; add records with 'penduline add-session'"
+                + " or give them with --session";
+    }
+
+    /**
+     * Reads and analyses chosen test sessions of a mechanism (the workbench's fit of some of a
+     * file's sessions, or of the sessions of an open editor's model), as
+     * {@link #sessionsOf(Path, MechanismSource, boolean)} does for all of a file's sessions.
+     *
+     * @param mechanismFile the mechanism file (the records' paths are relative to it)
+     * @param chosen        the sessions to read, in the order to fit them
+     * @param mechanism     the mechanism
+     * @param acceptChanged true to fit a record whose content changed since its session was added
+     * @return the prepared inputs
+     * @throws InputException when no session is chosen, a record cannot be read, or has changed and that is
+     *                        not accepted
+     */
+    public static List<SessionInput> sessionsOf(Path mechanismFile, List<TestSession> chosen, MechanismSource mechanism,
+            boolean acceptChanged) throws InputException {
+        if (chosen.isEmpty()) {
+            throw new InputException(noSessions(mechanismFile));
         }
         List<SessionRecords.SessionRecord> read = new ArrayList<>();
         List<String> changed = new ArrayList<>();
-        for (TestSession s : m.getSessions()) {
+        for (TestSession s : chosen) {
             SessionRecords.SessionRecord sr = SessionRecords.readSession(mechanismFile, s);
             SessionRecords.changeOf(s, sr.record()).ifPresent(changed::add);
             read.add(sr);
@@ -179,8 +206,7 @@ public final class FrictionIdentification {
         if (still.isPresent()) {
             throw new InputException(mechanism.label() + ": " + still.get());
         }
-        MechanismProperties aboutEquilibrium = new MechanismProperties(p.mass(), p.centroidDistance(),
-                p.pivotInertia(), 0, p.gravity(), p.axisTilt());
+        MechanismProperties aboutEquilibrium = aboutEquilibrium(p);
         List<ReleaseSession> releases = new ArrayList<>();
         List<String> warnings = new ArrayList<>();
         List<FitDecimation.Thinning> decimation = new ArrayList<>();
@@ -218,6 +244,16 @@ public final class FrictionIdentification {
         }
         ModelComparison comparison = identifier.compare(problem, control);
         return new Outcome(mechanism, sessions, comparison.best(), Optional.of(comparison), true, warnings, decimation);
+    }
+
+    /**
+     * The mechanism as the fit sees it: angles from the hanging equilibrium.
+     *
+     * @param p the mechanism's properties
+     * @return the same mechanism with its equilibrium angle at zero
+     */
+    static MechanismProperties aboutEquilibrium(MechanismProperties p) {
+        return new MechanismProperties(p.mass(), p.centroidDistance(), p.pivotInertia(), 0, p.gravity(), p.axisTilt());
     }
 
     /** How far the measured small-angle period may be from the mechanism's before a fit is pointless. */

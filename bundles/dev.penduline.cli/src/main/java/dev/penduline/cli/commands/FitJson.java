@@ -18,6 +18,7 @@ import dev.penduline.physics.identify.ParameterEstimate;
 import dev.penduline.physics.identify.SessionEstimate;
 import dev.penduline.physics.identify.StictionBand;
 import dev.penduline.physics.units.Unit;
+import dev.penduline.services.FitWording;
 import dev.penduline.services.FrictionIdentification.Outcome;
 import dev.penduline.services.FrictionIdentification.SessionInput;
 
@@ -177,6 +178,6 @@ final class FitJson {
     }
 
     static String word(FrictionTerm t) {
-        return t.name().toLowerCase(Locale.ROOT);
+        return FitWording.word(t);
     }
 }

@@ -3,22 +3,16 @@ package dev.penduline.cli.commands;
 import java.io.PrintWriter;
 import java.util.List;
 import java.util.Locale;
-import java.util.Optional;
-import java.util.stream.Collectors;
 
-import dev.penduline.physics.identify.CandidateScore;
 import dev.penduline.physics.identify.EnergyShares;
 import dev.penduline.physics.identify.FitStatus;
 import dev.penduline.physics.identify.FitWarning;
 import dev.penduline.physics.identify.FrictionFit;
-import dev.penduline.physics.identify.FrictionTerm;
-import dev.penduline.physics.identify.FrictionVerdict;
 import dev.penduline.physics.identify.Goodness;
-import dev.penduline.physics.identify.InertiaCheck;
-import dev.penduline.physics.identify.ParameterEstimate;
 import dev.penduline.physics.identify.SessionEstimate;
 import dev.penduline.physics.identify.StictionBand;
 import dev.penduline.physics.units.Unit;
+import dev.penduline.services.FitWording;
 import dev.penduline.services.FrictionIdentification.Outcome;
 import dev.penduline.services.present.Figures;
 
@@ -55,34 +49,16 @@ final class FitReportText {
             out.println("The values below are the best point reached and must not be used.");
             out.println();
         }
-        out.println("Verdict: " + verdict(fit));
+        out.println("Verdict: " + FitWording.verdict(fit));
         out.printf(Locale.ROOT, "  (energy lost over the records: viscous %s, Coulomb %s, drag %s of %s J)%n",
-                percent(e.viscous(), e.viscousSigma()), percent(e.coulomb(), e.coulombSigma()),
-                percent(e.drag(), e.dragSigma()), Figures.significant(e.dissipated()));
-        out.println("  model: " + termList(fit.terms()) + (outcome.automatic() ? " (chosen by BIC among the candidates)"
-                : " (as asked)"));
+                FitWording.percent(e.viscous(), e.viscousSigma()), FitWording.percent(e.coulomb(), e.coulombSigma()),
+                FitWording.percent(e.drag(), e.dragSigma()), Figures.significant(e.dissipated()));
+        out.println("  model: " + FitWording.termList(fit.terms())
+                + (outcome.automatic() ? " (chosen by BIC among the candidates)" : " (as asked)"));
         out.println();
         out.println("Estimates (± one standard error: the Jacobian's, or the bootstrap's when clearly larger):");
-        for (FrictionTerm t : fit.terms()) {
-            if (t == FrictionTerm.STICTION && fit.stiction() != null) {
-                out.printf(Locale.ROOT, "  %-9s Ts = between %s and %s %s%n", "stiction",
-                        Figures.significant(fit.stiction().lower()), Figures.significant(fit.stiction().upper()),
-                        t.unit());
-                continue;
-            }
-            Optional<ParameterEstimate> p = fit.parameter(t.symbol());
-            p.ifPresent(v -> out.printf(Locale.ROOT, "  %-9s %-2s = %s %s%s%n", FitJson.word(t), t.symbol(),
-                    Figures.measured(v.value(), v.sigma()), t.unit(),
-                    v.onBound() ? "  (on its bound)" : ""));
-        }
-        InertiaCheck i = fit.inertia();
-        if (i.free()) {
-            out.printf(Locale.ROOT, "  inertia   J0 = %s kg·m² (calculated from the parts: %s kg·m², %+.2f %%)%n",
-                    Figures.measured(i.fitted(), i.sigma()), Figures.significant(i.calculated()),
-                    i.differencePercent());
-        } else {
-            out.printf(Locale.ROOT, "  inertia   J0 = %s kg·m² (held at the calculated value)%n",
-                    Figures.significant(i.calculated()));
+        for (FitWording.EstimateLine line : FitWording.estimates(fit)) {
+            out.printf(Locale.ROOT, "  %-9s %-2s = %s%n", line.word(), line.symbol(), line.text());
         }
         out.println();
         printSessions(out, fit);
@@ -93,11 +69,9 @@ final class FitReportText {
             out.printf(Locale.ROOT, "Term sets compared (effective samples %s of %d, residual lag-1 correlation %.2f):%n",
                     Figures.fixed(c.effectiveSamples(), 0), c.samples(), c.lag1());
             out.println("      terms                              AIC           BIC    rms (°)  supported");
-            for (int k = 0; k < c.candidates().size(); k++) {
-                CandidateScore s = c.candidates().get(k);
-                out.printf(Locale.ROOT, "  %s  %-30s %12s  %12s  %9s  %s%n", k == c.selected() ? "=>" : "  ",
-                        termList(s.terms()), Figures.fixed(s.aic(), 1), Figures.fixed(s.bic(), 1),
-                        Figures.significant(Unit.DEGREE.fromSi(s.rms())), s.supported() ? "yes" : "no");
+            for (FitWording.CandidateLine s : FitWording.candidates(c)) {
+                out.printf(Locale.ROOT, "  %s  %-30s %12s  %12s  %9s  %s%n", s.selected() ? "=>" : "  ", s.terms(), s.aic(),
+                        s.bic(), s.rms(), s.supported() ? "yes" : "no");
             }
         });
         List<FitWarning> warnings = fit.warnings();
@@ -116,30 +90,6 @@ final class FitReportText {
         }
         out.println(Caution.TEXT);
     }
-
-    /** The verdict sentence: one dominant loss, mixed losses in order, or why there is none. */
-    static String verdict(FrictionFit fit) {
-        FrictionVerdict v = fit.verdict();
-        EnergyShares e = fit.energy();
-        return switch (v.kind()) {
-            case DOMINANT -> String.format(Locale.ROOT, "%s dominates, dissipating %s of the energy lost over the"
-                    + " records (a lead of %.0f points over the next loss; %.0f needed)", lossName(v.dominant()),
-                    percent(e.share(v.dominant()), e.sigma(v.dominant())), 100 * v.lead(), 100 * v.margin());
-            case MIXED -> "mixed: no loss leads the next by " + String.format(Locale.ROOT, "%.0f", 100 * v.margin())
-                    + " percentage points clear of the uncertainty; in order: " + v.leading().stream()
-                    .map(t -> lossName(t) + " " + percent(e.share(t), e.sigma(t))).collect(Collectors.joining(", "));
-            case WITHHELD -> fit.status() == FitStatus.MISFIT ? "withheld: the model does not describe the records"
-                    : "withheld: the fit did not converge";
-        };
-    }
-
-    private static String percent(double share, double sigma) {
-        if (Double.isFinite(sigma) && sigma > 0) {
-            return Figures.measured(100 * share, 100 * sigma) + " %";
-        }
-        return Figures.percent(share);
-    }
-
 
     private static void printGoodness(PrintWriter out, FrictionFit fit) {
         Goodness g = fit.goodness();
@@ -175,17 +125,5 @@ final class FitReportText {
                     Figures.significant(Unit.DEGREE.fromSi(s.offset().value())),
                     Figures.significant(Unit.DEGREE.fromSi(s.rms())));
         }
-    }
-
-    private static String lossName(FrictionTerm t) {
-        return switch (t) {
-            case VISCOUS -> "viscous damping";
-            case COULOMB, STICTION -> "dry (Coulomb) friction";
-            case DRAG -> "air drag";
-        };
-    }
-
-    private static String termList(List<FrictionTerm> terms) {
-        return terms.stream().map(FitJson::word).collect(Collectors.joining("+"));
     }
 }

@@ -18,8 +18,8 @@ import org.eclipse.core.resources.IResource;
 import org.eclipse.e4.ui.model.application.ui.basic.MPart;
 import org.eclipse.e4.ui.workbench.modeling.EPartService;
 import org.eclipse.e4.ui.workbench.modeling.EPartService.PartState;
-import org.eclipse.swt.SWT;
-import org.eclipse.swt.widgets.Event;
+import org.eclipse.jface.dialogs.IDialogConstants;
+import org.eclipse.jface.wizard.WizardDialog;
 import org.eclipse.swt.widgets.Shell;
 import org.eclipse.swt.widgets.Table;
 import org.eclipse.swt.widgets.TableItem;
@@ -39,15 +39,17 @@ import dev.penduline.services.SessionRecords;
 import dev.penduline.ui.PendulineViews;
 import dev.penduline.ui.internal.MechanismSelection;
 import dev.penduline.ui.internal.ProjectFilesPart;
+import dev.penduline.ui.internal.friction.FitWizard;
 import dev.penduline.ui.internal.friction.FrictionPart;
 import dev.penduline.ui.internal.friction.FrictionSheet;
 import dev.penduline.ui.internal.friction.StoredFit;
 import dev.penduline.ui.internal.wizard.MechanismProjectCreation;
 
 /**
- * The Friction view in the live workbench: a new mechanism project without sessions (Fit
- * friction must show the services' message, not a stack trace), then two short invented release
- * records, Fit friction pressed, and the stored result read back. The fit engine's accuracy is
+ * The Friction view in the live workbench: a new mechanism project without sessions (the Friction
+ * Fit wizard must show the services' message, not a stack trace), then two short invented release
+ * records, fitted through the wizard with its defaults (those of {@code penduline fit}) and
+ * Finish, and the stored result read back. The fit engine's accuracy is
  * checked against known truths in the physics and services tests; here the check is that the
  * view shows exactly what the service stored in the file. Every wait is bounded.
  */
@@ -86,12 +88,12 @@ final class FrictionViewScenario {
         });
         assertTrue(view.shown() == null, "a new file has no stored fit");
 
-        // Without sessions the service refuses; the view must say why, in its words.
-        press(view);
-        String refusal = waitFor("the refusal to fit a file without sessions", READ_NANOS,
-                () -> view.fitting() ? null : view.message());
+        // Without sessions the wizard cannot run; it must say why, in the services' words.
+        WizardDialog empty = FitWizardCapability.open(driver, view);
+        String refusal = String.valueOf(FitWizardCapability.wizardOf(empty).setupPage().getErrorMessage());
         assertTrue(refusal.contains("has no test sessions"), refusal);
         assertFalse(refusal.contains("Exception") || refusal.contains("\tat "), "a stack trace leaked: " + refusal);
+        FitWizardCapability.press(empty, IDialogConstants.CANCEL_ID);
         assertTrue(MechanismLoader.readMechanism(path).getFitResults().isEmpty(), "a refused fit stored something");
 
         addInventedSessions(path, new MechanismLoader().load(path), scratch);
@@ -100,11 +102,9 @@ final class FrictionViewScenario {
                 () -> view.sheet() != null && view.sheet().sessions() == 2 ? view.sheet() : null);
         shots.take(shell, "friction-empty.png");
 
-        press(view);
-        assertTrue(view.fitting(), "no fit started");
-        assertFalse(view.fitButton().isEnabled(), "the button must be disabled while a fit runs");
-        StoredFit shown = waitFor("the fitted result in the Friction view", FIT_NANOS,
-                () -> !view.fitting() && view.shown() != null ? view.shown() : null);
+        fitWithDefaults(view);
+        StoredFit shown = waitFor("the fitted result in the Friction view", READ_NANOS,
+                () -> view.shown() != null ? view.shown() : null);
         assertTrue(view.fitButton().isEnabled(), "the button must be enabled again after the fit");
 
         Mechanism stored = MechanismLoader.readMechanism(path);
@@ -121,9 +121,9 @@ final class FrictionViewScenario {
         shots.take(shell, "friction.png");
 
         // A second fit is stored beside the first; the newest is shown, the older one can be picked.
-        press(view);
-        waitFor("the second fit in the Friction view", FIT_NANOS,
-                () -> !view.fitting() && view.sheet().fits().size() == 2 ? view.sheet() : null);
+        fitWithDefaults(view);
+        waitFor("the second fit in the Friction view", READ_NANOS,
+                () -> view.sheet().fits().size() == 2 ? view.sheet() : null);
         List<FitResult> results = MechanismLoader.readMechanism(path).getFitResults();
         assertEquals(2, results.size(), "fit results after the second fit; message: " + view.message());
         assertEquals(results.get(1).getId(), view.shown().id(), "the newest fit is shown");
@@ -132,7 +132,7 @@ final class FrictionViewScenario {
         checkEstimate(view.estimatesTable(), results.get(0), "b");
     }
 
-    private void addInventedSessions(Path mechanismFile, MechanismSource mechanism, Path scratch) throws Exception {
+    static void addInventedSessions(Path mechanismFile, MechanismSource mechanism, Path scratch) throws Exception {
         // INVENTED truth: viscous 0.01 N·m·s/rad and Coulomb 0.04 N·m; 12 s at 200 Hz in degrees
         // with 0.02° noise, released at 12° and at 35° (two amplitudes separate viscous from dry).
         FrictionTorques truth = new FrictionTorques(0.01, 0.04, 0, 0);
@@ -173,9 +173,14 @@ final class FrictionViewScenario {
                 symbol + " shown");
     }
 
-    private void press(FrictionPart view) {
-        assertTrue(view.fitButton().isEnabled(), "Fit friction is disabled");
-        view.fitButton().notifyListeners(SWT.Selection, new Event());
+    /** The wizard with its defaults (those of 'penduline fit'): Next runs the fit, Finish stores it. */
+    private void fitWithDefaults(FrictionPart view) throws InterruptedException {
+        WizardDialog dialog = FitWizardCapability.open(driver, view);
+        FitWizard wizard = FitWizardCapability.wizardOf(dialog);
+        FitWizardCapability.press(dialog, IDialogConstants.NEXT_ID);
+        waitFor("the fit's last page", FIT_NANOS, () -> dialog.getCurrentPage() == wizard.resultsPage() ? dialog : null);
+        FitWizardCapability.press(dialog, IDialogConstants.FINISH_ID);
+        assertTrue(dialog.getShell() == null, "Finish closes the wizard; message: " + wizard.resultsPage().getErrorMessage());
     }
 
     private void reveal(IFile file) {

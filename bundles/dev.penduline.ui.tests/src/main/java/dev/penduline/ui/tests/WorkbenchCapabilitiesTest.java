@@ -49,6 +49,7 @@ class WorkbenchCapabilitiesTest {
         c.put("importWizard", new ImportWizardCapability());
         c.put("firstLanding", new FirstLandingCapability());
         c.put("preferences", new PreferencesCapability());
+        c.put("fitWizard", new FitWizardCapability());
         return c;
     }
 

@@ -15,7 +15,7 @@ import org.eclipse.swt.widgets.Label;
 
 /**
  * The top of the Friction view: the mechanism's name and file, the list of stored fits, the
- * "Fit friction" button, and one line that says what is going on (how long a fit takes, its
+ * "Fit Friction…" button, and one line that says what is going on (how long a fit takes, its
  * progress, its outcome, or an error in red).
  */
 final class FrictionHeader {
@@ -57,9 +57,9 @@ final class FrictionHeader {
         choice.addListener(SWT.Selection, e -> chosen.accept(choice.getSelectionIndex()));
         GridDataFactory.fillDefaults().align(SWT.BEGINNING, SWT.BEGINNING).applyTo(choice);
         fitButton = new Button(bar, SWT.PUSH);
-        fitButton.setText("Fit friction");
-        fitButton.setToolTipText("Identify the friction from every test session of this mechanism file, with the "
-                + "same services as 'penduline fit', and store the result in the file");
+        fitButton.setText("Fit Friction\u2026");
+        fitButton.setToolTipText("Open the Friction Fit wizard: choose sessions and terms, fit with the same services"
+                + " as 'penduline fit', and store the result in the file");
         fitButton.setEnabled(false);
         fitButton.addListener(SWT.Selection, e -> fit.run());
         GridDataFactory.fillDefaults().align(SWT.BEGINNING, SWT.BEGINNING).applyTo(fitButton);
@@ -150,7 +150,7 @@ final class FrictionHeader {
     /**
      * The button, for tests.
      *
-     * @return the "Fit friction" button
+     * @return the "Fit Friction…" button
      */
     Button fitButton() {
         return fitButton;

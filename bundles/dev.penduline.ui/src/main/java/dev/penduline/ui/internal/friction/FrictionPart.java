@@ -18,6 +18,7 @@ import org.eclipse.core.runtime.jobs.Job;
 import org.eclipse.e4.core.di.annotations.Optional;
 import org.eclipse.e4.ui.di.UISynchronize;
 import org.eclipse.e4.ui.services.IServiceConstants;
+import org.eclipse.jface.wizard.WizardDialog;
 import org.eclipse.jface.layout.GridDataFactory;
 import org.eclipse.jface.layout.GridLayoutFactory;
 import org.eclipse.jface.resource.JFaceResources;
@@ -27,16 +28,18 @@ import org.eclipse.swt.widgets.Composite;
 import org.eclipse.swt.widgets.Label;
 import org.eclipse.swt.widgets.Table;
 
+import dev.penduline.services.InputException;
 import dev.penduline.ui.internal.MechanismSelection;
 import dev.penduline.ui.internal.document.LiveModel;
+import dev.penduline.ui.internal.document.MechanismDocuments;
 import dev.penduline.ui.internal.friction.FrictionHeader.Tone;
 
 /**
  * The Friction view: follows the mechanism file selected in Project Files and shows the friction
  * fits stored in it — the verdict first, then the estimates with both standard errors and units,
  * fitted against calculated inertia, the comparison of term sets, the sessions and the
- * warnings, the caution last. "Fit friction" runs the same services as {@code penduline fit}
- * in a job and stores a converged result in the file; the view then shows it. Widgets are only
+ * warnings, the caution last. "Fit Friction…" opens the Friction Fit wizard ({@link FitWizard}),
+ * which runs the services of {@code penduline fit} and stores the result; the view then shows it. Widgets are only
  * touched on the UI thread; errors show as the services' messages, never as stack traces.
  */
 public final class FrictionPart {
@@ -44,8 +47,8 @@ public final class FrictionPart {
     static final String CAUTION = "Caution: these results are estimates to be confirmed by test. For doors, hatches, "
             + "gates and lifting gear, follow local codes and licensed engineering practice.";
     private static final String HINT = "Select a mechanism file (.penduline) in Project Files.";
-    private static final String DURATION = "Fit friction fits all test sessions at once; several long records can "
-            + "take tens of seconds.";
+    private static final String DURATION = "Fit Friction… sets up a fit of the test sessions; several long records"
+            + " can take tens of seconds.";
 
     private final UISynchronize sync;
     private FrictionHeader header;
@@ -55,7 +58,7 @@ public final class FrictionPart {
     private long shownStamp;
     private long generation;
     private Job loading;
-    private FrictionFitJob fitting;
+    private WizardDialog wizard;
     private FrictionSheet sheet;
     private StoredFit shownFit;
     private String preferredId;
@@ -133,13 +136,13 @@ public final class FrictionPart {
         }
         // A new file, or one changed since the last outcome (a session added, a fit stored by
         // the command line), makes the last outcome stale; the reload after our own fit keeps it.
-        if (fitting == null && !keepOutcome) {
+        if (!keepOutcome) {
             header.say(DURATION, Tone.HINT);
         }
         keepOutcome = false;
         shownFile = file;
         shownStamp = file.getModificationStamp();
-        header.fitEnabled(fitting == null);
+        header.fitEnabled(true);
         header.file(file.getName(), file.getFullPath().toString());
         long ticket = ++generation;
         if (loading != null) {
@@ -199,44 +202,41 @@ public final class FrictionPart {
     }
 
     /**
-     * Fits the friction of the shown mechanism file in a job, as the "Fit friction" button does.
+     * Opens the Friction Fit wizard on the shown mechanism file, as the "Fit Friction…" button
+     * does; the dialog is modal but this returns at once (the wizard stores the fit itself).
      *
-     * @return whether a fit was started (false while one runs or before a file is shown)
+     * @return whether the wizard opened (false while one is open or before a file is shown)
      */
     public boolean fit() {
-        if (fitting != null || shownFile == null || header.isDisposed()) {
+        if (shownFile == null || header.isDisposed() || (wizard != null && wizard.getShell() != null)) {
             return false;
         }
-        FrictionFitJob job = new FrictionFitJob(shownFile, line -> sync.asyncExec(() -> progress(line)),
-                attempt -> sync.asyncExec(() -> finish(attempt)));
-        fitting = job;
-        header.fitEnabled(false);
-        header.say("Fitting ... (tens of seconds for several long records; the Progress view can cancel it)",
-                Tone.NEWS);
-        job.schedule();
+        IFile file = shownFile;
+        FitWizard w;
+        try {
+            w = new FitWizard(file, id -> stored(file, id));
+        } catch (InputException e) {
+            header.say(e.getMessage(), Tone.ERROR);
+            return false;
+        }
+        wizard = new WizardDialog(header.fitButton().getShell(), w);
+        wizard.setBlockOnOpen(false);
+        wizard.setPageSize(960, 560);
+        wizard.open();
         return true;
     }
 
-    private void progress(String line) {
-        if (fitting != null && !header.isDisposed()) {
-            header.say("Fitting ... " + line, Tone.NEWS);
-        }
-    }
-
-    private void finish(FrictionFitJob.Attempt attempt) {
+    private void stored(IFile file, String id) {
         if (header.isDisposed()) {
             return;
         }
-        fitting = null;
-        header.fitEnabled(shownFile != null);
-        header.say(attempt.message(), attempt.failed() ? Tone.ERROR : Tone.NEWS);
-        if (attempt.storedId().isPresent() && attempt.file().equals(shownFile)) {
-            preferredId = attempt.storedId().get();
-            // Read again even if the workspace's change event was handled already: the new fit
-            // must be the one shown.
+        // short: the line shares its row with the list and the button
+        header.say(MechanismDocuments.of(file).isPresent() ? "Fit stored in the editor (unsaved)." : "Fit stored.", Tone.NEWS);
+        if (file.equals(shownFile)) {
+            preferredId = id;
             shownStamp = IFile.NULL_STAMP;
             keepOutcome = true;
-            show(attempt.file());
+            show(file);
         }
     }
 
@@ -281,12 +281,12 @@ public final class FrictionPart {
     }
 
     /**
-     * Whether a fit is running (the button is disabled meanwhile).
+     * The Friction Fit wizard's dialog last opened by the button, for tests.
      *
-     * @return true while the fit job runs
+     * @return the dialog (closed once its shell is null), or null before the first
      */
-    public boolean fitting() {
-        return fitting != null;
+    public WizardDialog wizardDialog() {
+        return wizard;
     }
 
     /**
@@ -308,7 +308,7 @@ public final class FrictionPart {
     }
 
     /**
-     * The "Fit friction" button, for tests.
+     * The "Fit Friction…" button, for tests.
      *
      * @return the button
      */
@@ -324,9 +324,6 @@ public final class FrictionPart {
         }
         if (loading != null) {
             loading.cancel();
-        }
-        if (fitting != null) {
-            fitting.cancel();
         }
         if (watcher != null) {
             ResourcesPlugin.getWorkspace().removeResourceChangeListener(watcher);

@@ -57,8 +57,8 @@ final class StoredFitPanel {
             verdict.setText(broken ? "" : "No fit stored yet.");
             details.setText(broken ? "" : sheet.sessions() == 0
                     ? "This mechanism has no test sessions yet: add swing records with 'penduline add-session', "
-                            + "then press Fit friction."
-                    : "Press Fit friction to identify the friction from its " + sheet.sessions()
+                            + "then press Fit Friction\u2026."
+                    : "Press Fit Friction\u2026 to set up a fit of the friction from its " + sheet.sessions()
                             + " test session(s) and store the result in the file.");
         } else {
             verdict.setText(fit.verdict());
