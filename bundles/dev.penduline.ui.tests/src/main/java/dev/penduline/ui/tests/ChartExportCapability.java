@@ -419,7 +419,7 @@ final class ChartExportCapability implements Capability {
         return e;
     }
 
-    private static Path copySample(Path target) throws IOException {
+    static Path copySample(Path target) throws IOException {
         Path sample = sampleFolder().orElseThrow(() -> new AssertionError(
                 "samples/inspection-hatch not found above " + Path.of("").toAbsolutePath()));
         try (Stream<Path> files = Files.walk(sample)) {

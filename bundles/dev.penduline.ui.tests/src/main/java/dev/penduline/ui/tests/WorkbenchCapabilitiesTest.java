@@ -46,6 +46,7 @@ class WorkbenchCapabilitiesTest {
         c.put("editorAndUndo", new EditorAndUndoCapability());
         c.put("chartExport", new ChartExportCapability());
         c.put("problemsMarkers", new ProblemsMarkersCapability());
+        c.put("whatIf", new WhatIfCapability());
         return c;
     }
 
