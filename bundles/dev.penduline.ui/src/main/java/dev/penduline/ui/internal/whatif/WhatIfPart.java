@@ -27,6 +27,7 @@ import org.eclipse.emf.ecore.util.EcoreUtil;
 import org.eclipse.jface.layout.GridDataFactory;
 import org.eclipse.jface.layout.GridLayoutFactory;
 import org.eclipse.swt.SWT;
+import org.eclipse.swt.custom.ScrolledComposite;
 import org.eclipse.swt.graphics.Color;
 import org.eclipse.swt.widgets.Button;
 import org.eclipse.swt.widgets.Combo;
@@ -112,6 +113,7 @@ public final class WhatIfPart {
     private final UISynchronize sync;
     private final Map<String, Label> figures = new LinkedHashMap<>();
     private Object pending;
+    private ScrolledComposite scroll;
     private Label title;
     private Combo sessions;
     private TrialSlider angle;
@@ -154,9 +156,14 @@ public final class WhatIfPart {
     @PostConstruct
     public void create(Composite parent) {
         GridLayoutFactory.swtDefaults().numColumns(2).margins(6, 4).applyTo(parent);
-        Composite left = new Composite(parent, SWT.NONE);
+        // the controls and figures scroll when the view is shorter than they are
+        scroll = new ScrolledComposite(parent, SWT.V_SCROLL);
+        scroll.setExpandHorizontal(true);
+        scroll.setExpandVertical(true);
+        GridDataFactory.fillDefaults().grab(false, true).applyTo(scroll);
+        Composite left = new Composite(scroll, SWT.NONE);
+        scroll.setContent(left);
         GridLayoutFactory.fillDefaults().numColumns(5).applyTo(left);
-        GridDataFactory.fillDefaults().grab(false, true).applyTo(left);
         title = new Label(left, SWT.WRAP);
         title.setText("Select a mechanism file in Project Files to try swings with it.");
         GridDataFactory.fillDefaults().span(5, 1).hint(560, SWT.DEFAULT).applyTo(title);
@@ -190,6 +197,7 @@ public final class WhatIfPart {
         Composite charts = new Composite(parent, SWT.NONE);
         GridLayoutFactory.fillDefaults().numColumns(2).equalWidth(true).applyTo(charts);
         GridDataFactory.fillDefaults().grab(true, true).applyTo(charts);
+        scroll.setMinSize(left.computeSize(SWT.DEFAULT, SWT.DEFAULT));
         swing = chart(charts, "Trial swing", "time (s)", "angle (°)");
         GridDataFactory.fillDefaults().span(2, 1).grab(true, true).hint(300, 150).applyTo(swing);
         phase = chart(charts, "Phase portrait", "angle (°)", "angular velocity (°/s)");
@@ -268,7 +276,7 @@ public final class WhatIfPart {
             title.setText(e.getMessage());
             enable(false);
         }
-        title.getParent().layout(true, true);
+        relayout();
     }
 
     private void fillSessions(Mechanism m) {
@@ -479,12 +487,12 @@ public final class WhatIfPart {
             clear(swing);
             clear(phase);
             clear(energy);
-            title.getParent().layout(true, true);
+            relayout();
             return;
         }
         writeFigures(r);
         draw(r);
-        title.getParent().layout(true, true);
+        relayout();
     }
 
     private void writeFigures(Result r) {
@@ -513,6 +521,12 @@ public final class WhatIfPart {
                 e.viscous()) + " J, Coulomb " + Figures.significant(e.coulomb()) + " J, drag " + Figures.significant(e.drag())
                 + " J; " + Figures.significant(e.remaining()) + " J left after " + Figures.significant(n.simulatedTime()) + " s"
                 + (r.trial().note().isEmpty() ? "" : " (" + r.trial().note() + ")"));
+    }
+
+    private void relayout() {
+        Composite left = title.getParent();
+        left.layout(true, true);
+        scroll.setMinSize(left.computeSize(SWT.DEFAULT, SWT.DEFAULT));
     }
 
     private void set(String key, String text) {
@@ -639,7 +653,8 @@ public final class WhatIfPart {
         } catch (InputException e) {
             status.setText("Not stored: " + e.getMessage());
         }
-        status.getParent().layout(true, true);
+        relayout();
+        scroll.showControl(status);
     }
 
     /**
