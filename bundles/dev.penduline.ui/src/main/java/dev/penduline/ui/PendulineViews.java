@@ -15,6 +15,8 @@ public final class PendulineViews {
     public static final String SWING_CHART = "dev.penduline.ui.swingChart";
     /** The friction fits stored in a mechanism file, and the action that fits its sessions. */
     public static final String FRICTION = "dev.penduline.ui.friction";
+    /** The swing trial: release and friction on sliders, re-forecast live, stored as a hypothesis. */
+    public static final String WHAT_IF = "dev.penduline.ui.whatIf";
     /** The wizard that creates a mechanism project (File › New). */
     public static final String NEW_MECHANISM_PROJECT = "dev.penduline.ui.newMechanismProject";
     /** The mechanism editor, for .penduline files. */

@@ -50,6 +50,7 @@ class WorkbenchCapabilitiesTest {
         c.put("firstLanding", new FirstLandingCapability());
         c.put("preferences", new PreferencesCapability());
         c.put("fitWizard", new FitWizardCapability());
+        c.put("whatIf", new WhatIfCapability());
         return c;
     }
 

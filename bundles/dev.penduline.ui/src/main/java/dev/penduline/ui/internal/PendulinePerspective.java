@@ -33,6 +33,7 @@ public final class PendulinePerspective implements IPerspectiveFactory {
         // it came from, and the chart beside it stays in sight.
         centre.addView(PendulineViews.FRICTION);
         centre.addView(PendulineViews.SWING_DESK);
+        centre.addView(PendulineViews.WHAT_IF);
         IFolderLayout charts = layout.createFolder("dev.penduline.ui.charts", IPageLayout.RIGHT, 0.6f,
                 "dev.penduline.ui.centre");
         charts.addView(PendulineViews.SWING_CHART);
@@ -41,6 +42,7 @@ public final class PendulinePerspective implements IPerspectiveFactory {
                 PendulineViews.PROBLEMS, PendulineViews.PROGRESS}) {
             layout.addShowViewShortcut(view);
         }
+        layout.addShowViewShortcut(PendulineViews.WHAT_IF);
         layout.addNewWizardShortcut(PendulineViews.NEW_MECHANISM_PROJECT);
     }
 }
