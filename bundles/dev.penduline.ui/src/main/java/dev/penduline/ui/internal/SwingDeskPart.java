@@ -128,10 +128,10 @@ public final class SwingDeskPart {
                 () -> ProjectFilesPart.openEditor(file)));
         all.add(new Step("<a>Import swing records...</a> as test sessions" + count(sessions, "session"),
                 () -> RecordImportWizard.open(steps.getShell(), file, List.of())));
-        all.add(new Step("<a>Fit the friction</a> of the sessions in the Friction view" + count(fits, "stored fit"),
+        all.add(new Step("<a>Fit the friction</a> of the sessions (Friction view, Fit Friction...)" + count(fits, "stored fit"),
                 () -> showView(PendulineViews.FRICTION)));
-        all.add(new Step("<a>Try a swing</a>: the predicted free swing and the records in the Swing Chart",
-                () -> showView(PendulineViews.SWING_CHART)));
+        all.add(new Step("<a>Try a swing</a> in the Swing Trial: release, friction and what the mechanism will do",
+                () -> showView(PendulineViews.WHAT_IF)));
         int now = sessions == 0 ? 1 : fits == 0 ? 2 : sessions > 0 ? 3 : 0;
         for (int i = 0; i < all.size(); i++) {
             Step s = all.get(i);
