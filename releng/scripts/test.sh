@@ -3,6 +3,8 @@
 # when missing (Xvfb, xauth and GTK 3 from Debian; Maven 3.9 into .tools/), then builds
 # everything and runs all tests: the plain JUnit tests of the headless bundles and the OSGi and
 # workbench tests under a virtual display. Extra arguments go to Maven (e.g. -o, -pl ...).
+# Then it installs the built feature into a bare Equinox with the p2 director and runs its headless
+# application and a workbench view (releng/scripts/install-test.sh, about 15 s).
 # Then it fuzzes the three readers of user files (releng/scripts/fuzz.sh) for FUZZ_SECONDS per
 # reader (default 60; FUZZ_SECONDS=0 skips it) and fails on a finding, printing the input.
 set -euo pipefail
@@ -41,6 +43,15 @@ echo "test.sh: JDK $JAVA_HOME, $("$mvn" -v | head -n 1)" >&2
 # Generated EMF code must be what the genmodel generates (never hand-edited).
 "$root/releng/scripts/regenerate-model.sh" --check
 xvfb-run -a -s "-screen 0 1400x900x24" "$mvn" "${opts[@]}" clean verify "$@"
+# Installable into an existing Eclipse: the p2 director of a bare Equinox installs the built
+# feature from the built repository; its headless application and a workbench view must work
+# (releng/scripts/install-test.sh). A build limited with -pl/--projects has not made the
+# repository and the bare Equinox, so the install test is left out then, and says so.
+if [[ " $* " == *" -pl "* || " $* " == *" --projects "* || " $* " == *" -DskipTests "* ]]; then
+  echo "test.sh: a limited build (-pl, --projects or -DskipTests): the install test is not run" >&2
+else
+  "$root/releng/scripts/install-test.sh"
+fi
 if [ "$fuzz_seconds" -eq 0 ]; then
   echo "test.sh: FUZZ_SECONDS=0: the readers are not fuzzed" >&2
   exit 0
