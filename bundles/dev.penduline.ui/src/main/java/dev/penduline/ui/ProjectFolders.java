@@ -114,7 +114,8 @@ public final class ProjectFolders {
 
     /**
      * Lands on a project just opened: selects its mechanism file in Project Files (or the project
-     * when it has none), so the views show the mechanism rather than "No mechanism selected".
+     * when it has none), so the views show the mechanism rather than "No mechanism selected", and
+     * opens it in the mechanism editor.
      *
      * @param window  the window, may be null (then nothing happens)
      * @param project the project
@@ -123,5 +124,10 @@ public final class ProjectFolders {
     public static void land(IWorkbenchWindow window, IProject project) throws CoreException {
         Optional<IFile> mechanism = firstMechanismFile(project);
         reveal(window, mechanism.isPresent() ? mechanism.get() : project);
+        if (mechanism.isPresent()) {
+            ProjectFilesPart.openEditor(mechanism.get());
+            // the views keep following the file; Project Files keeps the focus a user expects after opening
+            reveal(window, mechanism.get());
+        }
     }
 }

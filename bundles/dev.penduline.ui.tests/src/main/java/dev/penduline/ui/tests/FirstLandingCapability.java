@@ -14,10 +14,12 @@ import org.eclipse.core.runtime.NullProgressMonitor;
 import org.eclipse.jface.viewers.IStructuredSelection;
 import org.eclipse.swt.widgets.Combo;
 import org.eclipse.swt.widgets.Shell;
+import org.eclipse.ui.IEditorPart;
 
 import dev.penduline.ui.PendulineViews;
 import dev.penduline.ui.ProjectFolders;
 import dev.penduline.ui.internal.SwingDeskPart;
+import dev.penduline.ui.internal.editor.MechanismEditor;
 import dev.penduline.ui.internal.mechanism.MechanismPart;
 
 /**
@@ -39,6 +41,8 @@ final class FirstLandingCapability implements Capability {
         IFile hatch = project.getFile("hatch.penduline");
         Object selected = driver.window().getSelectionService().getSelection(PendulineViews.PROJECT_FILES);
         assertEquals(hatch, ((IStructuredSelection) selected).getFirstElement(), "Project Files selects the mechanism file");
+        IEditorPart editor = driver.page().getActiveEditor();
+        assertTrue(editor instanceof MechanismEditor m && m.document().file().equals(hatch), "the mechanism opens in the editor");
         MechanismPart mechanism = (MechanismPart) driver.part(PendulineViews.MECHANISM).getObject();
         driver.waitFor("the Mechanism view to show the hatch", () -> mechanism.sheet() != null
                 && mechanism.sheet().title().startsWith("Inspection hatch") ? true : null);
@@ -78,6 +82,7 @@ final class FirstLandingCapability implements Capability {
         driver.flush();
         assertEquals(hatch.getFullPath().toString(), shown[0], "the import opened on the mechanism of the desk");
 
+        driver.page().closeEditor(editor, false);
         // a new project without sessions: importing records is next
         IFile fresh = TestMechanisms.rodAndDisc(scratch, "landing-arm", "Landing arm (invented)");
         driver.reveal(fresh);

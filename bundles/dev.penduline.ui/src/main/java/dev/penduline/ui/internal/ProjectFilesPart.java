@@ -125,7 +125,7 @@ public final class ProjectFilesPart {
      *
      * @param file the mechanism file
      */
-    static void openEditor(IFile file) {
+    public static void openEditor(IFile file) {
         IWorkbenchWindow window = PlatformUI.getWorkbench().getActiveWorkbenchWindow();
         if (window == null || window.getActivePage() == null) {
             return;

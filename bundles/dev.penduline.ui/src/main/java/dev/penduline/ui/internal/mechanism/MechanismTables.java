@@ -31,7 +31,7 @@ final class MechanismTables {
     MechanismTables(Composite parent) {
         sash = new SashForm(parent, SWT.HORIZONTAL);
         GridDataFactory.fillDefaults().grab(true, true).applyTo(sash);
-        totals = new TableViewer(sash, SWT.BORDER | SWT.FULL_SELECTION | SWT.V_SCROLL);
+        totals = new TableViewer(sash, SWT.BORDER | SWT.FULL_SELECTION | SWT.V_SCROLL | SWT.H_SCROLL);
         totals.setContentProvider(ArrayContentProvider.getInstance());
         column(totals, "total", SWT.LEFT, 150, TotalRow.class, TotalRow::quantity);
         column(totals, "value", SWT.RIGHT, 70, TotalRow.class, TotalRow::value);
@@ -51,7 +51,8 @@ final class MechanismTables {
         column(parts, "share", SWT.RIGHT, 68, PartContribution.class, p -> Figures.percent(p.share()));
         parts.getTable().setHeaderVisible(true);
         parts.getTable().setLinesVisible(true);
-        sash.setWeights(46, 54);
+        // the totals need their values in sight; the parts table scrolls sideways
+        sash.setWeights(58, 42);
         // nothing to show until a mechanism is loaded
         sash.setVisible(false);
         ((GridData) sash.getLayoutData()).exclude = true;
@@ -60,7 +61,7 @@ final class MechanismTables {
     void show(MechanismSheet sheet) {
         totals.setInput(sheet.totals());
         parts.setInput(sheet.parts());
-        fit(totals, 185, 125);
+        fit(totals, 165, 125);
         fit(parts, 200);
         boolean empty = sheet.totals().isEmpty();
         sash.setVisible(!empty);
