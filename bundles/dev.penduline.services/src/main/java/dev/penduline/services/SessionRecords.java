@@ -379,6 +379,73 @@ public final class SessionRecords {
         return warnings;
     }
 
+    /** Whether a session's record is still the one that was added, in the words the workbench shows. */
+    public enum RecordState {
+        /** Present, with the stored SHA-256. */
+        UNCHANGED("unchanged"),
+        /** Present, with another SHA-256 than the stored one. */
+        CHANGED("changed since added"),
+        /** Present; the session stores no hash to compare with. */
+        NO_HASH("no hash stored"),
+        /** Not where the session says. */
+        MISSING("missing"),
+        /** Outside the project, through a link, or not a regular file. */
+        NOT_USABLE("not usable"),
+        /** There, but it cannot be read. */
+        UNREADABLE("unreadable");
+
+        private final String words;
+
+        RecordState(String words) {
+            this.words = words;
+        }
+
+        /** @return the state as the workbench shows it */
+        public String words() {
+            return words;
+        }
+    }
+
+    /** How the state of a record is hashed (a cache may stand in for {@link SessionRecords#sha256(Path)}). */
+    @FunctionalInterface
+    public interface Hasher {
+        /**
+         * The SHA-256 of a file.
+         *
+         * @param file the file
+         * @return the hash in lower-case hexadecimal
+         * @throws IOException when it cannot be read
+         */
+        String sha256(Path file) throws IOException;
+    }
+
+    /**
+     * Whether a session's record is still the one that was added, without reading it as a record.
+     *
+     * @param mechanismFile the mechanism file
+     * @param session       the session
+     * @param hasher        hashes the record (e.g. {@code SessionRecords::sha256})
+     * @return the state
+     */
+    public static RecordState recordState(Path mechanismFile, TestSession session, Hasher hasher) {
+        Path file;
+        try {
+            file = recordFile(mechanismFile, session);
+        } catch (InputException e) {
+            return Files.exists(projectOf(mechanismFile).resolve(String.valueOf(session.getRecordPath())).normalize())
+                    ? RecordState.NOT_USABLE : RecordState.MISSING;
+        }
+        try {
+            String now = hasher.sha256(file);
+            if (session.getContentHash() == null || session.getContentHash().isBlank()) {
+                return RecordState.NO_HASH;
+            }
+            return changeOf(session, now).isPresent() ? RecordState.CHANGED : RecordState.UNCHANGED;
+        } catch (IOException e) {
+            return RecordState.UNREADABLE;
+        }
+    }
+
     /**
      * Says so when a session's record has changed since it was added: its SHA-256 is not the stored one.
      *

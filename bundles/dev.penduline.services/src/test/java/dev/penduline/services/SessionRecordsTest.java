@@ -88,6 +88,23 @@ class SessionRecordsTest {
     }
 
     @Test
+    void aRecordsStateFollowsItsFileAndTheStoredHash() throws Exception {
+        add(Files.writeString(outside.resolve("release.csv"), swing(10)));
+        TestSession s = session(0);
+        Path copy = project.resolve(s.getRecordPath());
+        assertEquals(SessionRecords.RecordState.UNCHANGED, SessionRecords.recordState(mechanism, s, SessionRecords::sha256));
+        Files.writeString(copy, swing(11));
+        assertEquals(SessionRecords.RecordState.CHANGED, SessionRecords.recordState(mechanism, s, SessionRecords::sha256));
+        s.setContentHash(null);
+        assertEquals(SessionRecords.RecordState.NO_HASH, SessionRecords.recordState(mechanism, s, SessionRecords::sha256));
+        assertEquals(SessionRecords.RecordState.UNREADABLE, SessionRecords.recordState(mechanism, s, f -> {
+            throw new java.io.IOException("refused by the test");
+        }));
+        Files.delete(copy);
+        assertEquals(SessionRecords.RecordState.MISSING, SessionRecords.recordState(mechanism, s, SessionRecords::sha256));
+    }
+
+    @Test
     void aDifferentRecordUnderASessionRecordsNameIsAClashOfNamesNotADuplicate() throws Exception {
         add(Files.writeString(outside.resolve("release.csv"), swing(10)));
         Path other = Files.createDirectories(dir.resolve("other"));

@@ -13,7 +13,6 @@ import org.eclipse.ui.forms.widgets.FormToolkit;
 import dev.penduline.model.AngleUnit;
 import dev.penduline.model.TestSession;
 import dev.penduline.model.TimeUnit;
-import dev.penduline.services.InputException;
 import dev.penduline.services.SessionRecords;
 
 /**
@@ -132,31 +131,28 @@ final class SessionsPage extends EditorPage {
      * Whether a session's record is still the one added.
      *
      * @param s the session
-     * @return "unchanged", "changed (…)", "missing", "no hash stored", or what is wrong
+     * @return the state's words, with the short hash when unchanged
      */
     String hashState(TestSession s) {
-        Path file;
-        try {
-            file = SessionRecords.recordFile(document().path(), s);
-        } catch (InputException e) {
-            return e.getMessage().contains("missing") ? "missing" : "not usable";
+        String[] hash = new String[1];
+        SessionRecords.RecordState state = SessionRecords.recordState(document().path(), s, file -> {
+            hash[0] = cachedHash(file);
+            return hash[0];
+        });
+        return state == SessionRecords.RecordState.UNCHANGED ? state.words() + " " + SessionRecords.shortHash(hash[0])
+                : state.words();
+    }
+
+    /** The record's SHA-256, hashed again only when its size or time changed (the page refreshes on every edit). */
+    private String cachedHash(Path file) throws IOException {
+        long modified = Files.getLastModifiedTime(file).toMillis();
+        long size = Files.size(file);
+        Hashed h = hashes.get(file);
+        if (h == null || h.modified() != modified || h.size() != size) {
+            h = new Hashed(modified, size, SessionRecords.sha256(file));
+            hashes.put(file, h);
         }
-        if (s.getContentHash() == null || s.getContentHash().isBlank()) {
-            return "no hash stored";
-        }
-        try {
-            long modified = Files.getLastModifiedTime(file).toMillis();
-            long size = Files.size(file);
-            Hashed h = hashes.get(file);
-            if (h == null || h.modified() != modified || h.size() != size) {
-                h = new Hashed(modified, size, SessionRecords.sha256(file));
-                hashes.put(file, h);
-            }
-            return SessionRecords.changeOf(s, h.sha256()).isPresent() ? "changed since added"
-                    : "unchanged " + SessionRecords.shortHash(h.sha256());
-        } catch (IOException e) {
-            return "unreadable";
-        }
+        return h.sha256();
     }
 
     private void remove() {
@@ -173,8 +169,4 @@ final class SessionsPage extends EditorPage {
         return select(table, mechanism().getSessions(), TestSession::getId, elementId);
     }
 
-    /** @return the table (for tests) */
-    EditableTable<TestSession> table() {
-        return table;
-    }
 }

@@ -1,6 +1,5 @@
 package dev.penduline.ui.internal.friction;
 
-import java.io.IOException;
 import java.nio.file.Path;
 import java.util.ArrayList;
 import java.util.EnumSet;
@@ -27,7 +26,6 @@ import dev.penduline.ui.internal.preferences.WorkbenchDefaults;
 import dev.penduline.model.TestSession;
 import dev.penduline.physics.identify.FrictionTerm;
 import dev.penduline.services.FrictionIdentification;
-import dev.penduline.services.InputException;
 import dev.penduline.services.SessionRecords;
 import dev.penduline.services.present.Figures;
 
@@ -125,13 +123,7 @@ public final class FitSetupPage extends WizardPage {
     }
 
     private String stateOf(TestSession s) {
-        try {
-            Path record = SessionRecords.recordFile(mechanismFile, s);
-            return SessionRecords.changeOf(s, SessionRecords.sha256(record)).map(x -> "changed since added")
-                    .orElse(s.getContentHash() == null || s.getContentHash().isBlank() ? "no hash stored" : "unchanged");
-        } catch (InputException | IOException e) {
-            return "missing or unreadable";
-        }
+        return SessionRecords.recordState(mechanismFile, s, SessionRecords::sha256).words();
     }
 
     private void validate() {
