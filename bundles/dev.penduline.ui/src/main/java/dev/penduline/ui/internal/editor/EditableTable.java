@@ -20,7 +20,6 @@ import org.eclipse.jface.viewers.TableViewerEditor;
 import org.eclipse.jface.viewers.TextCellEditor;
 import org.eclipse.swt.SWT;
 import org.eclipse.swt.widgets.Composite;
-import org.eclipse.swt.widgets.Table;
 
 /**
  * A table of model objects whose cells are edited in place: each column shows a text and, when
@@ -60,10 +59,6 @@ final class EditableTable<T> {
         return viewer;
     }
 
-    /** @return the table widget */
-    Table table() {
-        return viewer.getTable();
-    }
 
     /** @return the composite holding the table */
     Composite control() {

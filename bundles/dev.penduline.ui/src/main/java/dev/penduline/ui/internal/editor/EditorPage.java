@@ -121,14 +121,6 @@ abstract class EditorPage extends FormPage {
         return this::refused;
     }
 
-    /**
-     * The last message shown for a refused edit (for tests and screen readers).
-     *
-     * @return the text, empty when the last edit went through
-     */
-    public final String problemText() {
-        return problem == null || problem.isDisposed() ? "" : problem.getText();
-    }
 
     /**
      * A table filling the page's width, its errors shown on this page.

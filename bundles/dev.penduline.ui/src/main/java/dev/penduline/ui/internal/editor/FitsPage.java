@@ -75,8 +75,4 @@ final class FitsPage extends EditorPage {
         return select(table, mechanism().getFitResults(), FitResult::getId, elementId);
     }
 
-    /** @return the table (for tests) */
-    EditableTable<FitResult> table() {
-        return table;
-    }
 }

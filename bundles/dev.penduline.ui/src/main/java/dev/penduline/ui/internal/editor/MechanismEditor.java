@@ -219,7 +219,8 @@ public final class MechanismEditor extends FormEditor implements IGotoMarker {
             return;
         }
         IResourceDelta delta = event.getDelta().findMember(d.file().getFullPath());
-        if (delta == null || (delta.getFlags() & IResourceDelta.CONTENT) == 0 && delta.getKind() != IResourceDelta.CHANGED) {
+        // only a new content: marker changes (the Problems updater's) must not hash the file again
+        if (delta == null || (delta.getFlags() & (IResourceDelta.CONTENT | IResourceDelta.REPLACED)) == 0) {
             return;
         }
         Display display = getSite().getShell().getDisplay();

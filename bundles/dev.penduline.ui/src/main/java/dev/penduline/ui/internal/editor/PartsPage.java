@@ -99,15 +99,7 @@ final class PartsPage extends EditorPage {
         return select(table, mechanism().getParts(), Part::getId, elementId);
     }
 
-    /** @return the table (for tests) */
-    EditableTable<Part> table() {
-        return table;
-    }
 
-    /** @return the totals line */
-    String totals() {
-        return totals == null || totals.isDisposed() ? "" : totals.getText();
-    }
 
     static String totalsOf(Mechanism m) {
         try {

@@ -2,7 +2,6 @@ package dev.penduline.ui.internal.editor;
 
 import java.util.ArrayList;
 import java.util.List;
-import java.util.function.Function;
 
 import org.eclipse.emf.ecore.EAttribute;
 import org.eclipse.swt.widgets.Composite;
@@ -87,8 +86,7 @@ final class PivotPage extends EditorPage {
             }
             value = v;
         }
-        Function<Mechanism, Object> old = m -> m.eGet(r.attribute());
-        if (value.equals(old.apply(mechanism()))) {
+        if (value.equals(mechanism().eGet(r.attribute()))) {
             return;
         }
         MechanismEdits.runOnParts(document(), "Set " + r.label(), () -> mechanism().eSet(r.attribute(), value));
@@ -109,8 +107,4 @@ final class PivotPage extends EditorPage {
         return false;
     }
 
-    /** @return the table (for tests) */
-    EditableTable<Row> table() {
-        return table;
-    }
 }
