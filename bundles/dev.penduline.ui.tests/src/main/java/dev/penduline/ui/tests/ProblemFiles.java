@@ -23,13 +23,6 @@ import dev.penduline.services.SessionRecords;
  */
 final class ProblemFiles {
 
-    /** INVENTED test mechanism: a rod with a disc at its tip. */
-    static final String PARTS = """
-            # INVENTED test data for the workbench test, not a real product.
-            name,shape,mass_kg,x_mm,y_mm,z_mm,length_mm,radius_mm,inner_radius_mm,axis
-            arm,rod,2,0,-400,0,800,,,y
-            bob,cylinder,3,0,-900,0,20,100,0,z
-            """;
     /** The arm's mass as the mechanism file writes it. */
     static final String ARM_MASS = "<mass>2.0</mass>";
     /** The line of the broken file where the XML breaks: its name element is closed by a misspelt tag. */
@@ -57,7 +50,8 @@ final class ProblemFiles {
      */
     ProblemFiles(Path folder, Path scratch) throws Exception {
         this.folder = folder;
-        Path csv = Files.writeString(scratch.resolve("marker-arm-parts.csv"), PARTS, StandardCharsets.UTF_8);
+        Path csv = Files.writeString(scratch.resolve("marker-arm-parts.csv"), TestMechanisms.ROD_AND_DISC,
+                StandardCharsets.UTF_8);
         valid = folder.resolve("valid.penduline");
         NewMechanismFile.write("Valid arm (invented)", Optional.of(NewMechanismFile.readPartsList(csv)), valid);
         String text = Files.readString(valid);
