@@ -19,7 +19,8 @@ import org.eclipse.swt.widgets.Shell;
 /**
  * Saves what a shell shows as a PNG under {@code penduline.screenshotDir} (default {@code
  * target/screenshots}); the shots named in {@code penduline.readmeShots} (comma separated) are
- * also copied to {@code penduline.readmeDir}, the README's pictures, so they never go stale.
+ * also copied to {@code penduline.readmeDir} (unless it is {@code off}), the README's pictures, when
+ * they are regenerated ({@code -Dreadme.pictures=true}).
  */
 final class Screenshots {
 
@@ -30,7 +31,7 @@ final class Screenshots {
     Screenshots() {
         dir = Paths.get(System.getProperty("penduline.screenshotDir", "target/screenshots"));
         String readme = System.getProperty("penduline.readmeDir", "");
-        readmeDir = readme.isBlank() ? null : Paths.get(readme);
+        readmeDir = readme.isBlank() || "off".equals(readme) ? null : Paths.get(readme);
         readmeShots = Set.of(System.getProperty("penduline.readmeShots", "").split("\\s*,\\s*"));
     }
 
