@@ -74,4 +74,13 @@ class LayeringTest {
         assertEquals(List.of(), violations("dev.penduline.records", forbidden));
         assertEquals(List.of(), violations("dev.penduline.services", forbidden));
     }
+
+    @Test
+    void reportsAreMadeHeadlessBelowTheCommandLineAndTheWorkbench() throws IOException {
+        // the plots are drawn with JFreeChart on an SVG canvas (java.awt.geom, never a window)
+        List<String> forbidden = List.of("org.eclipse.swt", "org.eclipse.jface", "org.eclipse.ui", "org.eclipse.e4",
+                "org.eclipse.core.resources", "org.osgi.", "javax.swing", "dev.penduline.cli", "dev.penduline.ui",
+                "dev.penduline.app");
+        assertEquals(List.of(), violations("dev.penduline.report", forbidden));
+    }
 }
