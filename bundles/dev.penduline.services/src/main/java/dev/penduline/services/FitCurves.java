@@ -49,16 +49,44 @@ public final class FitCurves {
                 .withTolerance(fit.settings().integrationTolerance());
         List<Curve> curves = new ArrayList<>();
         for (int s = 0; s < outcome.sessions().size() && s < fit.sessions().size(); s++) {
-            curves.add(curve(simulator, fit.sessions().get(s), outcome.sessions().get(s).record().times(),
-                    outcome.sessions().get(s).record().angles()));
+            SessionEstimate e = fit.sessions().get(s);
+            curves.add(replay(simulator, e.name(), e.releaseAngle().value(), e.releaseTime().value(), e.offset().value(),
+                    outcome.sessions().get(s).record().times(), outcome.sessions().get(s).record().angles()));
         }
         return curves;
     }
 
-    private static Curve curve(SwingSimulator simulator, SessionEstimate e, double[] t, double[] y) {
-        double theta0 = e.releaseAngle().value();
-        double release = e.releaseTime().value();
-        double offset = e.offset().value();
+    /**
+     * The simulator of a fit stored in a mechanism file: the mechanism about its equilibrium, with
+     * the fitted pivot inertia when the fit freed it, and the stored friction torques.
+     *
+     * @param mechanism the mechanism the fit belongs to
+     * @param fit       the stored fit
+     * @param tolerance the integration tolerance (the stored fit's setting, or the default)
+     * @return the simulator
+     */
+    public static SwingSimulator simulatorOf(MechanismSource mechanism, StoredFit fit, double tolerance) {
+        MechanismProperties level = FrictionIdentification.aboutEquilibrium(mechanism.properties());
+        if (Double.isFinite(fit.fittedInertia())) {
+            level = level.withPivotInertia(fit.fittedInertia());
+        }
+        return new SwingSimulator(level, fit.friction()).withTolerance(tolerance);
+    }
+
+    /**
+     * The model of one record from a session's fitted values, as the fit's measurement model has it.
+     *
+     * @param simulator the fit's simulator ({@link #simulatorOf})
+     * @param session   the session's name
+     * @param theta0    the fitted release angle from the equilibrium (rad)
+     * @param release   the fitted release time on the record's time base (s)
+     * @param offset    the fitted sensor offset (rad)
+     * @param t         the record's times (s)
+     * @param y         the record's angles (rad, sensor frame)
+     * @return the curve
+     */
+    public static Curve replay(SwingSimulator simulator, String session, double theta0, double release, double offset,
+            double[] t, double[] y) {
         int n = t.length;
         int first = 0;
         while (first < n && t[first] - release <= 0) {
@@ -83,6 +111,6 @@ public final class FitCurves {
         for (int i = 0; i < n; i++) {
             residuals[i] = y[i] - model[i];
         }
-        return new Curve(e.name(), t.clone(), y.clone(), model, residuals);
+        return new Curve(session, t.clone(), y.clone(), model, residuals);
     }
 }

@@ -3,6 +3,7 @@ package dev.penduline.services;
 import java.nio.file.Path;
 import java.time.Instant;
 import java.time.temporal.ChronoUnit;
+import java.util.ArrayList;
 import java.util.List;
 import java.util.Locale;
 import java.util.function.Consumer;
@@ -24,6 +25,7 @@ import dev.penduline.physics.identify.FitWarning;
 import dev.penduline.physics.identify.FrictionFit;
 import dev.penduline.physics.identify.FrictionTerm;
 import dev.penduline.physics.identify.FrictionVerdict;
+import dev.penduline.physics.identify.Goodness;
 import dev.penduline.physics.identify.ParameterEstimate;
 import dev.penduline.physics.identify.SessionEstimate;
 
@@ -34,6 +36,9 @@ import dev.penduline.physics.identify.SessionEstimate;
  * energy shares, the settings, and when it was computed (the file's only timestamp).
  */
 public final class FitRecorder {
+
+    /** The setting that holds the verdict sentence, as {@link FitWording#verdict} wrote it. */
+    public static final String VERDICT = "verdict";
 
     private FitRecorder() {
     }
@@ -183,9 +188,54 @@ public final class FitRecorder {
         if (fit.stopBand() != null) {
             setting(r, "stop-band", fit.stopBand().lower() + ".." + fit.stopBand().upper());
         }
-        List<FitWarning> warnings = fit.warnings();
+        evidence(r, outcome);
+        // the fit's warnings, then the records' (the order of `penduline fit`'s report and JSON)
+        List<String> warnings = new ArrayList<>(fit.warnings().stream().map(FitWarning::message).toList());
+        warnings.addAll(outcome.warnings());
         for (int i = 0; i < warnings.size(); i++) {
-            setting(r, "warning-" + (i + 1), warnings.get(i).message());
+            setting(r, "warning-" + (i + 1), warnings.get(i));
+        }
+    }
+
+    /**
+     * What a report of the stored fit needs beyond the estimates, so that it says what
+     * {@code penduline fit} said without fitting again: the verdict in words and its numbers, the
+     * energy shares' standard deviations, the fit against the noise floor of each record, the stop's
+     * note, the totals. Stored as further settings (the file's schema is unchanged: a file written
+     * before these keys existed still loads, and a report of it says what was not stored).
+     */
+    private static void evidence(FitResult r, FrictionIdentification.Outcome outcome) {
+        FrictionFit fit = outcome.fit();
+        if (fit.energy() != null) {
+            setting(r, VERDICT, FitWording.verdict(fit));
+            setting(r, "verdict-lead", String.valueOf(fit.verdict().lead()));
+            setting(r, "verdict-lead-sigma", String.valueOf(fit.verdict().leadSigma()));
+            setting(r, "energy-dissipated", String.valueOf(fit.energy().dissipated()));
+            setting(r, "energy-sigma-viscous", String.valueOf(fit.energy().viscousSigma()));
+            setting(r, "energy-sigma-coulomb", String.valueOf(fit.energy().coulombSigma()));
+            setting(r, "energy-sigma-drag", String.valueOf(fit.energy().dragSigma()));
+        }
+        setting(r, "rms-residual", String.valueOf(fit.rms()));
+        setting(r, "samples", String.valueOf(fit.samples()));
+        Goodness g = fit.goodness();
+        if (g != null) {
+            setting(r, "noise-floor", String.valueOf(g.floor()));
+            setting(r, "noise-limit", String.valueOf(g.limit()));
+            setting(r, "noise-passed", String.valueOf(g.passed()));
+            for (int k = 0; k < g.sessions().size() && k < fit.sessions().size(); k++) {
+                String id = sessionId(outcome, fit.sessions().get(k).name());
+                Goodness.SessionGoodness sg = g.sessions().get(k);
+                setting(r, "noise-floor[" + id + "]", String.valueOf(sg.noise().sigma()));
+                setting(r, "residual-to-noise[" + id + "]", String.valueOf(sg.ratio()));
+            }
+        }
+        for (SessionEstimate s : fit.sessions()) {
+            String id = sessionId(outcome, s.name());
+            setting(r, "theta0-sigma[" + id + "]", String.valueOf(s.releaseAngle().sigma()));
+            setting(r, "release-time-sigma[" + id + "]", String.valueOf(s.releaseTime().sigma()));
+        }
+        if (fit.stopNote() != null) {
+            setting(r, "stop-note", fit.stopNote());
         }
     }
 

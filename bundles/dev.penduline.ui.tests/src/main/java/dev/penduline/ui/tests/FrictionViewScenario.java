@@ -25,10 +25,10 @@ import org.eclipse.swt.widgets.Table;
 import org.eclipse.swt.widgets.TableItem;
 import org.eclipse.ui.IWorkbenchWindow;
 
-import dev.penduline.physics.identify.ParameterEstimate;
 import dev.penduline.model.Estimate;
 import dev.penduline.model.FitResult;
 import dev.penduline.model.Mechanism;
+import dev.penduline.physics.identify.ParameterEstimate;
 import dev.penduline.physics.motion.FrictionTorques;
 import dev.penduline.physics.units.Unit;
 import dev.penduline.records.swing.SwingImportOptions;
@@ -36,13 +36,13 @@ import dev.penduline.services.DemoRecords;
 import dev.penduline.services.MechanismLoader;
 import dev.penduline.services.MechanismSource;
 import dev.penduline.services.SessionRecords;
+import dev.penduline.services.StoredFitText;
 import dev.penduline.ui.PendulineViews;
 import dev.penduline.ui.internal.MechanismSelection;
 import dev.penduline.ui.internal.ProjectFilesPart;
 import dev.penduline.ui.internal.friction.FitWizard;
 import dev.penduline.ui.internal.friction.FrictionPart;
 import dev.penduline.ui.internal.friction.FrictionSheet;
-import dev.penduline.ui.internal.friction.StoredFit;
 import dev.penduline.ui.internal.wizard.MechanismProjectCreation;
 
 /**
@@ -103,7 +103,7 @@ final class FrictionViewScenario {
         shots.take(shell, "friction-empty.png");
 
         fitWithDefaults(view);
-        StoredFit shown = waitFor("the fitted result in the Friction view", READ_NANOS,
+        StoredFitText shown = waitFor("the fitted result in the Friction view", READ_NANOS,
                 () -> view.shown() != null ? view.shown() : null);
         assertTrue(view.fitButton().isEnabled(), "the button must be enabled again after the fit");
 
@@ -115,7 +115,7 @@ final class FrictionViewScenario {
         checkEstimate(view.estimatesTable(), result, "Tc");
         assertEquals(2, shown.sessions().size(), "sessions shown");
         assertEquals(result.getComparisons().size(), shown.comparisons().size(), "term sets shown");
-        assertEquals(1, shown.comparisons().stream().filter(StoredFit.ComparisonRow::selected).count(),
+        assertEquals(1, shown.comparisons().stream().filter(StoredFitText.ComparisonRow::selected).count(),
                 "exactly one term set is marked as kept");
         assertTrue(shown.verdict().startsWith("Verdict: "), shown.verdict());
         shots.take(shell, "friction.png");

@@ -24,6 +24,7 @@ import org.eclipse.ui.PartInitException;
 import org.eclipse.ui.PlatformUI;
 
 import dev.penduline.model.Mechanism;
+import dev.penduline.services.Cautions;
 import dev.penduline.services.InputException;
 import dev.penduline.services.MechanismLoader;
 import dev.penduline.ui.PendulineViews;
@@ -72,8 +73,7 @@ public final class SwingDeskPart {
         GridLayoutFactory.fillDefaults().spacing(4, 6).applyTo(steps);
         GridDataFactory.fillDefaults().grab(true, false).applyTo(steps);
         Label caution = new Label(parent, SWT.WRAP);
-        caution.setText("Caution: results are estimates to be confirmed by test. For doors, hatches, gates and lifting "
-                + "gear, follow local codes and licensed engineering practice.");
+        caution.setText(Cautions.TEXT);
         caution.setFont(JFaceResources.getFontRegistry().getItalic(JFaceResources.DEFAULT_FONT));
         GridDataFactory.fillDefaults().grab(true, false).hint(480, SWT.DEFAULT).applyTo(caution);
         follow(pending);

@@ -10,7 +10,7 @@ import org.eclipse.ui.forms.widgets.FormToolkit;
 import dev.penduline.model.FitResult;
 import dev.penduline.model.TestSession;
 import dev.penduline.services.PartsImport;
-import dev.penduline.ui.internal.friction.StoredFit;
+import dev.penduline.services.StoredFitText;
 
 /**
  * The fits stored in the mechanism, read-only: when each was made, of which sessions, with which
@@ -42,7 +42,7 @@ final class FitsPage extends EditorPage {
         table.column("sessions", 150, this::sessionsOf);
         table.column("J0 at the fit (kg·m²)", 140, f -> f.isSetCalculatedInertia() ? number(f.getCalculatedInertia()) : "");
         table.column("J0 fitted (kg·m²)", 120, f -> f.isSetFittedInertia() ? number(f.getFittedInertia()) : "held");
-        table.column("verdict", 260, f -> StoredFit.of(f, mechanism().getSessions()).verdict().replaceFirst("^Verdict: ", ""));
+        table.column("verdict", 260, f -> StoredFitText.of(f, mechanism().getSessions()).verdict().replaceFirst("^Verdict: ", ""));
         table.column("state", 320, f -> PartsImport.staleReason(f).map(r -> "stale: " + r).orElse("current"));
         Composite row = buttonRow(body, tk);
         button(row, tk, "Delete Fit", this::delete);

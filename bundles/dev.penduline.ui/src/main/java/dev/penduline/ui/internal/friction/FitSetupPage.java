@@ -22,12 +22,13 @@ import org.eclipse.swt.widgets.Table;
 import org.eclipse.swt.widgets.TableColumn;
 import org.eclipse.swt.widgets.TableItem;
 
-import dev.penduline.ui.internal.preferences.WorkbenchDefaults;
 import dev.penduline.model.TestSession;
 import dev.penduline.physics.identify.FrictionTerm;
 import dev.penduline.services.FrictionIdentification;
 import dev.penduline.services.SessionRecords;
+import dev.penduline.services.TermWords;
 import dev.penduline.services.present.Figures;
+import dev.penduline.ui.internal.preferences.WorkbenchDefaults;
 
 /**
  * The first page of the Friction Fit wizard: which test sessions to fit (with the state of each

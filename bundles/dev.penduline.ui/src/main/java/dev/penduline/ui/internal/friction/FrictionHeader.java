@@ -13,6 +13,8 @@ import org.eclipse.swt.widgets.Composite;
 import org.eclipse.swt.widgets.Event;
 import org.eclipse.swt.widgets.Label;
 
+import dev.penduline.services.StoredFitText;
+
 /**
  * The top of the Friction view: the mechanism's name and file, the list of stored fits, the
  * "Fit Friction…" button, and one line that says what is going on (how long a fit takes, its
@@ -90,7 +92,7 @@ final class FrictionHeader {
      * @param fits   the fits, most recent first
      * @param chosen the one shown (null when there is none)
      */
-    void fits(List<StoredFit> fits, StoredFit chosen) {
+    void fits(List<StoredFitText> fits, StoredFitText chosen) {
         choice.removeAll();
         for (int i = 0; i < fits.size(); i++) {
             choice.add(fits.get(i).label() + (i == 0 ? "  (latest)" : ""));

@@ -28,7 +28,9 @@ import org.eclipse.swt.widgets.Composite;
 import org.eclipse.swt.widgets.Label;
 import org.eclipse.swt.widgets.Table;
 
+import dev.penduline.services.Cautions;
 import dev.penduline.services.InputException;
+import dev.penduline.services.StoredFitText;
 import dev.penduline.ui.internal.MechanismSelection;
 import dev.penduline.ui.internal.document.LiveModel;
 import dev.penduline.ui.internal.document.MechanismDocuments;
@@ -44,8 +46,7 @@ import dev.penduline.ui.internal.friction.FrictionHeader.Tone;
  */
 public final class FrictionPart {
 
-    static final String CAUTION = "Caution: these results are estimates to be confirmed by test. For doors, hatches, "
-            + "gates and lifting gear, follow local codes and licensed engineering practice.";
+    static final String CAUTION = Cautions.TEXT;
     private static final String HINT = "Select a mechanism file (.penduline) in Project Files.";
     private static final String DURATION = "Fit Friction… sets up a fit of the test sessions; several long records"
             + " can take tens of seconds.";
@@ -60,7 +61,7 @@ public final class FrictionPart {
     private Job loading;
     private WizardDialog wizard;
     private FrictionSheet sheet;
-    private StoredFit shownFit;
+    private StoredFitText shownFit;
     private String preferredId;
     private boolean keepOutcome;
     private IResourceChangeListener watcher;
@@ -181,7 +182,7 @@ public final class FrictionPart {
         sheet = result;
         header.file(result.title(), shownFile.getFullPath().toString());
         String keep = preferredId != null ? preferredId : shownFit == null ? null : shownFit.id();
-        StoredFit chosen = keep == null ? null : result.fit(keep).orElse(null);
+        StoredFitText chosen = keep == null ? null : result.fit(keep).orElse(null);
         if (chosen == null && !result.fits().isEmpty()) {
             chosen = result.fits().get(0);
         }
@@ -196,7 +197,7 @@ public final class FrictionPart {
         }
     }
 
-    private void showFit(StoredFit fit) {
+    private void showFit(StoredFitText fit) {
         shownFit = fit;
         panel.show(sheet, fit);
     }
@@ -276,7 +277,7 @@ public final class FrictionPart {
      *
      * @return the fit, or null when none is shown
      */
-    public StoredFit shown() {
+    public StoredFitText shown() {
         return shownFit;
     }
 

@@ -11,6 +11,7 @@ import dev.penduline.model.FitResult;
 import dev.penduline.model.Mechanism;
 import dev.penduline.services.InputException;
 import dev.penduline.services.MechanismLoader;
+import dev.penduline.services.StoredFitText;
 
 /**
  * What the Friction view shows for one mechanism file: its name, how many test sessions it has,
@@ -23,7 +24,7 @@ import dev.penduline.services.MechanismLoader;
  * @param fits     the stored fits, most recent first (by their computation time)
  * @param error    the message when the file could not be read
  */
-public record FrictionSheet(String title, String source, int sessions, List<StoredFit> fits,
+public record FrictionSheet(String title, String source, int sessions, List<StoredFitText> fits,
         Optional<String> error) {
 
     /** Freezes the list. */
@@ -60,13 +61,13 @@ public record FrictionSheet(String title, String source, int sessions, List<Stor
         if (m.getName() != null && !m.getName().isBlank()) {
             title = m.getName();
         }
-        List<StoredFit> fits = new ArrayList<>();
+        List<StoredFitText> fits = new ArrayList<>();
         for (FitResult r : m.getFitResults()) {
-            fits.add(StoredFit.of(r, m.getSessions()));
+            fits.add(StoredFitText.of(r, m.getSessions()));
         }
         // ISO-8601 instants of one format sort as text; the sort is stable, so of two fits stored
         // in the same second the later in the file comes first after the reversal.
-        fits.sort(Comparator.comparing(StoredFit::computedAt));
+        fits.sort(Comparator.comparing(StoredFitText::computedAt));
         Collections.reverse(fits);
         return new FrictionSheet(title, where, m.getSessions().size(), fits, Optional.empty());
     }
@@ -89,7 +90,7 @@ public record FrictionSheet(String title, String source, int sessions, List<Stor
      * @param id the stored result's identifier
      * @return the fit, if the file holds it
      */
-    public Optional<StoredFit> fit(String id) {
+    public Optional<StoredFitText> fit(String id) {
         return fits.stream().filter(f -> f.id().equals(id)).findFirst();
     }
 }

@@ -17,9 +17,10 @@ import org.eclipse.swt.widgets.Label;
 import org.eclipse.swt.widgets.Table;
 import org.eclipse.swt.widgets.TableColumn;
 
-import dev.penduline.ui.internal.friction.StoredFit.ComparisonRow;
-import dev.penduline.ui.internal.friction.StoredFit.EstimateRow;
-import dev.penduline.ui.internal.friction.StoredFit.SessionRow;
+import dev.penduline.services.StoredFitText;
+import dev.penduline.services.StoredFitText.ComparisonRow;
+import dev.penduline.services.StoredFitText.EstimateRow;
+import dev.penduline.services.StoredFitText.SessionRow;
 
 /**
  * The tables of one stored fit, in two rows: the estimates with the comparison of term sets
@@ -80,7 +81,7 @@ final class FrictionTables {
      *
      * @param fit the fit, or null for none
      */
-    void show(StoredFit fit) {
+    void show(StoredFitText fit) {
         boolean none = fit == null;
         area.setVisible(!none);
         ((GridData) area.getLayoutData()).exclude = none;

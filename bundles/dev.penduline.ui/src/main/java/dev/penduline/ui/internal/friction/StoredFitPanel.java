@@ -12,6 +12,8 @@ import org.eclipse.swt.widgets.Composite;
 import org.eclipse.swt.widgets.Label;
 import org.eclipse.swt.widgets.Table;
 
+import dev.penduline.services.StoredFitText;
+
 /**
  * The scrolled body of the Friction view: the verdict first, the energy shares and the model,
  * the warnings, then the tables of one stored fit — or what to do when the file holds none.
@@ -51,7 +53,7 @@ final class StoredFitPanel {
      * @param sheet the file's sheet (null before a file is read)
      * @param fit   the fit to show, or null
      */
-    void show(FrictionSheet sheet, StoredFit fit) {
+    void show(FrictionSheet sheet, StoredFitText fit) {
         if (fit == null) {
             boolean broken = sheet == null || sheet.error().isPresent();
             verdict.setText(broken ? "" : "No fit stored yet.");

@@ -3,7 +3,7 @@
  * and the Friction Fit wizard ("Fit Friction…") that adds one. Start from
  * {@link dev.penduline.ui.internal.friction.FrictionPart}; what it shows of a file is a
  * {@link dev.penduline.ui.internal.friction.FrictionSheet} (read from the model, most recent fit
- * first) holding {@link dev.penduline.ui.internal.friction.StoredFit}s; the wizard is
+ * first) holding {@link dev.penduline.services.StoredFitText}s; the wizard is
  * {@link dev.penduline.ui.internal.friction.FitWizard} (pages {@code FitSetupPage} and
  * {@code FitResultsPage}), which calls {@code FrictionIdentification.sessionsOf}, {@code identify}
  * (forked in the wizard's container, cancellable) and, on Finish, {@code FitRecorder.addTo} in one

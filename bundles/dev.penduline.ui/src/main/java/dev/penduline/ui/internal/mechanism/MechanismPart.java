@@ -30,6 +30,7 @@ import org.eclipse.swt.layout.GridData;
 import org.eclipse.swt.widgets.Composite;
 import org.eclipse.swt.widgets.Label;
 
+import dev.penduline.services.Cautions;
 import dev.penduline.ui.internal.MechanismSelection;
 import dev.penduline.ui.internal.document.LiveModel;
 import dev.penduline.ui.internal.document.MechanismDocument;
@@ -43,8 +44,7 @@ import dev.penduline.ui.internal.document.MechanismDocument;
  */
 public final class MechanismPart {
 
-    static final String CAUTION = "Caution: these results are estimates to be confirmed by test. For doors, hatches, "
-            + "gates and lifting gear, follow local codes and licensed engineering practice.";
+    static final String CAUTION = Cautions.TEXT;
     private static final String HINT = "Select a mechanism file (.penduline) or a parts list (.csv) in Project Files.";
 
     private final UISynchronize sync;

@@ -1,4 +1,4 @@
-package dev.penduline.ui.internal.friction;
+package dev.penduline.services;
 
 import java.util.Locale;
 import java.util.Optional;
@@ -11,10 +11,10 @@ import dev.penduline.physics.units.Unit;
  * physics layer's term names in lower case ("viscous", "coulomb", ...) and its parameter
  * symbols (b, Tc, Ts, c, J0); the units come from the physics layer's {@link FrictionTerm}.
  */
-final class TermWords {
+public final class TermWords {
 
     /** The symbol of the pivot inertia among the stored estimates. */
-    static final String INERTIA_SYMBOL = "J0";
+    public static final String INERTIA_SYMBOL = "J0";
 
     private TermWords() {
     }
@@ -25,7 +25,7 @@ final class TermWords {
      * @param termId "viscous", "coulomb", "stiction" or "drag"
      * @return "viscous", "Coulomb", "stiction", "drag" (the identifier itself when unknown)
      */
-    static String word(String termId) {
+    public static String word(String termId) {
         return "coulomb".equals(termId) ? "Coulomb" : String.valueOf(termId);
     }
 
@@ -35,7 +35,7 @@ final class TermWords {
      * @param symbol b, Tc, Ts, c or J0
      * @return its name in the trade's words
      */
-    static String quantity(String symbol) {
+    public static String quantity(String symbol) {
         return term(symbol).map(t -> word(t.name().toLowerCase(Locale.ROOT))).orElse(symbol);
     }
 
@@ -45,7 +45,7 @@ final class TermWords {
      * @param symbol b, Tc, Ts, c or J0
      * @return the unit text, empty when unknown
      */
-    static String unit(String symbol) {
+    public static String unit(String symbol) {
         if (INERTIA_SYMBOL.equals(symbol)) {
             return Unit.KG_M2.symbol();
         }

@@ -1,4 +1,4 @@
-package dev.penduline.ui.internal.friction;
+package dev.penduline.services;
 
 import java.util.ArrayList;
 import java.util.Collection;
@@ -10,6 +10,7 @@ import java.util.Map;
 import java.util.Optional;
 import java.util.Set;
 import java.util.TreeMap;
+import java.util.regex.Pattern;
 import java.util.stream.Collectors;
 
 import dev.penduline.model.EnergyShare;
@@ -21,7 +22,6 @@ import dev.penduline.model.TermSetScore;
 import dev.penduline.model.TestSession;
 import dev.penduline.physics.identify.ParameterEstimate;
 import dev.penduline.physics.units.Unit;
-import dev.penduline.services.PartsImport;
 import dev.penduline.services.present.Figures;
 
 /**
@@ -40,10 +40,22 @@ import dev.penduline.services.present.Figures;
  * @param sessions    each record's release values and residual
  * @param comparisons the candidate term sets, in the order they were compared
  * @param warnings    the fit's warnings, in their stored order
+ * @param noise       the fit against the records' noise floor in one sentence, empty when not stored
+ * @param stopBand    the static friction the stops allow in one sentence, empty when not stored
+ * @param totals      residual rms and sample count in one sentence, empty when not stored
+ * @param settings    the stored settings, except the warnings and the evidence above, in stored order
  */
-public record StoredFit(String id, String computedAt, String status, String verdict, String shares, String model,
+public record StoredFitText(String id, String computedAt, String status, String verdict, String shares, String model,
         List<EstimateRow> estimates, List<SessionRow> sessions, List<ComparisonRow> comparisons,
-        List<String> warnings) {
+        List<String> warnings, String noise, String stopBand, String totals, List<Map.Entry<String, String>> settings) {
+
+    /** What a report says where a fit was stored before Penduline kept that part of it. */
+    public static final String NOT_STORED = "not stored with this fit";
+
+    /** The settings that hold evidence shown in sentences of their own, not in the settings' list. */
+    private static final Pattern EVIDENCE = Pattern.compile("verdict|verdict-lead(-sigma)?"
+            + "|energy-.*|rms-residual|samples|noise-floor.*|noise-limit|noise-passed|noise-ratio|residual-to-noise.*"
+            + "|theta0-sigma.*|release-time-sigma.*|stop-band|stop-note");
 
     /**
      * One line of the estimates table.
@@ -68,8 +80,11 @@ public record StoredFit(String id, String computedAt, String status, String verd
      * @param releaseTime fitted release time on the record's time base (s)
      * @param offset      fitted sensor offset (°)
      * @param rms         root-mean-square residual (°)
+     * @param noiseFloor  the record's noise floor (°), "–" when not stored
+     * @param ratio       residual rms to noise floor (the misfit test's ratio), "–" when not stored
      */
-    public record SessionRow(String session, String releaseAngle, String releaseTime, String offset, String rms) {
+    public record SessionRow(String session, String releaseAngle, String releaseTime, String offset, String rms,
+            String noiseFloor, String ratio) {
     }
 
     /**
@@ -85,11 +100,12 @@ public record StoredFit(String id, String computedAt, String status, String verd
     }
 
     /** Freezes the lists. */
-    public StoredFit {
+    public StoredFitText {
         estimates = List.copyOf(estimates);
         sessions = List.copyOf(sessions);
         comparisons = List.copyOf(comparisons);
         warnings = List.copyOf(warnings);
+        settings = List.copyOf(settings);
     }
 
     /**
@@ -99,20 +115,78 @@ public record StoredFit(String id, String computedAt, String status, String verd
      * @param sessions the mechanism's test sessions, to name the fitted ones
      * @return what the view shows of it
      */
-    public static StoredFit of(FitResult r, List<TestSession> sessions) {
+    public static StoredFitText of(FitResult r, List<TestSession> sessions) {
         Map<String, String> settings = new HashMap<>();
         TreeMap<Integer, String> warnings = new TreeMap<>();
+        List<Map.Entry<String, String>> plain = new ArrayList<>();
         for (Setting s : r.getSettings()) {
             settings.put(s.getKey(), s.getValue());
             if (s.getKey() != null && s.getKey().matches("warning-\\d{1,9}")) {
                 warnings.put(Integer.parseInt(s.getKey().substring("warning-".length())), s.getValue());
+            } else if (s.getKey() != null && !EVIDENCE.matcher(s.getKey()).matches()) {
+                plain.add(Map.entry(s.getKey(), String.valueOf(s.getValue())));
             }
         }
         String model = "model: " + String.join("+", r.getTermIds())
                 + ("auto".equals(settings.get("terms")) ? " (chosen by BIC among the candidates)" : " (as asked)");
-        return new StoredFit(r.getId(), String.valueOf(r.getComputedAt()), settings.getOrDefault("status", "unknown"),
-                verdict(r), shares(r), model, estimates(r, "free".equals(settings.get("inertia"))),
-                sessionRows(r, sessions), comparisons(r), warningsOf(r, warnings.values()));
+        return new StoredFitText(r.getId(), String.valueOf(r.getComputedAt()), settings.getOrDefault("status", "unknown"),
+                verdict(r, settings), shares(r, settings), model, estimates(r, "free".equals(settings.get("inertia"))),
+                sessionRows(r, sessions, settings), comparisons(r), warningsOf(r, warnings.values()), noise(settings),
+                stopBand(settings), totals(settings), plain);
+    }
+
+    private static double number(Map<String, String> settings, String key) {
+        String v = settings.get(key);
+        if (v == null) {
+            return Double.NaN;
+        }
+        try {
+            return Double.parseDouble(v);
+        } catch (NumberFormatException e) {
+            return Double.NaN;
+        }
+    }
+
+    private static String noise(Map<String, String> settings) {
+        double floor = number(settings, "noise-floor");
+        double rms = number(settings, "rms-residual");
+        if (!Double.isFinite(floor) || !Double.isFinite(rms)) {
+            return "";
+        }
+        return String.format(Locale.ROOT, "Against the noise: residual rms %s° against a noise floor of %s° (largest ratio"
+                + " of a record %.2f, limit %.2g): %s", Figures.significant(Unit.DEGREE.fromSi(rms)),
+                Figures.significant(Unit.DEGREE.fromSi(floor)), number(settings, "noise-ratio"),
+                number(settings, "noise-limit"), "true".equals(settings.get("noise-passed"))
+                        ? "the model describes the records" : "the model does NOT describe the records");
+    }
+
+    private static String stopBand(Map<String, String> settings) {
+        String note = settings.get("stop-note");
+        String band = settings.get("stop-band");
+        String[] ends = band == null ? new String[0] : band.split("\\.\\.", 2);
+        if (ends.length != 2) {
+            return note == null ? "" : "Static friction from the stops: none can be given: " + note;
+        }
+        return "Static friction from the stops: Ts between " + Figures.significant(parse(ends[0])) + " and "
+                + Figures.significant(parse(ends[1])) + " N·m" + (note == null ? "" : " (" + note + ")");
+    }
+
+    private static double parse(String v) {
+        try {
+            return Double.parseDouble(v.trim());
+        } catch (NumberFormatException e) {
+            return Double.NaN;
+        }
+    }
+
+    private static String totals(Map<String, String> settings) {
+        double rms = number(settings, "rms-residual");
+        String samples = settings.get("samples");
+        if (!Double.isFinite(rms) || samples == null) {
+            return "";
+        }
+        return "Residual rms " + Figures.significant(Unit.DEGREE.fromSi(rms)) + "° over " + samples + " samples; "
+                + settings.getOrDefault("resamples", "no") + " bootstrap refits.";
     }
 
     /** The stored warnings, after the stale mark when the parts changed after the fit. */
@@ -144,10 +218,14 @@ public record StoredFit(String id, String computedAt, String status, String verd
         return estimates.stream().filter(e -> e.symbol().equals(symbol)).findFirst();
     }
 
-    private static String verdict(FitResult r) {
+    private static String verdict(FitResult r, Map<String, String> settings) {
+        String sentence = settings.get(FitRecorder.VERDICT);
+        if (sentence != null) {
+            return "Verdict: " + sentence;
+        }
         String dominant = r.getDominantLoss();
         if (dominant == null) {
-            return "Verdict: not stored with this fit";
+            return "Verdict: " + NOT_STORED;
         }
         if ("mixed".equals(dominant)) {
             return "Verdict: mixed: no loss leads the next by a clear margin (see the shares)";
@@ -157,13 +235,32 @@ public record StoredFit(String id, String computedAt, String status, String verd
                 + Figures.fixed(100 * share, 0) + " % of the energy lost over the records";
     }
 
-    private static String shares(FitResult r) {
+    private static String shares(FitResult r, Map<String, String> settings) {
         if (r.getEnergyShares().isEmpty()) {
             return "";
         }
+        double dissipated = number(settings, "energy-dissipated");
         return "Energy dissipated: " + r.getEnergyShares().stream()
-                .map(e -> TermWords.word(e.getTermId()) + " " + Figures.fixed(100 * e.getShare(), 0) + " %")
-                .collect(Collectors.joining(", "));
+                .map(e -> TermWords.word(e.getTermId()) + " " + FitWording.percent(e.getShare(),
+                        number(settings, "energy-sigma-" + e.getTermId())))
+                .collect(Collectors.joining(", ")) + (Double.isFinite(dissipated)
+                        ? " of " + Figures.significant(dissipated) + " J" : "");
+    }
+
+    /**
+     * The standard deviation of a term's energy share, as stored.
+     *
+     * @param r      the stored result
+     * @param termId "viscous", "coulomb" or "drag"
+     * @return the σ (fraction), NaN when not stored
+     */
+    public static double shareSigma(FitResult r, String termId) {
+        for (Setting s : r.getSettings()) {
+            if (("energy-sigma-" + termId).equals(s.getKey())) {
+                return parse(s.getValue());
+            }
+        }
+        return Double.NaN;
     }
 
     private static double shareOf(FitResult r, String term) {
@@ -212,18 +309,22 @@ public record StoredFit(String id, String computedAt, String status, String verd
         return Double.isFinite(sigma) ? Figures.uncertainty(sigma) : "–";
     }
 
-    private static List<SessionRow> sessionRows(FitResult r, List<TestSession> sessions) {
+    private static List<SessionRow> sessionRows(FitResult r, List<TestSession> sessions, Map<String, String> settings) {
         Map<String, String> names = new HashMap<>();
         for (TestSession s : sessions) {
             names.put(s.getId(), s.getName());
         }
         List<SessionRow> rows = new ArrayList<>();
         for (SessionFit s : r.getSessionFits()) {
+            double floor = number(settings, "noise-floor[" + s.getSessionId() + "]");
+            double ratio = number(settings, "residual-to-noise[" + s.getSessionId() + "]");
             rows.add(new SessionRow(names.getOrDefault(s.getSessionId(), String.valueOf(s.getSessionId())),
                     Figures.significant(Unit.DEGREE.fromSi(s.getInitialAngle())),
                     Figures.significant(s.getReleaseTime()),
                     Figures.significant(Unit.DEGREE.fromSi(s.getAngleOffset())),
-                    Figures.significant(Unit.DEGREE.fromSi(s.getRmsResidual()))));
+                    Figures.significant(Unit.DEGREE.fromSi(s.getRmsResidual())),
+                    Double.isFinite(floor) ? Figures.significant(Unit.DEGREE.fromSi(floor)) : "–",
+                    Double.isFinite(ratio) ? Figures.fixed(ratio, 2) : "–"));
         }
         return rows;
     }
