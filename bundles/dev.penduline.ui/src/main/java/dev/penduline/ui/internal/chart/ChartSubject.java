@@ -22,6 +22,7 @@ import dev.penduline.services.SessionRecords;
 import dev.penduline.services.SwingPrediction;
 import dev.penduline.services.SwingSessionAnalysis;
 import dev.penduline.services.present.Figures;
+import dev.penduline.services.present.PlotThinning;
 
 /**
  * A mechanism file opened for the Swing Chart: its test sessions and, when its parts allow, the

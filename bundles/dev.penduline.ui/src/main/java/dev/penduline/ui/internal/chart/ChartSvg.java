@@ -21,13 +21,15 @@ import org.eclipse.swtchart.ISeries;
 import org.eclipse.swtchart.LineStyle;
 import org.eclipse.swtchart.Range;
 
+import dev.penduline.services.present.PlotThinning;
+
 /**
  * A chart drawn as SVG from its own data, not from its pixels: the title, both axes with their
  * ticks, tick labels and titles (which carry the units), a grid, one {@code polyline} per series
  * (markers on its vertices when the series is drawn as symbols) and a legend. What is drawn is
  * what the chart shows now: its axes' current ranges; long series are cut to the visible span
- * and thinned to the lowest and highest sample of each pixel column ({@link PlotThinning}), so
- * the file stays small and no peak is lost. Taken from the chart on the UI thread
+ * and thinned to the first, lowest, highest and last sample of each pixel column
+ * ({@link PlotThinning#perColumn}), so the file stays small and no peak is lost. Taken from the chart on the UI thread
  * ({@link #of(Chart)}), written anywhere ({@link #writeTo(OutputStream)}).
  */
 public final class ChartSvg {
@@ -114,34 +116,54 @@ public final class ChartSvg {
         return s == null ? "" : s;
     }
 
-    /** The points of a series inside (and just beyond) an x span, thinned to about two a column. */
+    /**
+     * The points of a series inside an x span, thinned per pixel column
+     * ({@link PlotThinning#perColumn}), with the sample just beyond each end so the line runs to
+     * the plot's edge; a series whose x is not ascending keeps the extremes of equal runs.
+     */
     static PlotThinning.Points visible(double[] x, double[] y, double lower, double upper, int columns) {
         int n = Math.min(x.length, y.length);
-        int from = 0;
-        int to = n;
-        if (ascending(x, n)) {
-            while (from < n && x[from] < lower) {
-                from++;
+        double[] xn = x.length == n ? x : Arrays.copyOf(x, n);
+        double[] yn = y.length == n ? y : Arrays.copyOf(y, n);
+        if (!ascending(xn, n) || !(upper > lower) || !Double.isFinite(upper - lower)) {
+            double[] xs = new double[n];
+            double[] ys = new double[n];
+            int k = 0;
+            for (int i = 0; i < n; i++) {
+                if (Double.isFinite(xn[i]) && Double.isFinite(yn[i])) {
+                    xs[k] = xn[i];
+                    ys[k] = yn[i];
+                    k++;
+                }
             }
-            while (to > from && x[to - 1] > upper) {
-                to--;
-            }
-            from = Math.max(0, from - 1);
-            to = Math.min(n, to + 1);
+            return PlotThinning.keepExtremes(Arrays.copyOf(xs, k), Arrays.copyOf(ys, k), Math.max(4, 2 * columns + 2));
         }
-        double[] xs = new double[to - from];
-        double[] ys = new double[to - from];
+        PlotThinning.Points inside = PlotThinning.perColumn(xn, yn, lower, upper, Math.max(1, columns));
+        int before = -1;
+        for (int i = 0; i < n && xn[i] < lower; i++) {
+            before = Double.isFinite(yn[i]) ? i : before;
+        }
+        int after = -1;
+        for (int i = n - 1; i >= 0 && xn[i] > upper; i--) {
+            after = Double.isFinite(yn[i]) ? i : after;
+        }
+        int m = inside.size() + (before >= 0 ? 1 : 0) + (after >= 0 ? 1 : 0);
+        double[] xs = new double[m];
+        double[] ys = new double[m];
         int k = 0;
-        for (int i = from; i < to; i++) {
-            if (Double.isFinite(x[i]) && Double.isFinite(y[i])) {
-                xs[k] = x[i];
-                ys[k] = y[i];
-                k++;
-            }
+        if (before >= 0) {
+            xs[k] = xn[before];
+            ys[k] = yn[before];
+            k++;
         }
-        double[] keptX = Arrays.copyOf(xs, k);
-        double[] keptY = Arrays.copyOf(ys, k);
-        return PlotThinning.keepExtremes(keptX, keptY, Math.max(4, 2 * columns + 2));
+        System.arraycopy(inside.x(), 0, xs, k, inside.size());
+        System.arraycopy(inside.y(), 0, ys, k, inside.size());
+        k += inside.size();
+        if (after >= 0) {
+            xs[k] = xn[after];
+            ys[k] = yn[after];
+        }
+        return new PlotThinning.Points(xs, ys);
     }
 
     private static boolean ascending(double[] x, int n) {

@@ -3,6 +3,8 @@ package dev.penduline.ui.internal.chart;
 import java.util.List;
 import java.util.Optional;
 
+import dev.penduline.services.present.PlotThinning;
+
 /**
  * What the Swing Chart draws: the angle against time (thinned for drawing), the turning points,
  * the release, and the lines of the summary below the chart. Built off the UI thread from the

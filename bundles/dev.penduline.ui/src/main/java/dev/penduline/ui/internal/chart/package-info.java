@@ -7,7 +7,7 @@
  * {@code SwingSessionAnalysis} and, for a mechanism without sessions, {@code SwingPrediction}.
  *
  * <p>Traps: records may hold hundreds of thousands of samples; they are thinned for drawing
- * only ({@link dev.penduline.ui.internal.chart.PlotThinning}, keeping each run's extremes so
+ * only ({@link dev.penduline.services.present.PlotThinning}, keeping each run's extremes so
  * that peaks survive), never for the analysis. Record angles are in the sensor's frame (the
  * offset is not removed); a prediction is measured from the hanging equilibrium.
  *

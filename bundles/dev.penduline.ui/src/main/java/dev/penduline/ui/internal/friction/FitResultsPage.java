@@ -31,8 +31,8 @@ import dev.penduline.services.FitCurves;
 import dev.penduline.services.FitWording;
 import dev.penduline.services.FrictionIdentification.Outcome;
 import dev.penduline.services.present.Figures;
+import dev.penduline.services.present.PlotThinning;
 import dev.penduline.ui.internal.chart.ChartTools;
-import dev.penduline.ui.internal.chart.PlotThinning;
 
 /**
  * The last page of the Friction Fit wizard: the verdict (dominant, mixed, or withheld for a
