@@ -27,7 +27,7 @@ final class BarRenderers {
         r.setShadowVisible(false);
         r.setDrawBarOutline(true);
         r.setDefaultOutlinePaint(PlotStyle.BLACK);
-        r.setDefaultOutlineStroke(PlotStyle.stroke(0.8f));
+        r.setDefaultOutlineStroke(PlotStyle.stroke(0.75f));
         r.setAutoPopulateSeriesPaint(false);
         r.setAutoPopulateSeriesOutlinePaint(false);
         r.setAutoPopulateSeriesOutlineStroke(false);

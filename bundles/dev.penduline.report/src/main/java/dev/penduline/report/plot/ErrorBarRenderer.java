@@ -10,7 +10,7 @@ final class ErrorBarRenderer extends StatisticalBarRenderer {
     ErrorBarRenderer() {
         BarRenderers.flat(this);
         setErrorIndicatorPaint(PlotStyle.BLACK);
-        setErrorIndicatorStroke(PlotStyle.stroke(1.2f));
+        setErrorIndicatorStroke(PlotStyle.stroke(1.25f));
         setMaximumBarWidth(0.15);
     }
 }

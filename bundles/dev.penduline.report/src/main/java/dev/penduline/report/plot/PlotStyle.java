@@ -72,8 +72,9 @@ final class PlotStyle {
     }
 
     /**
-     * How many pixel columns the data area of a plot {@code width} wide has (with the fixed axis
-     * space of {@link #xyPlot}); the thinning keeps at most four points a column.
+     * How many pixel columns the data area of a plot {@code width} wide has with the fixed axis
+     * space of {@link #xyPlot}: the first guess of the thinning, which keeps at most four points a
+     * column; the pictures then measure the width they really have.
      *
      * @param width the picture's width
      * @return the data area's width in pixels
@@ -90,7 +91,7 @@ final class PlotStyle {
      * @return the stroke
      */
     static Stroke line(int k) {
-        float width = 1.3f + 0.7f * (k / DASHES.length);
+        float width = 1.25f + 0.75f * (k / DASHES.length);
         float[] dash = DASHES[k % DASHES.length];
         return new BasicStroke(width, BasicStroke.CAP_BUTT, BasicStroke.JOIN_ROUND, 10f, dash, 0f);
     }
@@ -197,8 +198,8 @@ final class PlotStyle {
         background(plot);
         plot.setDomainGridlinePaint(GRID);
         plot.setRangeGridlinePaint(GRID);
-        plot.setDomainGridlineStroke(stroke(0.6f, 2f, 2f));
-        plot.setRangeGridlineStroke(stroke(0.6f, 2f, 2f));
+        plot.setDomainGridlineStroke(stroke(0.5f, 2f, 2f));
+        plot.setRangeGridlineStroke(stroke(0.5f, 2f, 2f));
         AxisSpace space = new AxisSpace();
         space.setLeft(AXIS_SPACE);
         plot.setFixedRangeAxisSpace(space);
@@ -215,7 +216,7 @@ final class PlotStyle {
         background(plot);
         plot.setDomainGridlinesVisible(false);
         plot.setRangeGridlinePaint(GRID);
-        plot.setRangeGridlineStroke(stroke(0.6f, 2f, 2f));
+        plot.setRangeGridlineStroke(stroke(0.5f, 2f, 2f));
         plot.setRangeZeroBaselineVisible(true);
         plot.setRangeZeroBaselinePaint(BLACK);
         plot.setRangeZeroBaselineStroke(stroke(1f));
@@ -226,7 +227,7 @@ final class PlotStyle {
     private static void background(Plot plot) {
         plot.setBackgroundPaint(WHITE);
         plot.setOutlinePaint(BLACK);
-        plot.setOutlineStroke(stroke(0.8f));
+        plot.setOutlineStroke(stroke(0.75f));
         plot.setInsets(new RectangleInsets(4, 0, 4, RIGHT_SPACE));
     }
 

@@ -86,7 +86,7 @@ public final class Plots {
         CategoryPlot plot = new BarPlot(data, PlotStyle.categoryAxis(true), axis, new ShareBarRenderer(true));
         plot.setOrientation(PlotOrientation.HORIZONTAL);
         int height = Math.max(PlotStyle.HEIGHT, 110 + PIXELS_A_PART * parts.size());
-        return picture(id, title, PlotStyle.chart(title, plot, false), any ? 1 : 0, List.of(SHARE_OF_J0),
+        return picture(id, title, PlotStyle.chart(title, plot, false), List.of(), any ? 1 : 0, List.of(SHARE_OF_J0),
                 PlotStyle.WIDTH, height);
     }
 
@@ -129,7 +129,7 @@ public final class Plots {
         }
         XYPlot angle = top.plot(null, PlotStyle.numberAxis(ANGLE));
         XYPlot residual = bottom.plot(null, PlotStyle.numberAxis(RESIDUAL));
-        ValueMarker zero = new ValueMarker(0, PlotStyle.LIGHT_GREY, PlotStyle.stroke(0.8f));
+        ValueMarker zero = new ValueMarker(0, PlotStyle.LIGHT_GREY, PlotStyle.stroke(0.75f));
         residual.addRangeMarker(zero, Layer.BACKGROUND);
         mark(angle, residual, releaseS, "release", PlotStyle.stroke(1f, 5f, 2f, 1f, 2f));
         mark(angle, residual, stopS, "stop", PlotStyle.stroke(1f, 1f, 2f));
@@ -139,8 +139,8 @@ public final class Plots {
         plot.add(residual, 1);
         PlotStyle.xyPlot(plot);
         int series = top.drawn() + bottom.drawn();
-        return picture(id, title, PlotStyle.chart(title, plot, series > 1), series, List.of(TIME, ANGLE, RESIDUAL),
-                PlotStyle.WIDTH, PlotStyle.STACKED_HEIGHT);
+        return picture(id, title, PlotStyle.chart(title, plot, series > 1), List.of(top, bottom), series,
+                List.of(TIME, ANGLE, RESIDUAL), PlotStyle.WIDTH, PlotStyle.STACKED_HEIGHT);
     }
 
     /**
@@ -227,8 +227,8 @@ public final class Plots {
         axis.setAutoRangeIncludesZero(true);
         axis.setUpperMargin(0.1);
         CategoryPlot plot = new BarPlot(data, PlotStyle.categoryAxis(false), axis, new ErrorBarRenderer());
-        return picture(id, title, PlotStyle.chart(title, plot, false), any ? 1 : 0, List.of(SHARE_OF_ENERGY),
-                PlotStyle.WIDTH, PlotStyle.HEIGHT);
+        return picture(id, title, PlotStyle.chart(title, plot, false), List.of(), any ? 1 : 0,
+                List.of(SHARE_OF_ENERGY), PlotStyle.WIDTH, PlotStyle.HEIGHT);
     }
 
     /**
@@ -255,8 +255,8 @@ public final class Plots {
     }
 
     private static SvgPicture xyPicture(String id, String title, XYPlot plot, SeriesSet set, List<String> labels) {
-        return picture(id, title, PlotStyle.chart(title, plot, set.drawn() > 1), set.drawn(), labels, PlotStyle.WIDTH,
-                PlotStyle.HEIGHT);
+        return picture(id, title, PlotStyle.chart(title, plot, set.drawn() > 1), List.of(set), set.drawn(), labels,
+                PlotStyle.WIDTH, PlotStyle.HEIGHT);
     }
 
     /** A vertical line at {@code t} on both plots, labelled on the upper one; none when t is not finite. */
@@ -276,9 +276,20 @@ public final class Plots {
         lower.addDomainMarker(new ValueMarker(t, PlotStyle.DARK_GREY, stroke), Layer.FOREGROUND);
     }
 
-    private static SvgPicture picture(String id, String title, JFreeChart chart, int series, List<String> labels,
-            int width, int height) {
+    /**
+     * Draws the picture. The lines were thinned to the data area's width as {@link PlotStyle}
+     * expects it; the chart is laid out once on a scratch canvas to measure the width it really
+     * has (the stacked plots lay out their axes themselves) and the lines are thinned to that.
+     */
+    private static SvgPicture picture(String id, String title, JFreeChart chart, List<SeriesSet> sets, int series,
+            List<String> labels, int width, int height) {
         String text = title == null ? "" : title;
+        if (!sets.isEmpty()) {
+            int columns = SvgCanvas.dataWidth(chart, width, height);
+            for (SeriesSet s : sets) {
+                s.thinTo(columns);
+            }
+        }
         String svg = SvgCanvas.draw(chart, id, text, width, height);
         int shown = SvgCanvas.seriesIn(svg);
         if (shown != series) {

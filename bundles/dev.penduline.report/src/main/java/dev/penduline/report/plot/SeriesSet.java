@@ -1,8 +1,10 @@
 package dev.penduline.report.plot;
 
 import java.awt.Paint;
+import java.util.ArrayList;
 import java.util.Arrays;
 import java.util.HashSet;
+import java.util.List;
 import java.util.Set;
 
 import org.jfree.chart.axis.ValueAxis;
@@ -20,6 +22,8 @@ final class SeriesSet {
     private final DefaultXYDataset data = new DefaultXYDataset();
     private final SeriesRenderer renderer = new SeriesRenderer();
     private final Set<String> names;
+    /** The lines drawn, unthinned, so they can be thinned again to the measured data area. */
+    private final List<Curve> drawnLines = new ArrayList<>();
     private int lines;
     private int markers;
     private int drawn;
@@ -45,13 +49,25 @@ final class SeriesSet {
      * @param x       abscissae, ascending
      * @param y       ordinates
      * @param paint   black or a grey
-     * @param columns the data area's width in pixels
+     * @param columns the data area's width in pixels (as far as known; see {@link #thinTo})
      */
     void line(String name, double[] x, double[] y, Paint paint, int columns) {
         int k = lines++;
         double[][] xy = thinned(name, x, y, columns);
         if (add(name, xy)) {
             renderer.line(data.getSeriesCount() - 1, k, paint);
+            drawnLines.add(new Curve(name, x, y));
+        }
+    }
+
+    /**
+     * Thins the lines again to the data area's width as measured on the canvas.
+     *
+     * @param columns the data area's width in pixels
+     */
+    void thinTo(int columns) {
+        for (Curve c : drawnLines) {
+            data.addSeries(c.name(), thinned(c.name(), c.x(), c.y(), columns));
         }
     }
 

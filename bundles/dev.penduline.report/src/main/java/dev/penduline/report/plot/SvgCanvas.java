@@ -8,7 +8,9 @@ import java.util.TreeSet;
 import java.util.regex.Matcher;
 import java.util.regex.Pattern;
 
+import org.jfree.chart.ChartRenderingInfo;
 import org.jfree.chart.JFreeChart;
+import org.jfree.chart.plot.PlotRenderingInfo;
 import org.jfree.svg.SVGGraphics2D;
 import org.jfree.svg.SVGHints;
 import org.jfree.svg.ViewBox;
@@ -76,6 +78,25 @@ final class SvgCanvas {
         int open = svg.indexOf('>');
         return svg.substring(0, open + 1) + "<title id='" + id + "-title'>" + escape(title) + "</title>"
                 + svg.substring(open + 1);
+    }
+
+    /**
+     * The width of a chart's data area when drawn at this size (measured on a scratch canvas).
+     *
+     * @param chart  the chart
+     * @param width  the picture's width
+     * @param height the picture's height
+     * @return the data area's width in whole pixels, at least 1
+     */
+    static int dataWidth(JFreeChart chart, int width, int height) {
+        ChartRenderingInfo info = new ChartRenderingInfo(null);
+        chart.draw(new SVGGraphics2D(width, height), new Rectangle2D.Double(0, 0, width, height), info);
+        PlotRenderingInfo plot = info.getPlotInfo();
+        double widest = plot.getDataArea().getWidth();
+        for (int i = 0; i < plot.getSubplotCount(); i++) {
+            widest = Math.max(widest, plot.getSubplotInfo(i).getDataArea().getWidth());
+        }
+        return Math.max(1, (int) Math.ceil(widest));
     }
 
     /**

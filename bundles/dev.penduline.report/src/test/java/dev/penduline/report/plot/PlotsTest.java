@@ -280,16 +280,43 @@ class PlotsTest {
         for (Element path : elements(d, "path")) {
             assertFalse(LONG_DECIMAL.matcher(path.getAttribute("d")).find(), "more than two decimal places in a path");
         }
-        // at most four points a pixel column survive (720 columns is more than the plot's width)
-        for (Element g : elements(d, "g")) {
-            if ("series".equals(g.getAttribute("class"))) {
-                int points = 0;
-                for (Element path : elements(g, "path")) {
-                    points += path.getAttribute("d").split("[ML]").length - 1;
-                }
-                assertTrue(points > 500 && points <= 4 * 720, g.getAttribute("data-series") + " draws " + points);
-            }
+        // at most four points survive a pixel column of the data area the series is clipped to
+        Map<String, Element> clips = new LinkedHashMap<>();
+        for (Element c : elements(d, "clipPath")) {
+            clips.put(c.getAttribute("id"), c);
         }
+        for (Element g : elements(d, "g")) {
+            if (!"series".equals(g.getAttribute("class"))) {
+                continue;
+            }
+            int points = 0;
+            double columns = 0;
+            for (Element e : elements(g, "*")) {
+                Matcher clip = URL_REF.matcher(e.getAttribute("clip-path"));
+                if (clip.find()) {
+                    columns = Math.max(columns, xSpan(elements(clips.get(clip.group(1)), "path").get(0)));
+                }
+                if ("path".equals(e.getLocalName())) {
+                    points += e.getAttribute("d").split("[ML]").length - 1;
+                }
+            }
+            String name = g.getAttribute("data-series");
+            assertTrue(columns > 600 && columns < 720, name + " is clipped to a data area " + columns + " px wide");
+            assertTrue(points > 500 && points <= 4 * Math.ceil(columns), name + " draws " + points + " points");
+        }
+    }
+
+    /** How wide the outline of a path is (the largest minus the smallest x). */
+    private static double xSpan(Element path) {
+        String[] numbers = path.getAttribute("d").replaceAll("[A-Za-z]", " ").trim().split("[ ,]+");
+        double lo = Double.POSITIVE_INFINITY;
+        double hi = Double.NEGATIVE_INFINITY;
+        for (int i = 0; i + 1 < numbers.length; i += 2) {
+            double x = Double.parseDouble(numbers[i]);
+            lo = Math.min(lo, x);
+            hi = Math.max(hi, x);
+        }
+        return hi - lo;
     }
 
     @Test
