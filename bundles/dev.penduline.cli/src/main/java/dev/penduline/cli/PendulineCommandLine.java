@@ -13,6 +13,7 @@ import dev.penduline.cli.commands.DemoRecordCommand;
 import dev.penduline.cli.commands.FitCommand;
 import dev.penduline.cli.commands.ImportPartsCommand;
 import dev.penduline.cli.commands.PredictCommand;
+import dev.penduline.cli.commands.ReportCommand;
 import dev.penduline.cli.commands.InertiaCommand;
 import dev.penduline.cli.commands.SimulateCommand;
 import dev.penduline.cli.internal.FaultReport;
@@ -39,7 +40,7 @@ public final class PendulineCommandLine {
     public PendulineCommandLine() {
         this(List.of(new FitCommand(), new InertiaCommand(), new SimulateCommand(), new PredictCommand(), new AnalyzeCommand(),
                 new ImportPartsCommand(),
-                new AddSessionCommand(), new DemoRecordCommand()));
+                new AddSessionCommand(), new DemoRecordCommand(), new ReportCommand()));
     }
 
     /**

@@ -252,7 +252,7 @@ public final class FrictionIdentification {
      * @param p the mechanism's properties
      * @return the same mechanism with its equilibrium angle at zero
      */
-    static MechanismProperties aboutEquilibrium(MechanismProperties p) {
+    public static MechanismProperties aboutEquilibrium(MechanismProperties p) {
         return new MechanismProperties(p.mass(), p.centroidDistance(), p.pivotInertia(), 0, p.gravity(), p.axisTilt());
     }
 

@@ -1,6 +1,7 @@
 package dev.penduline.cli.commands;
 
 import java.io.PrintWriter;
+import java.io.StringWriter;
 import java.nio.file.Path;
 import java.util.ArrayList;
 import java.util.List;
@@ -94,6 +95,53 @@ public final class PredictCommand implements Command {
 
     @Override
     public ExitCode run(List<String> args, Defaults defaults, PrintWriter out, PrintWriter err) throws UsageException {
+        Prediction p = compute(args, defaults, err);
+        if (p.args().flag("json")) {
+            writeJson(p.outcome(), p.design(), p.whatIf(), new JsonWriter(out));
+        } else {
+            writeReport(p.mechanism(), p.outcome(), p.design(), out);
+            p.whatIf().ifPresent(w -> writeWhatIf(p.outcome(), w, p.args(), out));
+        }
+        return ExitCode.OK;
+    }
+
+    /**
+     * What {@code penduline predict} computed for its options.
+     *
+     * @param mechanism the mechanism
+     * @param outcome   the forecast
+     * @param design    the design answer, when a spec was given
+     * @param whatIf    the changed mechanism's forecast, when changes were given
+     * @param args      the parsed options
+     */
+    record Prediction(MechanismSource mechanism, MechanismForecast.Outcome outcome, Optional<SpecDesign.Answer> design,
+            Optional<MechanismForecast.Outcome> whatIf, Arguments args) {
+
+        /**
+         * The readable report, line by line, without the caution (a report that includes it has its own).
+         *
+         * @return the lines
+         */
+        List<String> lines() {
+            StringWriter text = new StringWriter();
+            PrintWriter out = new PrintWriter(text);
+            writeReport(mechanism, outcome, design, out);
+            whatIf.ifPresent(w -> writeWhatIf(outcome, w, args, out));
+            out.flush();
+            return text.toString().lines().filter(l -> !l.equals(Caution.HAZARD) && !l.equals(Caution.TEXT)).toList();
+        }
+    }
+
+    /**
+     * Parses the options and computes the forecast, the design and the what-if they ask for.
+     *
+     * @param args     the options, the mechanism first
+     * @param defaults the user's defaults
+     * @param err      where warnings go
+     * @return what was computed
+     * @throws UsageException when an option or the input is wrong
+     */
+    static Prediction compute(List<String> args, Defaults defaults, PrintWriter err) throws UsageException {
         Arguments a = Arguments.parse(args, OPTIONS, Set.of("json", "no-fit"));
         MechanismSource mechanism = FrictionOptions.mechanism(a, defaults, err);
         MechanismForecast.FrictionSource source = FrictionOptions.resolve(a, true);
@@ -118,13 +166,7 @@ public final class PredictCommand implements Command {
         }
         Optional<MechanismForecast.Outcome> whatIf = whatIf(a, mechanism, source, request);
         Optional<SpecDesign.Answer> design = design(a, mechanism, source, request);
-        if (a.flag("json")) {
-            writeJson(outcome, design, whatIf, new JsonWriter(out));
-        } else {
-            writeReport(mechanism, outcome, design, out);
-            whatIf.ifPresent(w -> writeWhatIf(outcome, w, a, out));
-        }
-        return ExitCode.OK;
+        return new Prediction(mechanism, outcome, design, whatIf, a);
     }
 
     private static Optional<MechanismForecast.Outcome> whatIf(Arguments a, MechanismSource mechanism,

@@ -1,0 +1,21 @@
+package dev.penduline.report;
+
+import java.nio.file.Path;
+import java.time.Instant;
+import java.util.Optional;
+
+/**
+ * What a report is asked for.
+ *
+ * @param mechanismFile  the mechanism file ({@code .penduline})
+ * @param fitId          the stored fit to report, empty for the most recent one
+ * @param predictions    the predictions to include, empty for none
+ * @param version        Penduline's version, for the provenance
+ * @param time           when the report is written (its only clock reading)
+ * @param defaultGravity the gravity a mechanism file without one is computed with (m/s²)
+ * @param toleranceDraws Monte Carlo draws of the parts' tolerances (as {@code penduline inertia})
+ * @param toleranceSeed  their seed
+ */
+public record ReportRequest(Path mechanismFile, Optional<String> fitId, Optional<ReportPredictions> predictions,
+        String version, Instant time, double defaultGravity, int toleranceDraws, long toleranceSeed) {
+}
