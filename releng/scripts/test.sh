@@ -1,6 +1,6 @@
 #!/usr/bin/env bash
 # The one test command (README "Run the tests"): installs what the build and its tests need
-# when missing (Xvfb, xauth and GTK 3 from Debian; Maven 3.9 into .tools/), then builds
+# when missing (Xvfb, xauth, GTK 3 and a font from Debian; Maven 3.9 into .tools/), then builds
 # everything and runs all tests: the plain JUnit tests of the headless bundles and the OSGi and
 # workbench tests under a virtual display. Extra arguments go to Maven (e.g. -o, -pl ...).
 # Then it installs the built feature into a bare Equinox with the p2 director and runs its headless
@@ -16,6 +16,8 @@ command -v xvfb-run >/dev/null 2>&1 || need+=(xvfb)
 command -v xauth >/dev/null 2>&1 || need+=(xauth)
 dpkg -s libgtk-3-0 >/dev/null 2>&1 || dpkg -s libgtk-3-0t64 >/dev/null 2>&1 || need+=(libgtk-3-0)
 command -v mvn >/dev/null 2>&1 || need+=(maven)
+# the report's plots measure their labels with a real font (AWT headless through fontconfig)
+dpkg -s fonts-dejavu-core >/dev/null 2>&1 || need+=(fonts-dejavu-core)
 if [ ${#need[@]} -gt 0 ]; then
   if [ "$(id -u)" -ne 0 ]; then
     echo "test.sh: missing ${need[*]}; run as root or install them: apt-get install ${need[*]}" >&2

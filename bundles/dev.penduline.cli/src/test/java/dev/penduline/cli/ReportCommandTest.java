@@ -228,11 +228,22 @@ class ReportCommandTest {
         // the series each kind of plot draws, counted from the SVG's own series groups
         java.util.Map<String, Integer> series = java.util.Map.of("parts", 1, "record", 3, "decay", 4, "period", 2,
                 "energy", 1, "prediction", 1);
+        // the axis labels of each kind of plot, each with its unit
+        java.util.Map<String, List<String>> axes = java.util.Map.of("parts", List.of("share of J0 (%)"),
+                "record", List.of("time (s)", "angle (°)", "residual (°)"),
+                "decay", List.of("cycles since release (cycles)", "amplitude (°)"),
+                "period", List.of("amplitude (°)", "period (s)"),
+                "energy", List.of("share of the energy dissipated (%)"),
+                "prediction", List.of("time (s)", "angle from the hanging position (°)"));
         for (Element fig : figures) {
             String kind = fig.id().replaceFirst("^fig\\d+-", "").replaceFirst("-.*", "");
             assertTrue(series.containsKey(kind), fig.id());
             long drawn = fig.select("g.series").stream().map(g -> g.attr("data-series")).distinct().count();
             assertEquals(series.get(kind).longValue(), drawn, fig.id() + " series");
+            List<String> labels = fig.select("text").stream().map(Element::text).toList();
+            for (String axis : axes.get(kind)) {
+                assertTrue(labels.contains(axis), fig.id() + " has no axis label '" + axis + "': " + labels);
+            }
         }
     }
 

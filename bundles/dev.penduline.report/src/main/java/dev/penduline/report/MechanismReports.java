@@ -361,7 +361,7 @@ public final class MechanismReports {
             fits.add(name + " r² = " + Figures.fixed(e.rSquared(), 5));
         }
         doc.add(new Figure(Plots.amplitudeDecay(id("decay-" + slug(session.getId())), session.getName() + ": amplitude decay",
-                "cycles since release", n, amp, envelopes), "Amplitude of each turning point against the cycles since the"
+                "cycles since release (cycles)", n, amp, envelopes), "Amplitude of each turning point against the cycles since the"
                         + " release, with the three envelopes fitted to them: a straight line is the signature of dry friction,"
                         + " a geometric decay of viscous damping, a reciprocal one of air drag (" + String.join(", ", fits)
                         + "; r² in amplitude space, below 0 when the shape fits worse than a constant)." + (clipped

@@ -40,7 +40,7 @@ public final class ReportCommand implements Command {
     }
 
     /**
-     * The command with a given clock and version, so that a report can be made again byte for byte
+     * The command with a given clock and version, so that a report can be made again word for word
      * (the committed report of the sample is checked that way).
      *
      * @param clock   when the report is written
