@@ -327,4 +327,28 @@ class ReportCommandTest {
         run(0, "report", mechanism.toString(), "--out", again.toString());
         assertTrue(Files.readString(again).contains("<meta name=\"generator\" content=\"Penduline "));
     }
+
+    @Test
+    void aMissingRecordIsSaidWhereItsSessionIsAndTheRestIsReported() throws Exception {
+        Path copy = Files.createDirectories(dir.resolve("copy"));
+        Files.copy(mechanism, copy.resolve("arm.penduline"));
+        for (String angle : new String[] {"12", "40"}) {
+            Path record = dir.resolve("records").resolve("release-" + angle + ".csv");
+            Path from = Files.exists(record) ? record : dir.resolve("release-" + angle + ".csv");
+            Path to = copy.resolve(dir.relativize(from).toString());
+            Files.createDirectories(to.getParent());
+            Files.copy(from, to);
+            if ("40".equals(angle)) {
+                Files.delete(to);
+            }
+        }
+        run(0, "report", copy.resolve("arm.penduline").toString());
+        Document d = Jsoup.parse(Files.readString(copy.resolve("arm-report.html")));
+        assertTrue(d.getElementById("sessions").text().contains("The record cannot be read"), d.getElementById("sessions")
+                .text());
+        assertTrue(d.getElementById("provenance").text().contains("CANNOT BE READ"), "the provenance says so");
+        assertNotNull(d.getElementById("fit"), "the fit is still reported");
+        assertEquals(3 + 1 + 1, d.select("figure").size(), "one session's three plots, the parts, the energy shares "
+                + "and no prediction: " + d.select("figure").eachAttr("id"));
+    }
 }

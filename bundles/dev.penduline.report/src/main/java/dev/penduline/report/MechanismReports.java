@@ -4,6 +4,7 @@ import java.io.IOException;
 import java.nio.file.Path;
 import java.time.temporal.ChronoUnit;
 import java.util.ArrayList;
+import java.util.Arrays;
 import java.util.List;
 import java.util.Locale;
 import java.util.Map;
@@ -253,11 +254,21 @@ public final class MechanismReports {
             level = level.withPivotInertia(stored.get().fittedInertia());
         }
         for (TestSession session : m.getSessions()) {
-            SessionRecords.SessionRecord sr = SessionRecords.readSession(file, session);
+            doc.add(new Heading(2, "session-" + slug(session.getId()), session.getName()));
+            SessionRecords.SessionRecord sr;
+            try {
+                sr = SessionRecords.readSession(file, session);
+            } catch (InputException e) {
+                // one unreadable record does not stop the report: it says so where the session is and
+                // in the provenance
+                provenance.add(session.getRecordPath() + ": CANNOT BE READ (" + e.getMessage() + ")");
+                doc.add(new Paragraph("The record cannot be read, so this session is shown without it: " + e.getMessage(),
+                        true));
+                continue;
+            }
             provenance.add(session.getRecordPath() + ": SHA-256 " + sr.record().sha256() + (sr.changed()
                     ? " (CHANGED since the session was added: the stored hash was " + session.getContentHash() + ")"
                     : session.getContentHash() == null ? "" : " (as when the session was added)"));
-            doc.add(new Heading(2, "session-" + slug(session.getId()), session.getName()));
             Optional<SessionFit> sf = fit.flatMap(r -> r.getSessionFits().stream()
                     .filter(s -> session.getId().equals(s.getSessionId())).findFirst());
             double[] t = sr.record().times();
@@ -267,10 +278,18 @@ public final class MechanismReports {
                             ? " The record CHANGED since the session was added; the fit below was made on other content."
                             : ""), false));
             sr.warnings().forEach(w -> doc.add(new Paragraph("Warning: " + w, false)));
-            SwingAnalysis a = SwingSessionAnalysis.analyse(sr.record(), Optional.of(source));
+            Optional<SwingAnalysis> a;
+            try {
+                a = Optional.of(SwingSessionAnalysis.analyse(sr.record(), Optional.of(source)));
+            } catch (InputException e) {
+                a = Optional.empty();
+                doc.add(new Paragraph("The record cannot be analysed (no decay or period plot): " + e.getMessage(), false));
+            }
             recordPlot(session, sr, sf, simulator, a);
-            decayPlot(session, a);
-            periodPlot(session, a, level);
+            if (a.isPresent()) {
+                decayPlot(session, a.get());
+                periodPlot(session, a.get(), level);
+            }
             if (sf.isEmpty() && fit.isPresent()) {
                 doc.add(new Paragraph("This session is not part of the stored fit.", false));
             }
@@ -292,15 +311,15 @@ public final class MechanismReports {
     }
 
     private void recordPlot(TestSession session, SessionRecords.SessionRecord sr, Optional<SessionFit> sf,
-            SwingSimulator simulator, SwingAnalysis a) {
+            SwingSimulator simulator, Optional<SwingAnalysis> analysis) {
         double[] t = sr.record().times();
         double[] y = sr.record().angles();
         double[] measured = degrees(y);
         double[] model = new double[t.length];
         double[] residual = new double[t.length];
-        java.util.Arrays.fill(model, Double.NaN);
-        java.util.Arrays.fill(residual, Double.NaN);
-        double release = a.release().time();
+        Arrays.fill(model, Double.NaN);
+        Arrays.fill(residual, Double.NaN);
+        double release = analysis.map(a -> a.release().time()).orElse(Double.NaN);
         String caption;
         if (sf.isPresent() && simulator != null) {
             SessionFit f = sf.get();
@@ -315,9 +334,10 @@ public final class MechanismReports {
         } else {
             caption = "The record; no stored fit covers this session, so no model is drawn.";
         }
-        double stop = a.stop().stopped() ? a.stop().time() : Double.NaN;
-        caption += a.stop().stopped() ? " It comes to rest at " + Figures.significant(stop) + " s." : " It does not come to"
-                + " rest within the record.";
+        boolean stopped = analysis.isPresent() && analysis.get().stop().stopped();
+        double stop = stopped ? analysis.get().stop().time() : Double.NaN;
+        caption += stopped ? " It comes to rest at " + Figures.significant(stop) + " s." : analysis.isPresent()
+                ? " It does not come to rest within the record." : "";
         doc.add(new Figure(Plots.sessionRecord(id("record-" + slug(session.getId())), session.getName() + ": record and model",
                 t, measured, model, residual, release, stop), caption));
     }

@@ -319,7 +319,9 @@ final class ChartExportCapability implements Capability {
         // within a pixel and a half of the drawing (coordinates are written to 0.01 px)
         assertEquals(highest, yAtTop, 1.5 * Math.abs(perPixel), "the curve's highest point in the SVG");
         assertEquals(lowest, yAtBottom, 1.5 * Math.abs(perPixel), "the curve's lowest point in the SVG");
-        assertTrue(points.length <= 2 * chart.getSize().x + 4, "the curve is thinned to the columns: " + points.length);
+        // at most four samples a pixel column (its first, lowest, highest and last: PlotThinning.perColumn), and the
+        // sample just beyond each end of the visible span
+        assertTrue(points.length <= 4 * chart.getSize().x + 2, "the curve is thinned to the columns: " + points.length);
     }
 
     /** The PNG decodes, has the chart's size and shows the dark blue curve. */
