@@ -137,7 +137,7 @@ public final class MechanismReportWizard extends Wizard implements IExportWizard
                 display.asyncExec(() -> browser.accept(target));
             }
         }
-        return Status.info("Wrote the report of " + file.getFileName() + " to " + target);
+        return new Status(IStatus.OK, BUNDLE, "Wrote the report of " + file.getFileName() + " to " + target);
     }
 
     /**
