@@ -43,6 +43,8 @@ import org.eclipse.swt.widgets.Composite;
 import org.eclipse.swt.widgets.Control;
 import org.eclipse.swt.widgets.Event;
 import org.eclipse.swt.widgets.Label;
+import org.eclipse.swt.widgets.Link;
+import org.eclipse.swt.widgets.Shell;
 import org.eclipse.swt.widgets.Text;
 import org.eclipse.ui.IWorkbenchWizard;
 import org.eclipse.ui.PlatformUI;
@@ -63,7 +65,9 @@ import dev.penduline.ui.internal.wizard.MechanismReportWizard;
  * the export registry creates: HTML with "open in the browser" (the file where the page said,
  * the report's sections, caution and plots, byte for byte what the command line's request makes
  * with the same time, the browser hook given the file, the workspace in step); Markdown with a
- * prediction (the text and a folder of SVG figures); a record as the target refused on the page,
+ * prediction (the text and a folder of SVG figures); a target that became a folder after the page
+ * checked it fails the job with the file and the reason, shown by the workbench; a record as the
+ * target refused on the page,
  * the record unchanged; a mechanism without a stored fit allowed with a warning.
  */
 final class ReportExportCapability implements Capability {
@@ -105,6 +109,7 @@ final class ReportExportCapability implements Capability {
             MechanismReportWizard.browser = opened::add;
             MechanismReportWizard.clock = () -> WHEN;
             html(driver, descriptor, file, html, earlier, opened, project);
+            failed(driver, descriptor, file, scratch);
             markdown(driver, descriptor, file, opened, project);
             refused(driver, descriptor, file, record);
             assertArrayEquals(recordBytes, Files.readAllBytes(record), "the record is unchanged");
@@ -129,7 +134,7 @@ final class ReportExportCapability implements Capability {
         WizardPage page = page(dialog);
         assertNull(page.getErrorMessage(), "an earlier report may be replaced");
         assertTrue(page.getMessage().contains("fit-2026-12-03t17-13-22z"), "the page names the stored fit: " + page.getMessage());
-        driver.shot(dialog.getShell(), "report-wizard.png");
+        shot(driver, dialog, "report-wizard.png");
 
         IStatus result = finish(driver, dialog);
         assertTrue(result.isOK(), "the job's result: " + result);
@@ -159,6 +164,45 @@ final class ReportExportCapability implements Capability {
         assertTrue(resource.isSynchronized(IResource.DEPTH_ZERO), "the workspace was refreshed after the write");
     }
 
+    /** A target that turns into a folder after the page checked it: the job fails with the reason, and it is shown. */
+    private static void failed(WorkbenchDriver driver, IWizardDescriptor descriptor, IFile file, Path scratch)
+            throws Exception {
+        WizardDialog dialog = open(driver, descriptor, file);
+        Path later = scratch.resolve("later-report.html");
+        fieldAfter(dialog.getShell(), "Report file:").setText(later.toString());
+        assertNull(page(dialog).getErrorMessage(), "a new file is a good target");
+        Files.createDirectories(later);
+        IStatus result = finish(driver, dialog);
+        assertEquals(IStatus.ERROR, result.getSeverity(), "the job's result: " + result);
+        assertTrue(result.getMessage().contains(later.toString()), "the error names the file: " + result.getMessage());
+        Shell shown = driver.waitFor("the workbench to show the job's error", () -> {
+            for (Shell s : driver.display().getShells()) {
+                if (s != driver.shell() && !s.isDisposed() && s.isVisible() && says(s, "later-report.html")) {
+                    return s;
+                }
+            }
+            return null;
+        });
+        driver.shot(shown, "report-wizard-job-error.png");
+        shown.close();
+        driver.flush();
+        assertTrue(Files.isDirectory(later), "the folder in the way is still a folder");
+        try (Stream<Path> inside = Files.list(later)) {
+            assertEquals(0, inside.count(), "nothing was written into the folder");
+        }
+    }
+
+    private static boolean says(Shell shell, String text) {
+        for (Control c : TestMechanisms.widgets(shell)) {
+            String shown = c instanceof Label l ? l.getText() : c instanceof Text t ? t.getText()
+                    : c instanceof Link k ? k.getText() : "";
+            if (shown.contains(text)) {
+                return true;
+            }
+        }
+        return false;
+    }
+
     private static void markdown(WorkbenchDriver driver, IWizardDescriptor descriptor, IFile file, List<Path> opened,
             IProject project) throws Exception {
         WizardDialog dialog = open(driver, descriptor, file);
@@ -174,6 +218,7 @@ final class ReportExportCapability implements Capability {
         assertFalse(button(shell, "&Finish").isEnabled(), "Finish with a bad angle");
         angle.setText("60");
         assertNull(page(dialog).getErrorMessage());
+        shot(driver, dialog, "report-wizard-markdown.png");
         IStatus result = finish(driver, dialog);
         assertTrue(result.isOK(), "the job's result: " + result);
 
@@ -209,7 +254,7 @@ final class ReportExportCapability implements Capability {
             assertNotNull(page.getErrorMessage(), "a record as the target is refused on the page");
             assertTrue(page.getErrorMessage().contains("release-10deg.csv"), "names the file: " + page.getErrorMessage());
             assertFalse(button(shell, "&Finish").isEnabled(), "Finish is disabled");
-            driver.shot(dialog.getShell(), "report-wizard-record-refused.png");
+            shot(driver, dialog, "report-wizard-record-refused.png");
             fieldAfter(shell, "Report file:").setText(file.getLocation().toString());
             assertNotNull(page.getErrorMessage(), "the mechanism file as the target is refused");
             assertFalse(button(shell, "&Finish").isEnabled(), "Finish is disabled");
@@ -242,6 +287,16 @@ final class ReportExportCapability implements Capability {
         dialog.open();
         driver.flush();
         return dialog;
+    }
+
+    /**
+     * A screenshot of the wizard once GTK has drawn the states just set (a check box ticked, Finish disabled):
+     * those are drawn on the next frames, not by the events pending now.
+     */
+    private static void shot(WorkbenchDriver driver, WizardDialog dialog, String name) throws Exception {
+        long until = System.nanoTime() + 400_000_000L;
+        driver.waitFor("the wizard to be drawn", () -> System.nanoTime() > until ? Boolean.TRUE : null);
+        driver.shot(dialog.getShell(), name);
     }
 
     private static WizardPage page(WizardDialog dialog) {
