@@ -33,12 +33,14 @@ import org.eclipse.core.runtime.jobs.IJobChangeListener;
 import org.eclipse.core.runtime.jobs.Job;
 import org.eclipse.core.runtime.jobs.JobChangeAdapter;
 import org.eclipse.jface.dialogs.IMessageProvider;
+import org.eclipse.jface.viewers.IStructuredSelection;
 import org.eclipse.jface.viewers.StructuredSelection;
 import org.eclipse.jface.wizard.IWizardPage;
 import org.eclipse.jface.wizard.WizardDialog;
 import org.eclipse.jface.wizard.WizardPage;
 import org.eclipse.swt.SWT;
 import org.eclipse.swt.widgets.Button;
+import org.eclipse.swt.widgets.Combo;
 import org.eclipse.swt.widgets.Composite;
 import org.eclipse.swt.widgets.Control;
 import org.eclipse.swt.widgets.Event;
@@ -46,8 +48,10 @@ import org.eclipse.swt.widgets.Label;
 import org.eclipse.swt.widgets.Link;
 import org.eclipse.swt.widgets.Shell;
 import org.eclipse.swt.widgets.Text;
+import org.eclipse.ui.IEditorPart;
 import org.eclipse.ui.IWorkbenchWizard;
 import org.eclipse.ui.PlatformUI;
+import org.eclipse.ui.ide.IDE;
 import org.eclipse.ui.wizards.IWizardDescriptor;
 
 import dev.penduline.report.MarkdownReport;
@@ -56,6 +60,7 @@ import dev.penduline.report.ReportFiles;
 import dev.penduline.report.ReportRequest;
 import dev.penduline.services.Cautions;
 import dev.penduline.services.MechanismForecast;
+import dev.penduline.ui.PendulineViews;
 import dev.penduline.ui.ProjectFolders;
 import dev.penduline.ui.internal.preferences.WorkbenchDefaults;
 import dev.penduline.ui.internal.wizard.MechanismReportWizard;
@@ -68,7 +73,8 @@ import dev.penduline.ui.internal.wizard.MechanismReportWizard;
  * prediction (the text and a folder of SVG figures); a target that became a folder after the page
  * checked it fails the job with the file and the reason, shown by the workbench; a record as the
  * target refused on the page,
- * the record unchanged; a mechanism without a stored fit allowed with a warning.
+ * the record unchanged; a mechanism without a stored fit allowed with a warning; with the mechanism
+ * editor active and no file selected, the editor's file preselected.
  */
 final class ReportExportCapability implements Capability {
 
@@ -114,6 +120,7 @@ final class ReportExportCapability implements Capability {
             refused(driver, descriptor, file, record);
             assertArrayEquals(recordBytes, Files.readAllBytes(record), "the record is unchanged");
             withoutFit(driver, descriptor, scratch);
+            fromEditor(driver, descriptor, file);
         } finally {
             MechanismReportWizard.browser = browser;
             MechanismReportWizard.clock = clock;
@@ -278,10 +285,31 @@ final class ReportExportCapability implements Capability {
         }
     }
 
+    /** With the mechanism editor active and nothing selected, the editor's file is the one reported. */
+    private static void fromEditor(WorkbenchDriver driver, IWizardDescriptor descriptor, IFile file) throws Exception {
+        IEditorPart editor = IDE.openEditor(driver.page(), file, PendulineViews.MECHANISM_EDITOR);
+        WizardDialog dialog = open(driver, descriptor, StructuredSelection.EMPTY);
+        try {
+            Combo mechanism = (Combo) TestMechanisms.widgets(dialog.getShell()).stream().filter(Combo.class::isInstance)
+                    .findFirst().orElseThrow(() -> new AssertionError("no mechanism choice"));
+            assertEquals(file.getFullPath().toString(), mechanism.getText(), "the active editor's file is preselected");
+            assertNull(page(dialog).getErrorMessage());
+        } finally {
+            dialog.close();
+            driver.page().closeEditor(editor, false);
+        }
+    }
+
     /** The wizard as File › Export creates it, on the mechanism file selected. */
     private static WizardDialog open(WorkbenchDriver driver, IWizardDescriptor descriptor, IFile file) throws Exception {
+        return open(driver, descriptor, new StructuredSelection(file));
+    }
+
+    /** The wizard as File › Export creates it, on a selection. */
+    private static WizardDialog open(WorkbenchDriver driver, IWizardDescriptor descriptor, IStructuredSelection selection)
+            throws Exception {
         IWorkbenchWizard wizard = descriptor.createWizard();
-        wizard.init(PlatformUI.getWorkbench(), new StructuredSelection(file));
+        wizard.init(PlatformUI.getWorkbench(), selection);
         WizardDialog dialog = new WizardDialog(driver.shell(), wizard);
         dialog.setBlockOnOpen(false);
         dialog.open();

@@ -24,8 +24,10 @@ import org.eclipse.jface.viewers.IStructuredSelection;
 import org.eclipse.jface.wizard.Wizard;
 import org.eclipse.swt.program.Program;
 import org.eclipse.swt.widgets.Display;
+import org.eclipse.ui.IEditorPart;
 import org.eclipse.ui.IExportWizard;
 import org.eclipse.ui.IWorkbench;
+import org.eclipse.ui.IWorkbenchWindow;
 import org.eclipse.ui.PlatformUI;
 import org.osgi.framework.Bundle;
 
@@ -83,12 +85,23 @@ public final class MechanismReportWizard extends Wizard implements IExportWizard
 
     @Override
     public void init(IWorkbench workbench, IStructuredSelection selection) {
-        mechanism = MechanismSelection.fileOf(selection).filter(MechanismSelection::isMechanismFile).orElse(null);
+        mechanism = MechanismSelection.fileOf(selection).filter(MechanismSelection::isMechanismFile)
+                .or(() -> activeEditorFile(workbench)).orElse(null);
+    }
+
+    /** With the mechanism editor active, File › Export's selection is not a file: the editor's file is meant. */
+    private static Optional<IFile> activeEditorFile(IWorkbench workbench) {
+        IWorkbenchWindow window = workbench == null ? null : workbench.getActiveWorkbenchWindow();
+        IEditorPart editor = window == null || window.getActivePage() == null ? null : window.getActivePage().getActiveEditor();
+        IFile file = editor == null ? null : editor.getEditorInput().getAdapter(IFile.class);
+        return Optional.ofNullable(file).filter(f -> f.getLocation() != null && MechanismSelection.isMechanismFile(f));
     }
 
     @Override
     public void addPages() {
-        page = new MechanismReportPage(new ArrayList<>(RecordImportWizard.mechanismFiles()), mechanism);
+        List<IFile> files = new ArrayList<>(RecordImportWizard.mechanismFiles());
+        // the only mechanism of the workspace needs no choosing
+        page = new MechanismReportPage(files, mechanism == null && files.size() == 1 ? files.get(0) : mechanism);
         addPage(page);
     }
 
