@@ -20,6 +20,7 @@ final class PendulineActionBarAdvisor extends ActionBarAdvisor {
     private IWorkbenchAction newWizard;
     private IWorkbenchAction save;
     private IWorkbenchAction importWizards;
+    private IWorkbenchAction exportWizards;
     private IWorkbenchAction saveAs;
     private IWorkbenchAction revert;
     private IWorkbenchAction close;
@@ -36,6 +37,7 @@ final class PendulineActionBarAdvisor extends ActionBarAdvisor {
         newWizard = register(ActionFactory.NEW.create(window));
         save = register(ActionFactory.SAVE.create(window));
         importWizards = register(ActionFactory.IMPORT.create(window));
+        exportWizards = register(ActionFactory.EXPORT.create(window));
         saveAs = register(ActionFactory.SAVE_AS.create(window));
         revert = register(ActionFactory.REVERT.create(window));
         close = register(ActionFactory.CLOSE.create(window));
@@ -69,6 +71,7 @@ final class PendulineActionBarAdvisor extends ActionBarAdvisor {
         file.add(revert);
         file.add(new Separator());
         file.add(importWizards);
+        file.add(exportWizards);
         file.add(new Separator(IWorkbenchActionConstants.MB_ADDITIONS));
         file.add(new Separator());
         file.add(quit);

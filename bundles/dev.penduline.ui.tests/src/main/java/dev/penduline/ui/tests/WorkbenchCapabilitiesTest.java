@@ -51,6 +51,7 @@ class WorkbenchCapabilitiesTest {
         c.put("preferences", new PreferencesCapability());
         c.put("fitWizard", new FitWizardCapability());
         c.put("whatIf", new WhatIfCapability());
+        c.put("reportExport", new ReportExportCapability());
         return c;
     }
 

@@ -90,7 +90,8 @@ public final class RecordImportWizard extends Wizard implements IImportWizard {
         addPage(page);
     }
 
-    private static List<IFile> mechanismFiles() {
+    /** @return the mechanism files in the open projects of the workspace */
+    static List<IFile> mechanismFiles() {
         List<IFile> found = new ArrayList<>();
         try {
             ResourcesPlugin.getWorkspace().getRoot().accept(r -> {
