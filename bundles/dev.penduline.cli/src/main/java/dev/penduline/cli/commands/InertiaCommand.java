@@ -29,7 +29,7 @@ import dev.penduline.services.present.Figures;
 public final class InertiaCommand implements Command {
 
     /** Monte Carlo draws over the parts' tolerances unless told otherwise. */
-    static final int DEFAULT_DRAWS = 2000;
+    static final int DEFAULT_DRAWS = ToleranceSpread.DEFAULT_DRAWS;
 
     @Override
     public String name() {

@@ -16,6 +16,7 @@ import dev.penduline.cli.ExitCode;
 import dev.penduline.cli.UsageException;
 import dev.penduline.cli.Version;
 import dev.penduline.model.persistence.MechanismFormat;
+import dev.penduline.physics.inertia.ToleranceSpread;
 import dev.penduline.report.MechanismReports;
 import dev.penduline.report.ReportDocument;
 import dev.penduline.report.ReportFiles;
@@ -135,7 +136,7 @@ public final class ReportCommand implements Command {
                         .map(l -> l.replace(given, name)).toList(), p.outcome()));
             }
             ReportDocument doc = MechanismReports.build(new ReportRequest(file, Optional.ofNullable(a.value("fit")),
-                    predictions, version, clock.get(), defaults.gravity(), InertiaCommand.DEFAULT_DRAWS,
+                    predictions, version, clock.get(), defaults.gravity(), ToleranceSpread.DEFAULT_DRAWS,
                     MechanismForecast.DEFAULT_SEED));
             for (String note : ReportFiles.write(doc, target, kind, version, a.flag("force"))) {
                 err.println("note: " + note);

@@ -54,6 +54,7 @@ import org.eclipse.ui.PlatformUI;
 import org.eclipse.ui.ide.IDE;
 import org.eclipse.ui.wizards.IWizardDescriptor;
 
+import dev.penduline.physics.inertia.ToleranceSpread;
 import dev.penduline.report.MarkdownReport;
 import dev.penduline.report.MechanismReports;
 import dev.penduline.report.ReportFiles;
@@ -162,7 +163,8 @@ final class ReportExportCapability implements Capability {
         // forecast's default seed; the sample states no gravity, so the defaults' applies), at the same time.
         Path headless = Files.createTempDirectory("penduline-report-headless").resolve("hatch-report.html");
         ReportFiles.write(MechanismReports.build(new ReportRequest(file.getLocation().toPath(), Optional.empty(),
-                Optional.empty(), version, WHEN, WorkbenchDefaults.current().gravity(), 2000, MechanismForecast.DEFAULT_SEED)),
+                Optional.empty(), version, WHEN, WorkbenchDefaults.current().gravity(), ToleranceSpread.DEFAULT_DRAWS,
+                MechanismForecast.DEFAULT_SEED)),
                 headless, ReportFiles.Kind.HTML, version, false);
         assertEquals(Files.readString(headless), text, "the workbench's report is the command line's");
 

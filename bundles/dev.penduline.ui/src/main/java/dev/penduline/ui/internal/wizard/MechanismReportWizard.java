@@ -32,6 +32,7 @@ import org.eclipse.ui.PlatformUI;
 import org.osgi.framework.Bundle;
 
 import dev.penduline.physics.forecast.ForecastRequest;
+import dev.penduline.physics.inertia.ToleranceSpread;
 import dev.penduline.physics.units.Unit;
 import dev.penduline.report.MarkdownReport;
 import dev.penduline.report.MechanismReports;
@@ -70,7 +71,7 @@ public final class MechanismReportWizard extends Wizard implements IExportWizard
     public static Supplier<Instant> clock = Instant::now;
 
     /** Monte Carlo draws of the parts' tolerances: those of {@code penduline report} (its inertia command's default). */
-    static final int TOLERANCE_DRAWS = 2000;
+    static final int TOLERANCE_DRAWS = ToleranceSpread.DEFAULT_DRAWS;
 
     private static final String BUNDLE = "dev.penduline.ui";
 
