@@ -129,11 +129,7 @@ public final class ReportCommand implements Command {
                 List<String> call = new ArrayList<>(List.of(file.toString()));
                 call.addAll(options);
                 PredictCommand.Prediction p = PredictCommand.compute(call, defaults, err);
-                // the report names files by their names: it reads the same wherever it was made from
-                String given = file.toString();
-                String name = file.getFileName().toString();
-                predictions = Optional.of(new ReportPredictions(String.join(" ", options), p.lines().stream()
-                        .map(l -> l.replace(given, name)).toList(), p.outcome()));
+                predictions = Optional.of(ReportPredictions.of(String.join(" ", options), p.lines(), p.outcome(), file));
             }
             ReportDocument doc = MechanismReports.build(new ReportRequest(file, Optional.ofNullable(a.value("fit")),
                     predictions, version, clock.get(), defaults.gravity(), ToleranceSpread.DEFAULT_DRAWS,

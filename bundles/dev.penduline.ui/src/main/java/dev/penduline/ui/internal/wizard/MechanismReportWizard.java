@@ -41,6 +41,7 @@ import dev.penduline.report.ReportFiles;
 import dev.penduline.report.ReportPredictions;
 import dev.penduline.report.ReportRequest;
 import dev.penduline.services.Defaults;
+import dev.penduline.services.ForecastText;
 import dev.penduline.services.InputException;
 import dev.penduline.services.MechanismForecast;
 import dev.penduline.services.MechanismLoader;
@@ -157,7 +158,7 @@ public final class MechanismReportWizard extends Wizard implements IExportWizard
     /**
      * The prediction {@code penduline report FILE --predict --theta0-deg A} includes: the forecast of a release from
      * rest with the latest stored fit's friction, the settle band of the user's defaults, predict's draws and seed.
-     * Its readable lines are left out (they are the command line's): the report shows its figures table and plot.
+     * Its readable lines are predict's own ({@link ForecastText}).
      */
     private static ReportPredictions prediction(Path file, double releaseDeg, Defaults defaults) throws InputException {
         StoredFit fit = StoredFit.latest(MechanismLoader.readMechanism(file)).orElseThrow(() -> new InputException(file
@@ -170,7 +171,7 @@ public final class MechanismReportWizard extends Wizard implements IExportWizard
         if (defaults.settleBand() != Defaults.BUILT_IN.settleBand()) {
             options += " --band-deg " + plain(defaults.settleBand());
         }
-        return new ReportPredictions(options, List.of(), outcome);
+        return ReportPredictions.of(options, ForecastText.lines(mechanism, outcome, Optional.empty()), outcome, file);
     }
 
     private static String plain(double v) {
