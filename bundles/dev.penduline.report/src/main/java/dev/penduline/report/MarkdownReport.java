@@ -95,7 +95,13 @@ public final class MarkdownReport {
         md.append('*').append(line(t.caption())).append("*\n\n|");
         t.headers().forEach(h -> md.append(' ').append(cell(h)).append(" |"));
         md.append("\n|");
-        t.headers().forEach(h -> md.append(" --- |"));
+        for (int c = 0; c < t.headers().size(); c++) {
+            // a column of figures is set flush right, as in the HTML
+            final int col = c;
+            boolean figures = !t.rows().isEmpty() && t.rows().stream().allMatch(r -> col < r.size() && !r.get(col).key()
+                    .isEmpty());
+            md.append(figures ? " ---: |" : " --- |");
+        }
         md.append('\n');
         for (List<Cell> row : t.rows()) {
             md.append('|');
