@@ -45,7 +45,7 @@ class SavitzkyGolayTest {
 
     @Test
     void onEvenSamplesTheLocalFitIsTheConvolutionWithTheTableWeights() {
-        // the convolution form of Savitzky & Golay 1964 (eq. 1) against the local-fit implementation
+        // the convolution form of Savitzky & Golay 1964 (eq. 1) with the weights checked above against the tables
         final SplittableRandom random = new SplittableRandom(7);
         final int n = 40;
         final double h = 0.01;
@@ -63,6 +63,31 @@ class SavitzkyGolayTest {
                 expected += w[j] * y[i - 2 + j];
             }
             assertEquals(expected / h, d[i], 1e-9, "sample " + i);
+        }
+    }
+
+    @Test
+    void onEvenSamplesTheConvolutionIsTheLocalLeastSquaresFitAndAnUnevenGapFallsBackToIt() {
+        // the convolution (taken where a window's gaps are even) against a direct least-squares fit of
+        // the same cubic in each window (LocalPolynomial), value and slope; then one gap made uneven
+        final SplittableRandom random = new SplittableRandom(11);
+        final int n = 200;
+        final double h = 0.002;
+        final double[] t = new double[n];
+        final double[] y = new double[n];
+        for (int i = 0; i < n; i++) {
+            t[i] = 1.5 + i * h;
+            y[i] = Math.sin(9 * t[i]) + 0.01 * random.nextGaussian();
+        }
+        t[120] += 0.3 * h;
+        final SavitzkyGolay filter = new SavitzkyGolay(6, 3);
+        final double[] s = filter.smooth(t, y);
+        final double[] d = filter.derivative(t, y);
+        final LocalPolynomial fit = new LocalPolynomial(3);
+        for (int i = 6; i < n - 6; i++) {
+            fit.fit(t, y, i - 6, i + 7, t[i], 6 * h);
+            assertEquals(fit.value(), s[i], 1e-12, "value at sample " + i);
+            assertEquals(fit.slope(), d[i], 1e-9 * Math.max(1, Math.abs(fit.slope())), "slope at sample " + i);
         }
     }
 
