@@ -5,12 +5,10 @@ import java.util.List;
 import java.util.Optional;
 
 import dev.penduline.model.EnergyShare;
-import dev.penduline.model.Estimate;
 import dev.penduline.model.FitResult;
 import dev.penduline.physics.forecast.AnglePass;
 import dev.penduline.physics.forecast.FigureBand;
 import dev.penduline.physics.identify.FrictionTerm;
-import dev.penduline.physics.identify.ParameterEstimate;
 import dev.penduline.physics.units.Unit;
 import dev.penduline.report.ReportDocument.Cell;
 import dev.penduline.report.ReportDocument.Figure;
@@ -29,80 +27,44 @@ final class FitTables {
     private FitTables() {
     }
 
-    static void estimates(ReportDocument.Builder doc, FitResult r, StoredFitText t) {
+    static void estimates(ReportDocument.Builder doc, StoredFitText t) {
         List<List<Cell>> rows = new ArrayList<>();
-        for (Estimate e : r.getEstimates()) {
-            String p = e.getParameter();
-            double sj = e.isSetStandardError() ? e.getStandardError() : Double.NaN;
-            double sr = e.isSetResamplingError() ? e.getResamplingError() : Double.NaN;
-            double sigma = sigma(e);
-            boolean inertia = TermWords.INERTIA_SYMBOL.equals(p);
-            if (inertia && !r.isSetFittedInertia()) {
-                continue;
-            }
-            Optional<FrictionTerm> term = term(p);
-            String key = inertia ? "fit.inertia.fitted_kg_m2" : term.map(x -> "fit.terms." + FitWording.word(x) + ".value")
-                    .orElse("");
-            String sigmaKey = inertia ? "fit.inertia.sigma_kg_m2" : term.map(x -> "fit.terms." + FitWording.word(x)
-                    + ".sigma").orElse("");
-            String text = Figures.measured(e.getValue(), sigma);
-            rows.add(List.of(Cell.of(inertia ? "inertia, fitted" : TermWords.quantity(p)), Cell.of(p),
-                    key.isEmpty() ? Cell.of(text) : Cell.measured(text, key, Format.MEASURED, sigmaKey),
-                    Cell.of(TermWords.unit(p)), Cell.of(orDash(sj)), Cell.of(orDash(sr))));
-        }
-        if (r.isSetCalculatedInertia()) {
-            boolean free = r.isSetFittedInertia() && t.estimate(TermWords.INERTIA_SYMBOL).isPresent();
-            rows.add(List.of(Cell.of(free ? "J0 calculated from the parts" : "J0 held at the calculated value"), Cell.of(""),
-                    Cell.figure(Figures.significant(r.getCalculatedInertia()), "fit.inertia.calculated_kg_m2",
-                            Format.SIGNIFICANT), Cell.of(Unit.KG_M2.symbol()), Cell.of(""), Cell.of("")));
-            if (free) {
-                double d = 100 * (r.getFittedInertia() - r.getCalculatedInertia()) / r.getCalculatedInertia();
-                rows.add(List.of(Cell.of("J0 fitted against calculated"), Cell.of(""), Cell.figure((d >= 0 ? "+" : "")
-                        + Figures.fixed(d, 2), "fit.inertia.difference_percent", Format.SIGNED_FIXED2), Cell.of("%"),
-                        Cell.of(""), Cell.of("")));
-            }
+        for (StoredFitText.EstimateRow e : t.estimates()) {
+            rows.add(List.of(Cell.of(e.quantity()), Cell.of(e.symbol()), figure(e), Cell.of(e.unit()),
+                    Cell.of(e.sigmaJacobian()), Cell.of(e.sigmaResampling())));
         }
         doc.add(new Table("Estimates: ± is one standard uncertainty (the Jacobian's, or the bootstrap's when clearly"
                 + " larger), written as JCGM 100:2008 §7.2.6 asks: two significant digits, the value to the same place",
                 List.of("quantity", "symbol", "value ± u", "unit", "u from the Jacobian", "u from the bootstrap"), rows));
     }
 
+    /** An estimate's figure, keyed to the fit's JSON where the JSON has it (stiction is a band there). */
+    private static Cell figure(StoredFitText.EstimateRow e) {
+        if (TermWords.INERTIA_SYMBOL.equals(e.symbol())) {
+            return Cell.measured(e.measured(), "fit.inertia.fitted_kg_m2", Format.MEASURED, "fit.inertia.sigma_kg_m2");
+        }
+        for (FrictionTerm t : FrictionTerm.values()) {
+            if (t != FrictionTerm.STICTION && t.symbol().equals(e.symbol())) {
+                String key = "fit.terms." + FitWording.word(t);
+                return Cell.measured(e.measured(), key + ".value", Format.MEASURED, key + ".sigma");
+            }
+        }
+        return switch (e.quantity()) {
+            case StoredFitText.CALCULATED, StoredFitText.HELD -> Cell.figure(e.measured(), "fit.inertia.calculated_kg_m2",
+                    Format.SIGNIFICANT);
+            case StoredFitText.DIFFERENCE -> Cell.figure(e.measured(), "fit.inertia.difference_percent",
+                    Format.SIGNED_FIXED2);
+            default -> Cell.of(e.measured());
+        };
+    }
+
     /**
      * The estimates as lines of words, {@code viscous b = 0.0119980 ± 0.0000040 N·m·s/rad}, each
      * figure written as in the estimates table.
      */
-    static List<String> estimateLines(FitResult r) {
-        List<String> lines = new ArrayList<>();
-        for (Estimate e : r.getEstimates()) {
-            String p = e.getParameter();
-            if (TermWords.INERTIA_SYMBOL.equals(p) && !r.isSetFittedInertia()) {
-                continue;
-            }
-            lines.add((TermWords.INERTIA_SYMBOL.equals(p) ? "inertia, fitted" : TermWords.quantity(p)) + " " + p + " = "
-                    + Figures.measured(e.getValue(), sigma(e)) + " " + TermWords.unit(p));
-        }
-        return lines;
-    }
-
-    /** The σ to quote, by the physics layer's rule (ParameterEstimate.sigma), NaN when none was stored. */
-    private static double sigma(Estimate e) {
-        double sj = e.isSetStandardError() ? e.getStandardError() : Double.NaN;
-        double sr = e.isSetResamplingError() ? e.getResamplingError() : Double.NaN;
-        double s = new ParameterEstimate(e.getParameter(), "", e.getValue(), sj, sr, true, false).sigma();
-        return Double.isFinite(s) && s >= 0 ? s : Double.NaN;
-    }
-
-    private static Optional<FrictionTerm> term(String symbol) {
-        for (FrictionTerm t : FrictionTerm.values()) {
-            if (t.symbol().equals(symbol) && t != FrictionTerm.STICTION) {
-                return Optional.of(t);
-            }
-        }
-        return Optional.empty();
-    }
-
-    private static String orDash(double sigma) {
-        return Double.isFinite(sigma) ? Figures.uncertainty(sigma) : "–";
+    static List<String> estimateLines(StoredFitText t) {
+        return t.estimates().stream().filter(e -> !e.symbol().isEmpty())
+                .map(e -> e.quantity() + " " + e.symbol() + " = " + e.measured() + " " + e.unit()).toList();
     }
 
     static void energy(ReportDocument.Builder doc, FitResult r, String pictureId) {

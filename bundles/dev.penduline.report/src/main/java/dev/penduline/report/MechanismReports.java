@@ -13,7 +13,6 @@ import java.util.Optional;
 import dev.penduline.model.FitResult;
 import dev.penduline.model.Mechanism;
 import dev.penduline.model.SessionFit;
-import dev.penduline.model.Setting;
 import dev.penduline.model.TestSession;
 import dev.penduline.physics.MechanismProperties;
 import dev.penduline.physics.inertia.InertiaSummary;
@@ -90,13 +89,16 @@ public final class MechanismReports {
         MechanismSource source = new MechanismLoader().withDefaultGravity(request.defaultGravity())
                 .loadMechanism(m, file.toString());
         Optional<FitResult> fit = chosenFit(m);
+        Optional<StoredFitText> text = fit.map(r -> StoredFitText.of(r, m.getSessions()));
         caution(request.predictions().isPresent());
-        summary(m, source, fit);
+        summary(m, source, fit, text);
         mechanism(m, source);
         List<String> hashes = sessions(file, m, source, fit);
-        fit.ifPresent(r -> fitSection(m, r));
+        if (fit.isPresent()) {
+            fitSection(fit.get(), text.get());
+        }
         request.predictions().ifPresent(this::predictions);
-        provenance(file, fit, hashes);
+        provenance(file, fit, text, hashes);
         doc.add(new Heading(1, "caution", "Caution"));
         caution(true);
         String title = m.getName() == null || m.getName().isBlank() ? file.getFileName().toString() : m.getName();
@@ -124,18 +126,18 @@ public final class MechanismReports {
         doc.add(new Caution("Caution", lines));
     }
 
-    private void summary(Mechanism m, MechanismSource source, Optional<FitResult> fit) {
+    private void summary(Mechanism m, MechanismSource source, Optional<FitResult> fit, Optional<StoredFitText> text) {
         doc.add(new Heading(1, "summary", "Summary"));
         if (m.getDescription() != null && !m.getDescription().isBlank()) {
             doc.add(new Paragraph(m.getDescription(), false));
         }
         if (fit.isPresent()) {
-            StoredFitText t = StoredFitText.of(fit.get(), m.getSessions());
+            StoredFitText t = text.get();
             doc.add(new Paragraph(t.verdict(), true));
             List<String> items = new ArrayList<>();
             items.add("Friction " + t.model() + "; fit " + t.id() + " of " + t.computedAt() + " from "
                     + fit.get().getSessionIds().size() + " test session(s).");
-            items.addAll(FitTables.estimateLines(fit.get()));
+            items.addAll(FitTables.estimateLines(t));
             t.warnings().stream().filter(w -> w.startsWith("STALE")).forEach(items::add);
             doc.add(new Items(items));
         } else {
@@ -247,11 +249,11 @@ public final class MechanismReports {
             doc.add(new Paragraph("The file has no test sessions.", false));
             return provenance;
         }
-        Optional<StoredFit> stored = fit.isPresent() ? Optional.of(StoredFit.of(fit.get())) : Optional.empty();
-        SwingSimulator simulator = stored.map(f -> FitCurves.simulatorOf(source, f, tolerance(fit.get()))).orElse(null);
+        SwingSimulator simulator = null;
         MechanismProperties level = FrictionIdentification.aboutEquilibrium(source.properties());
-        if (stored.isPresent() && Double.isFinite(stored.get().fittedInertia())) {
-            level = level.withPivotInertia(stored.get().fittedInertia());
+        if (fit.isPresent()) {
+            simulator = FitCurves.simulatorOf(source, StoredFit.of(fit.get()), tolerance(fit.get()));
+            level = simulator.mechanism();
         }
         for (TestSession session : m.getSessions()) {
             doc.add(new Heading(2, "session-" + slug(session.getId()), session.getName()));
@@ -298,16 +300,11 @@ public final class MechanismReports {
     }
 
     private static double tolerance(FitResult r) {
-        for (Setting s : r.getSettings()) {
-            if ("integration-tolerance".equals(s.getKey())) {
-                try {
-                    return Double.parseDouble(s.getValue());
-                } catch (NumberFormatException e) {
-                    return DEFAULT_TOLERANCE;
-                }
-            }
+        try {
+            return StoredFit.setting(r, "integration-tolerance").map(Double::parseDouble).orElse(DEFAULT_TOLERANCE);
+        } catch (NumberFormatException e) {
+            return DEFAULT_TOLERANCE;
         }
-        return DEFAULT_TOLERANCE;
     }
 
     private void recordPlot(TestSession session, SessionRecords.SessionRecord sr, Optional<SessionFit> sf,
@@ -429,14 +426,13 @@ public final class MechanismReports {
         return s.isEmpty() ? "x" : s;
     }
 
-    private void fitSection(Mechanism m, FitResult r) {
-        StoredFitText t = StoredFitText.of(r, m.getSessions());
+    private void fitSection(FitResult r, StoredFitText t) {
         doc.add(new Heading(1, "fit", "Friction fit"));
         doc.add(new Paragraph(t.verdict(), true));
         doc.add(new Paragraph(t.shares().isEmpty() ? "Energy shares: " + StoredFitText.NOT_STORED : t.shares(), false));
         doc.add(new Paragraph(t.model().substring(0, 1).toUpperCase(Locale.ROOT) + t.model().substring(1) + "; fit " + t.id()
                 + " computed " + t.computedAt() + ", status " + t.status() + ".", false));
-        FitTables.estimates(doc, r, t);
+        FitTables.estimates(doc, t);
         FitTables.energy(doc, r, id("energy"));
         FitTables.sessions(doc, t);
         FitTables.correlations(doc, r);
@@ -476,7 +472,8 @@ public final class MechanismReports {
         }
     }
 
-    private void provenance(Path file, Optional<FitResult> fit, List<String> records) throws InputException {
+    private void provenance(Path file, Optional<FitResult> fit, Optional<StoredFitText> text, List<String> records)
+            throws InputException {
         doc.add(new Heading(1, "provenance", "Provenance"));
         List<String> items = new ArrayList<>();
         items.add("Penduline " + request.version() + ", report written " + request.time().truncatedTo(ChronoUnit.SECONDS));
@@ -490,9 +487,9 @@ public final class MechanismReports {
         request.predictions().ifPresent(p -> items.add("Predictions: penduline predict " + file.getFileName() + " "
                 + p.options() + " (draws " + p.outcome().draws() + ", seed " + p.outcome().seed() + ")"));
         doc.add(new Items(items));
-        fit.ifPresent(r -> {
+        text.ifPresent(t -> {
             List<List<Cell>> rows = new ArrayList<>();
-            for (Map.Entry<String, String> e : StoredFitText.of(r, List.of()).settings()) {
+            for (Map.Entry<String, String> e : t.settings()) {
                 rows.add(List.of(Cell.of(e.getKey()), Cell.of(e.getValue())));
             }
             doc.add(new Table("The settings the fit was made with, as stored", List.of("setting", "value"), rows));

@@ -199,8 +199,8 @@ public final class FitRecorder {
 
     /**
      * What a report of the stored fit needs beyond the estimates, so that it says what
-     * {@code penduline fit} said without fitting again: the verdict in words and its numbers, the
-     * energy shares' standard deviations, the fit against the noise floor of each record, the stop's
+     * {@code penduline fit} said without fitting again: the verdict in words, the energy dissipated
+     * and the shares' standard deviations, the fit against the noise floor of each record, the stop's
      * note, the totals. Stored as further settings (the file's schema is unchanged: a file written
      * before these keys existed still loads, and a report of it says what was not stored).
      */
@@ -208,8 +208,6 @@ public final class FitRecorder {
         FrictionFit fit = outcome.fit();
         if (fit.energy() != null) {
             setting(r, VERDICT, FitWording.verdict(fit));
-            setting(r, "verdict-lead", String.valueOf(fit.verdict().lead()));
-            setting(r, "verdict-lead-sigma", String.valueOf(fit.verdict().leadSigma()));
             setting(r, "energy-dissipated", String.valueOf(fit.energy().dissipated()));
             setting(r, "energy-sigma-viscous", String.valueOf(fit.energy().viscousSigma()));
             setting(r, "energy-sigma-coulomb", String.valueOf(fit.energy().coulombSigma()));
@@ -228,11 +226,6 @@ public final class FitRecorder {
                 setting(r, "noise-floor[" + id + "]", String.valueOf(sg.noise().sigma()));
                 setting(r, "residual-to-noise[" + id + "]", String.valueOf(sg.ratio()));
             }
-        }
-        for (SessionEstimate s : fit.sessions()) {
-            String id = sessionId(outcome, s.name());
-            setting(r, "theta0-sigma[" + id + "]", String.valueOf(s.releaseAngle().sigma()));
-            setting(r, "release-time-sigma[" + id + "]", String.valueOf(s.releaseTime().sigma()));
         }
         if (fit.stopNote() != null) {
             setting(r, "stop-note", fit.stopNote());

@@ -74,6 +74,42 @@ public final class FitWording {
     }
 
     /**
+     * The fit against the records' noise floor, in one sentence.
+     *
+     * @param rms    the residual rms over all records (rad)
+     * @param floor  the noise floor over all records (rad)
+     * @param ratio  the largest ratio of a record's residual to its floor
+     * @param limit  the ratio above which the model is said not to describe a record
+     * @param lag1   the residuals' lag-1 autocorrelation, NaN when unknown (then left out)
+     * @param passed whether every record is within the limit
+     * @return e.g. "Against the noise: residual rms 0.03126° against a noise floor of 0.03721° (...): the model
+     *         describes the records"
+     */
+    public static String againstNoise(double rms, double floor, double ratio, double limit, double lag1, boolean passed) {
+        return String.format(Locale.ROOT, "Against the noise: residual rms %s° against a noise floor of %s° (largest ratio of a"
+                + " record %.2f, limit %.2g%s): %s", Figures.significant(Unit.DEGREE.fromSi(rms)),
+                Figures.significant(Unit.DEGREE.fromSi(floor)), ratio, limit, Double.isNaN(lag1) ? ""
+                        : String.format(Locale.ROOT, "; residual lag-1 correlation %.2f", lag1),
+                passed ? "the model describes the records" : "the model does NOT describe the records");
+    }
+
+    /**
+     * The static friction the stops allow, in one sentence.
+     *
+     * @param lower the band's lower end (N·m), NaN when there is no band
+     * @param upper its upper end (N·m)
+     * @param note  how it was found, or why there is none; may be null beside a band
+     * @return the sentence
+     */
+    public static String stopBand(double lower, double upper, String note) {
+        if (Double.isNaN(lower)) {
+            return "Static friction from the stops: none can be given: " + note;
+        }
+        return "Static friction from the stops: Ts between " + Figures.significant(lower) + " and "
+                + Figures.significant(upper) + " N·m" + (note == null ? "" : " (" + note + ")");
+    }
+
+    /**
      * A share of the dissipated energy as a percentage, with its ± when known.
      *
      * @param share the share (fraction)

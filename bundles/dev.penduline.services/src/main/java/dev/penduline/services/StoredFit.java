@@ -173,24 +173,31 @@ public record StoredFit(String id, String name, FrictionTorques friction, double
                     e.isSetResamplingError() ? e.getResamplingError() : 0);
             sigmas.add(Double.isFinite(s) && s > 0 ? s : 0);
         }
-        if (!"free".equals(setting(r, "inertia"))) {
+        if (!setting(r, "inertia").filter("free"::equals).isPresent()) {
             j0 = Double.NaN;
         }
-        double[] band = stictionBand(setting(r, "stop-band"));
+        double[] band = stictionBand(setting(r, "stop-band").orElse(null));
         double ts = Double.isFinite(band[0]) ? Math.max(tc, 0.5 * (band[0] + band[1])) : tc;
         return new StoredFit(r.getId(), r.getName(), new FrictionTorques(b, tc, ts, c), j0, names,
                 values.stream().mapToDouble(Double::doubleValue).toArray(),
                 sigmas.stream().mapToDouble(Double::doubleValue).toArray(), correlation(r, names), band[0], band[1],
-                Optional.ofNullable(setting(r, PartsImport.STALE)));
+                setting(r, PartsImport.STALE));
     }
 
-    private static String setting(FitResult r, String key) {
+    /**
+     * A setting stored with a fit.
+     *
+     * @param r   the stored result
+     * @param key the setting's key ("integration-tolerance", "inertia", ...)
+     * @return its value, empty when the fit has none of that key
+     */
+    public static Optional<String> setting(FitResult r, String key) {
         for (Setting s : r.getSettings()) {
             if (key.equals(s.getKey())) {
-                return s.getValue();
+                return Optional.ofNullable(s.getValue());
             }
         }
-        return null;
+        return Optional.empty();
     }
 
     private static double[] stictionBand(String text) {

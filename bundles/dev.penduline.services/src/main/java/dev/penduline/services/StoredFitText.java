@@ -20,6 +20,7 @@ import dev.penduline.model.SessionFit;
 import dev.penduline.model.Setting;
 import dev.penduline.model.TermSetScore;
 import dev.penduline.model.TestSession;
+import dev.penduline.physics.identify.FrictionTerm;
 import dev.penduline.physics.identify.ParameterEstimate;
 import dev.penduline.physics.units.Unit;
 import dev.penduline.services.present.Figures;
@@ -49,13 +50,22 @@ public record StoredFitText(String id, String computedAt, String status, String 
         List<EstimateRow> estimates, List<SessionRow> sessions, List<ComparisonRow> comparisons,
         List<String> warnings, String noise, String stopBand, String totals, List<Map.Entry<String, String>> settings) {
 
+    /** The quantity of the row of the calculated J0 beside a fitted one. */
+    public static final String CALCULATED = "J0 calculated";
+
+    /** The quantity of the row of the calculated J0 a fit held fixed. */
+    public static final String HELD = "J0 held at calculated";
+
+    /** The quantity of the row of the fitted J0's difference from the calculated one, in percent. */
+    public static final String DIFFERENCE = "J0 difference";
+
     /** What a report says where a fit was stored before Penduline kept that part of it. */
     public static final String NOT_STORED = "not stored with this fit";
 
     /** The settings that hold evidence shown in sentences of their own, not in the settings' list. */
-    private static final Pattern EVIDENCE = Pattern.compile("verdict|verdict-lead(-sigma)?"
+    private static final Pattern EVIDENCE = Pattern.compile("verdict"
             + "|energy-.*|rms-residual|samples|noise-floor.*|noise-limit|noise-passed|noise-ratio|residual-to-noise.*"
-            + "|theta0-sigma.*|release-time-sigma.*|stop-band|stop-note");
+            + "|stop-band|stop-note");
 
     /**
      * One line of the estimates table.
@@ -67,9 +77,11 @@ public record StoredFitText(String id, String computedAt, String status, String 
      * @param sigmaJacobian   the standard error from the Jacobian at the optimum
      * @param sigmaResampling the standard error from the block bootstrap
      * @param unit            the SI unit of value and errors
+     * @param measured        value and σ together as a report writes them ({@code Figures.measured}); for a
+     *                        derived row, the value
      */
     public record EstimateRow(String quantity, String symbol, String value, String sigma, String sigmaJacobian,
-            String sigmaResampling, String unit) {
+            String sigmaResampling, String unit, String measured) {
     }
 
     /**
@@ -137,14 +149,7 @@ public record StoredFitText(String id, String computedAt, String status, String 
 
     private static double number(Map<String, String> settings, String key) {
         String v = settings.get(key);
-        if (v == null) {
-            return Double.NaN;
-        }
-        try {
-            return Double.parseDouble(v);
-        } catch (NumberFormatException e) {
-            return Double.NaN;
-        }
+        return v == null ? Double.NaN : parse(v);
     }
 
     private static String noise(Map<String, String> settings) {
@@ -153,11 +158,9 @@ public record StoredFitText(String id, String computedAt, String status, String 
         if (!Double.isFinite(floor) || !Double.isFinite(rms)) {
             return "";
         }
-        return String.format(Locale.ROOT, "Against the noise: residual rms %s° against a noise floor of %s° (largest ratio"
-                + " of a record %.2f, limit %.2g): %s", Figures.significant(Unit.DEGREE.fromSi(rms)),
-                Figures.significant(Unit.DEGREE.fromSi(floor)), number(settings, "noise-ratio"),
-                number(settings, "noise-limit"), "true".equals(settings.get("noise-passed"))
-                        ? "the model describes the records" : "the model does NOT describe the records");
+        // the residuals' lag-1 correlation is not stored: the sentence leaves it out
+        return FitWording.againstNoise(rms, floor, number(settings, "noise-ratio"), number(settings, "noise-limit"),
+                Double.NaN, "true".equals(settings.get("noise-passed")));
     }
 
     private static String stopBand(Map<String, String> settings) {
@@ -165,10 +168,9 @@ public record StoredFitText(String id, String computedAt, String status, String 
         String band = settings.get("stop-band");
         String[] ends = band == null ? new String[0] : band.split("\\.\\.", 2);
         if (ends.length != 2) {
-            return note == null ? "" : "Static friction from the stops: none can be given: " + note;
+            return note == null ? "" : FitWording.stopBand(Double.NaN, Double.NaN, note);
         }
-        return "Static friction from the stops: Ts between " + Figures.significant(parse(ends[0])) + " and "
-                + Figures.significant(parse(ends[1])) + " N·m" + (note == null ? "" : " (" + note + ")");
+        return FitWording.stopBand(parse(ends[0]), parse(ends[1]), note);
     }
 
     private static double parse(String v) {
@@ -269,12 +271,12 @@ public record StoredFitText(String id, String computedAt, String status, String 
     }
 
     private static String lossName(String term) {
-        return switch (term) {
-            case "viscous" -> "viscous damping";
-            case "coulomb", "stiction" -> "dry (Coulomb) friction";
-            case "drag" -> "air drag";
-            default -> term;
-        };
+        for (FrictionTerm t : FrictionTerm.values()) {
+            if (FitWording.word(t).equals(term)) {
+                return FitWording.lossName(t);
+            }
+        }
+        return term;
     }
 
     private static List<EstimateRow> estimates(FitResult r, boolean inertiaFree) {
@@ -288,18 +290,19 @@ public record StoredFitText(String id, String computedAt, String status, String 
             double sr = e.isSetResamplingError() ? e.getResamplingError() : Double.NaN;
             // The quoted σ follows the physics layer's rule (ParameterEstimate.sigma), not one of ours.
             double sigma = new ParameterEstimate(e.getParameter(), "", e.getValue(), sj, sr, true, false).sigma();
+            double quoted = Double.isFinite(sigma) ? sigma : Double.NaN;
             rows.add(new EstimateRow(inertia ? "inertia, fitted" : TermWords.quantity(e.getParameter()),
-                    e.getParameter(), Figures.value(e.getValue(), sigma), orDash(sigma), orDash(sj), orDash(sr),
-                    TermWords.unit(e.getParameter())));
+                    e.getParameter(), Figures.value(e.getValue(), quoted), orDash(sigma), orDash(sj), orDash(sr),
+                    TermWords.unit(e.getParameter()), Figures.measured(e.getValue(), quoted)));
         }
         if (r.isSetCalculatedInertia()) {
             String unit = Unit.KG_M2.symbol();
-            rows.add(new EstimateRow(inertiaFree ? "J0 calculated" : "J0 held at calculated", "",
-                    Figures.significant(r.getCalculatedInertia()), "", "", "", unit));
+            String calculated = Figures.significant(r.getCalculatedInertia());
+            rows.add(new EstimateRow(inertiaFree ? CALCULATED : HELD, "", calculated, "", "", "", unit, calculated));
             if (inertiaFree && r.isSetFittedInertia()) {
                 double difference = (r.getFittedInertia() - r.getCalculatedInertia()) / r.getCalculatedInertia();
-                rows.add(new EstimateRow("J0 difference", "", (difference >= 0 ? "+" : "")
-                        + Figures.fixed(100 * difference, 2), "", "", "", "%"));
+                String d = (difference >= 0 ? "+" : "") + Figures.fixed(100 * difference, 2);
+                rows.add(new EstimateRow(DIFFERENCE, "", d, "", "", "", "%", d));
             }
         }
         return rows;

@@ -93,26 +93,16 @@ final class FitReportText {
 
     private static void printGoodness(PrintWriter out, FrictionFit fit) {
         Goodness g = fit.goodness();
-        if (g == null) {
-            return;
+        if (g != null) {
+            out.println(FitWording.againstNoise(g.rms(), g.floor(), g.ratio(), g.limit(), g.lag1(), g.passed()));
         }
-        out.printf(Locale.ROOT, "Against the noise: residual rms %s° against a noise floor of %s° (largest ratio of a"
-                + " record %.2f, limit %.2g; residual lag-1 correlation %.2f): %s%n",
-                Figures.significant(Unit.DEGREE.fromSi(g.rms())), Figures.significant(Unit.DEGREE.fromSi(g.floor())),
-                g.ratio(), g.limit(), g.lag1(), g.passed() ? "the model describes the records"
-                        : "the model does NOT describe the records");
     }
 
     private static void printStopBand(PrintWriter out, FrictionFit fit) {
-        if (fit.stopNote() == null) {
-            return;
-        }
-        StictionBand b = fit.stopBand();
-        if (b == null) {
-            out.println("Static friction from the stops: none can be given: " + fit.stopNote());
-        } else {
-            out.printf(Locale.ROOT, "Static friction from the stops: Ts between %s and %s N·m (%s)%n",
-                    Figures.significant(b.lower()), Figures.significant(b.upper()), fit.stopNote());
+        if (fit.stopNote() != null) {
+            StictionBand b = fit.stopBand();
+            out.println(b == null ? FitWording.stopBand(Double.NaN, Double.NaN, fit.stopNote())
+                    : FitWording.stopBand(b.lower(), b.upper(), fit.stopNote()));
         }
     }
 
