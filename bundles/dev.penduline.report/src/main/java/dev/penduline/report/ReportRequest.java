@@ -4,6 +4,9 @@ import java.nio.file.Path;
 import java.time.Instant;
 import java.util.Optional;
 
+import dev.penduline.physics.inertia.ToleranceSpread;
+import dev.penduline.services.MechanismForecast;
+
 /**
  * What a report is asked for.
  *
@@ -18,4 +21,22 @@ import java.util.Optional;
  */
 public record ReportRequest(Path mechanismFile, Optional<String> fitId, Optional<ReportPredictions> predictions,
         String version, Instant time, double defaultGravity, int toleranceDraws, long toleranceSeed) {
+
+    /**
+     * The request {@code penduline report} and the workbench make: the tolerance spread with the
+     * default draws and seed of {@code penduline inertia}.
+     *
+     * @param mechanismFile  the mechanism file
+     * @param fitId          the stored fit, empty for the most recent one
+     * @param predictions    the predictions to include, empty for none
+     * @param version        Penduline's version
+     * @param time           when the report is written
+     * @param defaultGravity the gravity a mechanism file without one is computed with (m/s²)
+     * @return the request
+     */
+    public static ReportRequest of(Path mechanismFile, Optional<String> fitId, Optional<ReportPredictions> predictions,
+            String version, Instant time, double defaultGravity) {
+        return new ReportRequest(mechanismFile, fitId, predictions, version, time, defaultGravity,
+                ToleranceSpread.DEFAULT_DRAWS, MechanismForecast.DEFAULT_SEED);
+    }
 }

@@ -20,7 +20,6 @@ import org.openjdk.jmh.annotations.Setup;
 import org.openjdk.jmh.annotations.State;
 import org.openjdk.jmh.annotations.TearDown;
 
-import dev.penduline.physics.inertia.ToleranceSpread;
 import dev.penduline.report.MechanismReports;
 import dev.penduline.report.ReportDocument;
 import dev.penduline.report.ReportFiles;
@@ -89,8 +88,8 @@ public class ReportBenchmark {
      */
     @Benchmark
     public List<String> reportOfTheSample() throws InputException {
-        ReportDocument doc = MechanismReports.build(new ReportRequest(mechanism, Optional.empty(), Optional.empty(),
-                "benchmark", Instant.parse("2026-12-03T00:00:00Z"), 9.80665, ToleranceSpread.DEFAULT_DRAWS, 20261202L));
+        ReportDocument doc = MechanismReports.build(ReportRequest.of(mechanism, Optional.empty(), Optional.empty(),
+                "benchmark", Instant.parse("2026-12-03T00:00:00Z"), 9.80665));
         Path target = ReportFiles.defaultTarget(mechanism, ReportFiles.Kind.HTML);
         return ReportFiles.write(doc, target, ReportFiles.Kind.HTML, "benchmark", true);
     }

@@ -123,12 +123,15 @@ public final class PredictCommand implements Command {
          * @return the lines
          */
         List<String> lines() {
-            StringWriter text = new StringWriter();
-            PrintWriter out = new PrintWriter(text);
-            ForecastText.write(mechanism, outcome, design, out);
-            whatIf.ifPresent(w -> writeWhatIf(outcome, w, args, out));
-            out.flush();
-            return text.toString().lines().filter(l -> !l.equals(Caution.HAZARD) && !l.equals(Caution.TEXT)).toList();
+            List<String> lines = new ArrayList<>(ForecastText.lines(mechanism, outcome, design));
+            whatIf.ifPresent(w -> {
+                StringWriter text = new StringWriter();
+                PrintWriter out = new PrintWriter(text);
+                writeWhatIf(outcome, w, args, out);
+                out.flush();
+                lines.addAll(text.toString().lines().toList());
+            });
+            return lines;
         }
     }
 

@@ -16,7 +16,6 @@ import dev.penduline.cli.ExitCode;
 import dev.penduline.cli.UsageException;
 import dev.penduline.cli.Version;
 import dev.penduline.model.persistence.MechanismFormat;
-import dev.penduline.physics.inertia.ToleranceSpread;
 import dev.penduline.report.MechanismReports;
 import dev.penduline.report.ReportDocument;
 import dev.penduline.report.ReportFiles;
@@ -24,7 +23,6 @@ import dev.penduline.report.ReportPredictions;
 import dev.penduline.report.ReportRequest;
 import dev.penduline.services.Defaults;
 import dev.penduline.services.InputException;
-import dev.penduline.services.MechanismForecast;
 
 /** {@code penduline report}: one document to hand on, from a mechanism file and its stored fit. */
 public final class ReportCommand implements Command {
@@ -131,9 +129,8 @@ public final class ReportCommand implements Command {
                 PredictCommand.Prediction p = PredictCommand.compute(call, defaults, err);
                 predictions = Optional.of(ReportPredictions.of(String.join(" ", options), p.lines(), p.outcome(), file));
             }
-            ReportDocument doc = MechanismReports.build(new ReportRequest(file, Optional.ofNullable(a.value("fit")),
-                    predictions, version, clock.get(), defaults.gravity(), ToleranceSpread.DEFAULT_DRAWS,
-                    MechanismForecast.DEFAULT_SEED));
+            ReportDocument doc = MechanismReports.build(ReportRequest.of(file, Optional.ofNullable(a.value("fit")),
+                    predictions, version, clock.get(), defaults.gravity()));
             for (String note : ReportFiles.write(doc, target, kind, version, a.flag("force"))) {
                 err.println("note: " + note);
             }

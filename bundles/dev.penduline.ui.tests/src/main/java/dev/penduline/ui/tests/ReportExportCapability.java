@@ -54,13 +54,11 @@ import org.eclipse.ui.PlatformUI;
 import org.eclipse.ui.ide.IDE;
 import org.eclipse.ui.wizards.IWizardDescriptor;
 
-import dev.penduline.physics.inertia.ToleranceSpread;
 import dev.penduline.report.MarkdownReport;
 import dev.penduline.report.MechanismReports;
 import dev.penduline.report.ReportFiles;
 import dev.penduline.report.ReportRequest;
 import dev.penduline.services.Cautions;
-import dev.penduline.services.MechanismForecast;
 import dev.penduline.ui.PendulineViews;
 import dev.penduline.ui.ProjectFolders;
 import dev.penduline.ui.internal.preferences.WorkbenchDefaults;
@@ -159,12 +157,11 @@ final class ReportExportCapability implements Capability {
         assertTrue(count(SVG, text) >= 10, "plots inline: " + count(SVG, text));
         assertFalse(text.equals(new String(earlier, StandardCharsets.UTF_8)), "the earlier report was replaced");
 
-        // What 'penduline report FILE' asks for (ReportCommand: the latest fit, 2000 tolerance draws, the
-        // forecast's default seed; the sample states no gravity, so the defaults' applies), at the same time.
+        // What 'penduline report FILE' asks for (ReportRequest.of: the latest fit, the tolerance spread's default
+        // draws and seed; the sample states no gravity, so the defaults' applies), at the same time.
         Path headless = Files.createTempDirectory("penduline-report-headless").resolve("hatch-report.html");
-        ReportFiles.write(MechanismReports.build(new ReportRequest(file.getLocation().toPath(), Optional.empty(),
-                Optional.empty(), version, WHEN, WorkbenchDefaults.current().gravity(), ToleranceSpread.DEFAULT_DRAWS,
-                MechanismForecast.DEFAULT_SEED)),
+        ReportFiles.write(MechanismReports.build(ReportRequest.of(file.getLocation().toPath(), Optional.empty(),
+                Optional.empty(), version, WHEN, WorkbenchDefaults.current().gravity())),
                 headless, ReportFiles.Kind.HTML, version, false);
         assertEquals(Files.readString(headless), text, "the workbench's report is the command line's");
 

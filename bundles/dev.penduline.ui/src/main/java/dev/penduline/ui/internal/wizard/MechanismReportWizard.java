@@ -31,8 +31,8 @@ import org.eclipse.ui.IWorkbenchWindow;
 import org.eclipse.ui.PlatformUI;
 import org.osgi.framework.Bundle;
 
+import dev.penduline.model.Mechanism;
 import dev.penduline.physics.forecast.ForecastRequest;
-import dev.penduline.physics.inertia.ToleranceSpread;
 import dev.penduline.physics.units.Unit;
 import dev.penduline.report.MarkdownReport;
 import dev.penduline.report.MechanismReports;
@@ -70,9 +70,6 @@ public final class MechanismReportWizard extends Wizard implements IExportWizard
 
     /** When a report is written; tests fix it to compare the file with the command line's. */
     public static Supplier<Instant> clock = Instant::now;
-
-    /** Monte Carlo draws of the parts' tolerances: those of {@code penduline report} (its inertia command's default). */
-    static final int TOLERANCE_DRAWS = ToleranceSpread.DEFAULT_DRAWS;
 
     private static final String BUNDLE = "dev.penduline.ui";
 
@@ -138,8 +135,8 @@ public final class MechanismReportWizard extends Wizard implements IExportWizard
             if (choice.releaseDegree().isPresent()) {
                 predictions = Optional.of(prediction(file, choice.releaseDegree().getAsDouble(), defaults));
             }
-            ReportDocument doc = MechanismReports.build(new ReportRequest(file, Optional.empty(), predictions, version,
-                    clock.get(), defaults.gravity(), TOLERANCE_DRAWS, MechanismForecast.DEFAULT_SEED));
+            ReportDocument doc = MechanismReports.build(ReportRequest.of(file, Optional.empty(), predictions, version,
+                    clock.get(), defaults.gravity()));
             List<String> notes = ReportFiles.write(doc, target, choice.kind(), version, choice.overwrite());
             notes.forEach(n -> ILog.of(MechanismReportWizard.class).info(n));
         } catch (InputException e) {
@@ -161,9 +158,11 @@ public final class MechanismReportWizard extends Wizard implements IExportWizard
      * Its readable lines are predict's own ({@link ForecastText}).
      */
     private static ReportPredictions prediction(Path file, double releaseDeg, Defaults defaults) throws InputException {
-        StoredFit fit = StoredFit.latest(MechanismLoader.readMechanism(file)).orElseThrow(() -> new InputException(file
+        Mechanism m = MechanismLoader.readMechanism(file);
+        StoredFit fit = StoredFit.latest(m).orElseThrow(() -> new InputException(file
                 + " holds no stored fit: a prediction needs one; fit the friction first"));
-        MechanismSource mechanism = new MechanismLoader().withDefaultGravity(defaults.gravity()).load(file);
+        MechanismSource mechanism = new MechanismLoader().withDefaultGravity(defaults.gravity()).loadMechanism(m,
+                file.toString());
         ForecastRequest request = ForecastRequest.fromRest(Unit.DEGREE.toSi(releaseDeg), Unit.DEGREE.toSi(defaults.settleBand()));
         MechanismForecast.Outcome outcome = MechanismForecast.forecast(mechanism, MechanismForecast.FrictionSource.of(fit),
                 request, MechanismForecast.DEFAULT_DRAWS, MechanismForecast.DEFAULT_SEED);
