@@ -5,6 +5,8 @@ import java.util.List;
 import java.util.SplittableRandom;
 import java.util.stream.IntStream;
 
+import org.hipparchus.linear.RealMatrix;
+
 /**
  * Resampling uncertainty by the moving-block bootstrap of residuals (Künsch, "The jackknife
  * and the bootstrap for general stationary observations", Annals of Statistics 17, 1989).
@@ -13,7 +15,9 @@ import java.util.stream.IntStream;
  * filter), so the Jacobian's σ, which assumes independent errors, is optimistic. Here each
  * session's centred residuals are cut into overlapping blocks of length ℓ, blocks drawn at
  * random are laid end to end and added back to the fitted trajectory, and the fit is repeated
- * from the optimum. The spread of the refits is the resampling σ. Block length: the larger of
+ * from the optimum ({@link OptimumRefit}: a Gauss–Newton step on the optimum's Jacobian, then
+ * corrections until the step is a hundredth of a standard error; Levenberg–Marquardt where that
+ * does not settle or a bound is reached). The spread of the refits is the resampling σ. Block length: the larger of
  * n^(1/3) (the order that is optimal for variance estimation, Hall, Horowitz &amp; Jing,
  * Biometrika 82, 1995, from memory) and ten correlation times {@code (1 + ρ1)/(1 − ρ1)} of
  * the residuals, at most n/5. Blocks cut the correlation at their joints, so the variance is
@@ -34,13 +38,14 @@ final class BlockBootstrap {
 
     /** The refitted full vectors of the successful replicates, in replicate order. */
     static List<double[]> run(ParameterLayout layout, double[] full, double stiction, List<StageSamples> data,
-            double[] residuals, double stiffness, FitSettings settings, FitControl control) {
+            double[] residuals, RealMatrix jacobian, double stiffness, FitSettings settings, FitControl control) {
         final int count = settings.resamples();
         final int[] starts = new int[data.size() + 1];
         for (int s = 0; s < data.size(); s++) {
             starts[s + 1] = starts[s] + data.get(s).size();
         }
-        // a refit starts at the optimum: fewer iterations suffice, and the lock stage is not needed
+        final OptimumRefit chord = OptimumRefit.at(layout, full, jacobian, LevenbergStage.sumOfSquares(residuals));
+        // the fallback starts at the optimum: fewer iterations suffice, and the lock stage is not needed
         final FitSettings refit = settings.withLimits(Math.min(settings.maxIterations(), 30),
                 Math.min(settings.maxEvaluations(), 60));
         IntStream replicates = IntStream.range(0, count);
@@ -56,7 +61,14 @@ final class BlockBootstrap {
             for (int s = 0; s < data.size(); s++) {
                 resampled.add(resample(data.get(s), residuals, starts[s], starts[s + 1], random));
             }
-            final StageOutcome o = LevenbergStage.run("resample " + r, layout, full, resampled, stiffness, stiction,
+            final String stage = "resample " + r;
+            if (chord != null) {
+                final double[] quick = chord.refit(resampled, stiffness, stiction, settings, control, stage);
+                if (quick != null) {
+                    return quick;
+                }
+            }
+            final StageOutcome o = LevenbergStage.run(stage, layout, full, resampled, stiffness, stiction,
                     refit, control);
             return o.status() == FitStatus.CONVERGED ? o.full() : null;
         }).toList();

@@ -128,7 +128,7 @@ public final class FrictionIdentifier {
         final StageOutcome o = point.outcome();
         if (settings.resamples() > 0 && o.status() == FitStatus.CONVERGED) {
             replicates = BlockBootstrap.run(point.layout(), o.full(), point.stiction(),
-                    point.data(), o.residuals(), problem.mechanism().gravityStiffness(), settings, control);
+                    point.data(), o.residuals(), o.jacobian(), problem.mechanism().gravityStiffness(), settings, control);
             used = replicates.size();
             resampled = BlockBootstrap.spread(replicates, point.layout().size());
             if (control.cancelled().getAsBoolean()) {

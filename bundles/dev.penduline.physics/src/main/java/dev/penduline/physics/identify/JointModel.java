@@ -31,6 +31,8 @@ final class JointModel implements MultivariateJacobianFunction {
     private final double tolerance;
     private final BooleanSupplier cancel;
     private final List<SensitivitySwing> swings = new ArrayList<>();
+    /** Swings without sensitivities, made on first use, for evaluations without a Jacobian. */
+    private final SensitivitySwing[] plain;
     private final List<int[]> columns = new ArrayList<>();
     private final double[][] tau;
     private final int rows;
@@ -50,6 +52,7 @@ final class JointModel implements MultivariateJacobianFunction {
         this.tolerance = tolerance;
         this.cancel = cancel;
         this.tau = new double[data.size()][];
+        this.plain = new SensitivitySwing[data.size()];
         int n = 0;
         for (int s = 0; s < data.size(); s++) {
             final int size = data.get(s).size();
@@ -113,7 +116,11 @@ final class JointModel implements MultivariateJacobianFunction {
         return new Pair<>(new ArrayRealVector(values, false), new Array2DRowRealMatrix(jacobian, false));
     }
 
-    /** Model values and (when jacobian is not null) the Jacobian rows at a full vector. */
+    /**
+     * Model values and (when jacobian is not null) the Jacobian rows at a full vector. Without a
+     * Jacobian no sensitivities are integrated (the values are the same: the steps follow the
+     * motion alone), and the evaluation is not counted.
+     */
     void evaluate(double[] full, double[] values, double[][] jacobian) {
         final double b = full[ParameterLayout.index(ParameterKind.VISCOUS)];
         final double tc = full[ParameterLayout.index(ParameterKind.COULOMB)];
@@ -129,7 +136,7 @@ final class JointModel implements MultivariateJacobianFunction {
             for (int i = 0; i < t.length; i++) {
                 ts[i] = t[i] - release;
             }
-            final SensitivitySwing swing = swings.get(s);
+            final SensitivitySwing swing = jacobian != null ? swings.get(s) : plainSwing(s);
             swing.configure(stiffness, j, b, tc, stiction, c, tolerance, cancel);
             swing.run(theta0, ts, 0, t.length);
             final int[] cols = columns.get(s);
@@ -167,6 +174,13 @@ final class JointModel implements MultivariateJacobianFunction {
                 }
             }
         }
+    }
+
+    private SensitivitySwing plainSwing(int session) {
+        if (plain[session] == null) {
+            plain[session] = new SensitivitySwing(data.get(session).size(), new ParameterKind[0]);
+        }
+        return plain[session];
     }
 
     int evaluations() {

@@ -31,6 +31,9 @@ import dev.penduline.physics.motion.TurningPoint;
  * the body sticks, ω'⁺ = 0, so S_ω⁺ = 0 while ∂x/∂p freezes. The stick decision itself
  * (|K sin x| ≤ Ts) is discrete and contributes no gradient.
  *
+ * <p>With no parameters the run carries no companion at all: the same motion (the steps follow
+ * the primary state only), for evaluations that need the values and not the Jacobian.
+ *
  * <p>One instance per session and thread; its output buffers are reused between evaluations.
  */
 final class SensitivitySwing {
@@ -86,7 +89,8 @@ final class SensitivitySwing {
      */
     void run(double x0, double[] times, int from, int to) {
         sampler.start(times, from, to);
-        final SwingIntegration integration = new SwingIntegration(equation, tolerance, variational, sampler);
+        final SwingIntegration integration = new SwingIntegration(equation, tolerance, count == 0 ? null : variational,
+                sampler);
         if (cancel != null) {
             integration.observe(cancelCheck);
         }

@@ -5,6 +5,10 @@ import java.util.Arrays;
 import java.util.List;
 import java.util.Set;
 
+import org.hipparchus.linear.RealMatrix;
+import org.hipparchus.linear.RealVector;
+import org.hipparchus.util.Pair;
+
 import dev.penduline.physics.MechanismProperties;
 import dev.penduline.physics.motion.FrictionTorques;
 
@@ -103,6 +107,11 @@ final class StagedFit {
         // with nothing to thin, the "motion" stage would be the full stage itself
         final String firstStage = plan.thinned ? "motion" : "full";
         final List<StageSamples> firstData = plan.thinned ? plan.motion : plan.all;
+        if (starts.size() > 1 && !Double.isNaN(noiseVariance)) {
+            // lowest cost first: a start that reaches the noise floor ends the search, and the
+            // most promising start is the likeliest to; the best start wins whatever the order
+            orderByCost(starts, plan, firstData, settings);
+        }
         StageOutcome best = null;
         for (double[] from : starts) {
             final StageOutcome moving = tally.add(LevenbergStage.run(firstStage, plan.layout, from, firstData,
@@ -124,6 +133,37 @@ final class StagedFit {
             return tally.point(plan.layout, best, plan.motion, plan.start.stiction(), null);
         }
         return refine(plan, best.full(), settings, control, tally);
+    }
+
+    /** Sorts starts by their residual sum of squares over the data (one evaluation each, stable). */
+    private static void orderByCost(List<double[]> starts, Plan plan, List<StageSamples> data, FitSettings settings) {
+        final JointModel model = new JointModel(plan.layout, starts.get(0), data, plan.stiffness,
+                plan.start.stiction(), settings.integrationTolerance(), null);
+        final double[] target = model.target().toArray();
+        final double[] values = new double[target.length];
+        final double[] costs = new double[starts.size()];
+        final Integer[] order = new Integer[starts.size()];
+        for (int k = 0; k < costs.length; k++) {
+            order[k] = k;
+            try {
+                model.evaluate(starts.get(k), values, null);
+                double sum = 0;
+                for (int i = 0; i < target.length; i++) {
+                    sum += (target[i] - values[i]) * (target[i] - values[i]);
+                }
+                costs[k] = Double.isFinite(sum) ? sum : Double.POSITIVE_INFINITY;
+            } catch (RuntimeException e) {
+                // a start the model cannot run is tried last, where the stage reports it
+                costs[k] = Double.POSITIVE_INFINITY;
+            }
+        }
+        Arrays.sort(order, (a, b) -> Double.compare(costs[a], costs[b]));
+        final List<double[]> sorted = new ArrayList<>();
+        for (Integer k : order) {
+            sorted.add(starts.get(k));
+        }
+        starts.clear();
+        starts.addAll(sorted);
     }
 
     /** Samples in a stage's data. */
@@ -187,9 +227,69 @@ final class StagedFit {
     }
 
     private static PointFit refine(Plan plan, double[] from, FitSettings settings, FitControl control, Tally tally) {
-        final StageOutcome outcome = tally.add(LevenbergStage.run("full", plan.layout, from, plan.all,
-                plan.stiffness, plan.start.stiction(), settings, control));
+        final StageOutcome held = heldAtBound(plan, from, settings, control, tally);
+        final StageOutcome outcome = held != null ? held : tally.add(LevenbergStage.run("full", plan.layout, from,
+                plan.all, plan.stiffness, plan.start.stiction(), settings, control));
         return stiction(plan, outcome, settings, control, tally);
+    }
+
+    /**
+     * The full stage when it starts with friction terms on their zero bound: those terms are held
+     * there and the others fitted, and the point is kept if it satisfies the bound's optimality
+     * condition (Karush–Kuhn–Tucker: the cost rises into the feasible side of every held term,
+     * {@code ∂S/∂p ≥ 0}, that is {@code (Jᵀ r)_p ≤ 0} with r the residual and J the model's
+     * Jacobian), checked with one evaluation of the whole set's Jacobian there. Such a point is a
+     * local optimum of the set, the one the projected Levenberg–Marquardt steps would creep
+     * towards one shrinking step at a time; its terms are reported on their bound as any other.
+     *
+     * @return the outcome with the whole set's Jacobian, or null when no term starts on its bound
+     *         or the condition fails (the plain full stage then runs)
+     */
+    private static StageOutcome heldAtBound(Plan plan, double[] from, FitSettings settings, FitControl control,
+            Tally tally) {
+        final boolean[] free = plan.layout.freeMask();
+        boolean any = false;
+        for (ParameterKind k : DISSIPATIVE_KINDS) {
+            final int i = ParameterLayout.index(k);
+            if (free[i] && plan.layout.onBound(i, from[i])) {
+                free[i] = false;
+                any = true;
+            }
+        }
+        if (!any) {
+            return null;
+        }
+        final StageOutcome inner = tally.add(LevenbergStage.run("full", plan.layout.withFree(free), from, plan.all,
+                plan.stiffness, plan.start.stiction(), settings, control));
+        if (inner.status() != FitStatus.CONVERGED) {
+            return null;
+        }
+        final JointModel model = new JointModel(plan.layout, inner.full(), plan.all, plan.stiffness,
+                plan.start.stiction(), settings.integrationTolerance(), control.cancelled());
+        final Pair<RealVector, RealMatrix> value;
+        try {
+            value = model.value(plan.layout.scaled(inner.full()));
+        } catch (FitCancelledException e) {
+            return null;
+        }
+        final double[] residuals = model.target().subtract(value.getFirst()).toArray();
+        final RealMatrix jacobian = value.getSecond();
+        for (ParameterKind k : DISSIPATIVE_KINDS) {
+            final int i = ParameterLayout.index(k);
+            if (plan.layout.isFree(i) && !free[i]) {
+                final double[] column = jacobian.getColumn(plan.layout.column(i));
+                double gradient = 0;
+                for (int r = 0; r < residuals.length; r++) {
+                    gradient += column[r] * residuals[r];
+                }
+                if (!(gradient <= 0)) {
+                    return null;
+                }
+            }
+        }
+        return new StageOutcome(inner.full(), FitStatus.CONVERGED, "converged with a term on its zero bound",
+                inner.iterations(), inner.evaluations() + 1, LevenbergStage.sumOfSquares(residuals), residuals,
+                jacobian);
     }
 
     /** Brackets Ts from the stops and refits with Ts at the band's middle, until the band settles. */
