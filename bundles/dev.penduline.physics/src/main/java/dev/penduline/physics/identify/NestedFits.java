@@ -2,11 +2,12 @@ package dev.penduline.physics.identify;
 
 import java.util.ArrayList;
 import java.util.EnumSet;
-import java.util.LinkedHashMap;
+import java.util.HashMap;
 import java.util.List;
 import java.util.Locale;
 import java.util.Map;
 import java.util.Set;
+import java.util.concurrent.ConcurrentHashMap;
 
 /**
  * Point fits of term sets that know their nested subsets, with the guard that keeps a local
@@ -20,7 +21,9 @@ import java.util.Set;
  * cannot end worse); if even that fails, the set's fit is marked {@link FitStatus#FAILED} as
  * an optimiser failure, never reported as a result.
  *
- * <p>Not thread-safe: one instance serves one comparison.
+ * <p>One instance serves one comparison. {@link #fitAll} may fit the sets of one depth on
+ * several threads: each set needs only the results of its smaller subsets, fitted in an earlier
+ * wave, so the results do not depend on the threads or their order.
  */
 final class NestedFits {
 
@@ -33,8 +36,8 @@ final class NestedFits {
     private final List<Set<FrictionTerm>> family;
     private final boolean cheapSubsets;
     private final double noiseVariance;
-    private final Map<Set<FrictionTerm>, PointFit> points = new LinkedHashMap<>();
-    private final Map<Set<FrictionTerm>, Double> costs = new LinkedHashMap<>();
+    private final Map<Set<FrictionTerm>, PointFit> points = new ConcurrentHashMap<>();
+    private final Map<Set<FrictionTerm>, Double> costs = new ConcurrentHashMap<>();
 
     /**
      * @param family the term sets that may serve as subsets (candidates), smaller ones first
@@ -58,6 +61,40 @@ final class NestedFits {
         this.family = List.copyOf(family);
         this.cheapSubsets = cheapSubsets;
         this.noiseVariance = NoiseFloor.variance(problem.sessions(), floors);
+    }
+
+    /**
+     * Fits every set of the family in waves by depth (a set's depth is one more than its deepest
+     * subset's in the family): the sets of a wave on the common pool's threads when parallel.
+     *
+     * @param parallel whether a wave may run on several threads
+     */
+    void fitAll(boolean parallel) {
+        final Map<Set<FrictionTerm>, Integer> depth = new HashMap<>();
+        int deepest = 0;
+        for (Set<FrictionTerm> set : family) {
+            int d = 0;
+            for (Set<FrictionTerm> smaller : family) {
+                if (set.containsAll(smaller) && !set.equals(smaller) && depth.containsKey(smaller)) {
+                    d = Math.max(d, depth.get(smaller) + 1);
+                }
+            }
+            depth.put(set, d);
+            deepest = Math.max(deepest, d);
+        }
+        for (int level = 0; level <= deepest; level++) {
+            final List<Set<FrictionTerm>> wave = new ArrayList<>();
+            for (Set<FrictionTerm> set : family) {
+                if (depth.get(set) == level) {
+                    wave.add(set);
+                }
+            }
+            if (parallel && wave.size() > 1) {
+                wave.parallelStream().forEach(this::point);
+            } else {
+                wave.forEach(this::point);
+            }
+        }
     }
 
     /**
@@ -87,8 +124,10 @@ final class NestedFits {
         }
         final List<PointFit> subsets = new ArrayList<>();
         final List<Double> subsetCosts = new ArrayList<>();
+        final List<Set<FrictionTerm>> subsetSets = new ArrayList<>();
         for (Set<FrictionTerm> s : family) {
             if (terms.containsAll(s) && !terms.equals(s)) {
+                subsetSets.add(s);
                 subsets.add(point(s, true));
                 subsetCosts.add(costs.get(s));
             }
@@ -100,7 +139,21 @@ final class NestedFits {
             }
         }
         final boolean cheap = cheapSubsets && asSubset;
-        PointFit fit = StagedFit.run(problem, terms, settings, control, seeds, cheap, noiseVariance);
+        PointFit fit = null;
+        Set<FrictionTerm> startedFrom = null;
+        if (!cheapSubsets && terms.contains(FrictionTerm.STICTION)) {
+            // (with cheap subsets the base is only a motion-stage seed, not a full-stage optimum)
+            final Set<FrictionTerm> without = EnumSet.copyOf(terms);
+            without.remove(FrictionTerm.STICTION);
+            final PointFit base = subsets.isEmpty() ? null : points.get(without);
+            if (base != null && base.band() == null && !Double.isNaN(costs.getOrDefault(without, Double.NaN))) {
+                fit = StagedFit.withStiction(problem, terms, settings, control, base.outcome());
+                startedFrom = fit == null ? null : without;
+            }
+        }
+        if (fit == null) {
+            fit = StagedFit.run(problem, terms, settings, control, seeds, cheap, noiseVariance);
+        }
         final EnumSet<FrictionTerm> key = EnumSet.copyOf(terms);
         if (cheap) {
             points.put(key, fit);
@@ -114,7 +167,8 @@ final class NestedFits {
             if (fit.outcome().status() == FitStatus.CANCELLED) {
                 break;
             }
-            if (violates(fit, subsetCosts.get(k))) {
+            // a set started from this subset's optimum has had the refit the guard would run
+            if (violates(fit, subsetCosts.get(k)) && !subsetSets.get(k).equals(startedFrom)) {
                 final PointFit again = StagedFit.refine(problem, terms, settings, control,
                         subsets.get(k).outcome().full());
                 if (StagedFit.better(again.outcome(), fit.outcome())) {

@@ -35,6 +35,16 @@ final class StagedFit {
     /** Reference damping ratio for the friction scales (ζ = 1 %). */
     private static final double REFERENCE_DAMPING = 0.01;
     private static final int STICTION_ROUNDS = 3;
+    /**
+     * Limits of one stiction round. A round starts at the optimum with only Ts moved: a term set
+     * that describes its records settles in a few evaluations (1 to 3 per round seen on the
+     * sample hatch's richer sets); one that does not thrashes against the stop decisions (about
+     * 20 evaluations of every sample per round were seen for its coulomb+stiction, which ended
+     * worse than coulomb alone and failed the nested guard anyway) and ends at the limit,
+     * reported as not converged, which also keeps it from being selected.
+     */
+    private static final int STICTION_ITERATIONS = 6;
+    private static final int STICTION_EVALUATIONS = 10;
     /** Decimation of the motion stage: enough samples per period to resolve every term. */
     private static final int MOTION_SAMPLES_PER_PERIOD = 100;
 
@@ -164,6 +174,26 @@ final class StagedFit {
         }
         starts.clear();
         starts.addAll(sorted);
+    }
+
+    /**
+     * The staged fit of a set with stiction from the point fit of the same set without it: the
+     * stages before the stiction rounds do not depend on Ts when the set starts with Ts "as
+     * Coulomb" (0), and the set without stiction has run them from every start this set would
+     * try but its own optimum; so the rounds start from that optimum.
+     *
+     * @param base the converged full-stage outcome of {@code terms} without stiction
+     * @return the point fit, or null when this set starts with its own Ts (the plain staged fit
+     *         is needed)
+     */
+    static PointFit withStiction(FrictionProblem problem, Set<FrictionTerm> terms, FitSettings settings,
+            FitControl control, StageOutcome base) {
+        final Plan plan = new Plan(problem, terms);
+        if (!terms.contains(FrictionTerm.STICTION) || plan.start.stiction() != 0
+                || base.status() != FitStatus.CONVERGED) {
+            return null;
+        }
+        return stiction(plan, base, settings, control, new Tally());
     }
 
     /** Samples in a stage's data. */
@@ -299,6 +329,8 @@ final class StagedFit {
         double stiction = plan.start.stiction();
         StictionBand band = null;
         if (plan.terms.contains(FrictionTerm.STICTION)) {
+            final FitSettings limited = settings.withLimits(Math.min(settings.maxIterations(), STICTION_ITERATIONS),
+                    Math.min(settings.maxEvaluations(), STICTION_EVALUATIONS));
             for (int round = 0; round < STICTION_ROUNDS && outcome.status() != FitStatus.CANCELLED; round++) {
                 band = StictionBracket.of(plan.level, outcome.full(), plan.all, settings.integrationTolerance());
                 final double next = band.middle();
@@ -307,7 +339,7 @@ final class StagedFit {
                 }
                 stiction = next;
                 outcome = tally.add(LevenbergStage.run("stiction", plan.layout, outcome.full(), plan.all,
-                        plan.stiffness, stiction, settings, control));
+                        plan.stiffness, stiction, limited, control));
             }
         }
         return tally.point(plan.layout, outcome, plan.all, stiction, band);

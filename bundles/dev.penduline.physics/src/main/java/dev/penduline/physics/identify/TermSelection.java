@@ -58,6 +58,7 @@ final class TermSelection {
         final FitSettings quick = settings.withResampling(0, settings.seed(), settings.parallel());
         final List<NoiseFloor.Estimate> floors = NoiseFloor.of(problem.sessions());
         final NestedFits nested = new NestedFits(problem, quick, control, sets, floors);
+        nested.fitAll(settings.parallel());
         final List<FrictionFit> fits = new ArrayList<>();
         for (Set<FrictionTerm> terms : sets) {
             fits.add(FitReport.build(problem, terms, nested.point(terms), null, 0, quick));

@@ -70,7 +70,10 @@
  * Two estimates, both reported: from the Jacobian at the optimum, in the sandwich form
  * {@code (JᵀJ)⁻¹ M (JᵀJ)⁻¹} with M from batch means of the score (White 1980; Newey &amp; West
  * 1987), which allows for correlated residuals and for the unequal variance of rounded
- * readings; and the spread of block-bootstrap refits (Künsch 1989). The bootstrap σ is quoted
+ * readings; and the spread of block-bootstrap refits (Künsch 1989), each started at the optimum
+ * and stopped when it has arrived ({@code OptimumRefit}: the Gauss–Newton step on the optimum's
+ * Jacobian, corrected by values-only model runs to a hundredth of a standard error; a refit that
+ * reaches a bound or does not settle goes through Levenberg–Marquardt). The bootstrap σ is quoted
  * when it exceeds the Jacobian's by more than its own sampling error
  * ({@link dev.penduline.physics.identify.ParameterEstimate#sigma()}). The coverage of the quoted σ
  * is tested in both directions on white, AR(1) and quantised records. Correlations above 0.95
@@ -78,7 +81,8 @@
  *
  * <h2>Trust</h2>
  * Nested term sets seed each other and a guard refuses a richer set that fits worse than one it
- * contains ({@code NestedFits}); the residuals are held against each record's model-free noise
+ * contains ({@code NestedFits}; the sets of one nesting depth are fitted side by side on the
+ * machine's cores, with the same result as one after the other); the residuals are held against each record's model-free noise
  * floor ({@link dev.penduline.physics.identify.NoiseFloor}, {@link dev.penduline.physics.identify.Goodness}),
  * and above it the status is {@link dev.penduline.physics.identify.FitStatus#MISFIT}; the verdict
  * names a dominant loss only with a clear lead ({@link dev.penduline.physics.identify.FrictionVerdict});

@@ -80,6 +80,22 @@ class ControlTest {
     }
 
     @Test
+    void comparisonIsTheSameWhateverTheThreads() {
+        // the candidate sets of one depth are fitted side by side; each needs only its smaller
+        // subsets' results, so a parallel and a sequential comparison agree to the last bit
+        final FitSettings sequential = FitSettings.defaults().withResampling(0, 1, false);
+        final ModelComparison one = new FrictionIdentifier(sequential).compare(problem());
+        final ModelComparison two = new FrictionIdentifier(sequential.withResampling(0, 1, true)).compare(problem());
+        assertEquals(one.selected(), two.selected());
+        assertEquals(one.candidates().size(), two.candidates().size());
+        for (int i = 0; i < one.candidates().size(); i++) {
+            assertEquals(one.candidates().get(i).rss(), two.candidates().get(i).rss(),
+                    0, one.candidates().get(i).toString());
+        }
+        assertTrue(one.candidates().size() >= 5);
+    }
+
+    @Test
     void badInputIsRefusedNamingTheField() {
         final double[] t = {0, 1, 2, 2, 4, 5, 6, 7, 8, 9};
         final double[] y = new double[10];
