@@ -1,0 +1,59 @@
+package dev.penduline.cli.commands;
+
+import java.io.PrintWriter;
+import java.util.Locale;
+
+import dev.penduline.services.survey.SurveyRun;
+
+/**
+ * The survey's progress on the error stream: on a terminal one line redrawn in place (units
+ * done of all, the rate, the time left); otherwise nothing until one line at the end.
+ */
+final class ProgressBar implements SurveyRun.Progress {
+
+    private static final int WIDTH = 30;
+    private static final long REDRAW_NANOS = 100_000_000L;
+
+    private final PrintWriter err;
+    private final boolean terminal;
+    private final long start = System.nanoTime();
+    private long drawn;
+
+    ProgressBar(PrintWriter err, boolean terminal) {
+        this.err = err;
+        this.terminal = terminal;
+    }
+
+    @Override
+    public void unitDone(int done, int total) {
+        if (!terminal) {
+            return;
+        }
+        long now = System.nanoTime();
+        if (done < total && now - drawn < REDRAW_NANOS) {
+            return;
+        }
+        drawn = now;
+        double seconds = (now - start) / 1e9;
+        double rate = done / Math.max(seconds, 1e-9);
+        int filled = total == 0 ? WIDTH : (int) ((long) WIDTH * done / total);
+        String left = done == 0 ? "?" : String.format(Locale.ROOT, "%.0f s", (total - done) / rate);
+        err.print(String.format(Locale.ROOT, "\r[%s%s] %d/%d units  %.2f units/s  %s left   ", "#".repeat(filled),
+                "-".repeat(WIDTH - filled), done, total, rate, left));
+        err.flush();
+    }
+
+    /**
+     * Ends the bar (a line end on a terminal), then says how long the survey took.
+     *
+     * @param r what was done
+     */
+    void finish(SurveyRun.Result r) {
+        double seconds = (System.nanoTime() - start) / 1e9;
+        if (terminal) {
+            err.println();
+        }
+        err.println(String.format(Locale.ROOT, "survey: %d units in %.1f s (%d fitted, %d reused, %d failed)", r.rows().size(),
+                seconds, r.fitted(), r.skipped(), r.failed()));
+    }
+}
