@@ -297,7 +297,21 @@ public final class Plots {
         set.markers("beyond limits", x, beyond);
         NumberAxis units = PlotStyle.numberAxis(UNIT_ORDER);
         units.setStandardTickUnits(NumberAxis.createIntegerTickUnits(Locale.ROOT));
-        XYPlot plot = set.plot(units, PlotStyle.numberAxis(yLabel));
+        NumberAxis axis = PlotStyle.numberAxis(yLabel);
+        // the limits stay in view even where every unit lies well inside them
+        double lo = Arrays.stream(new double[] {lcl, center, ucl}).filter(Double::isFinite).min().orElse(Double.NaN);
+        double hi = Arrays.stream(new double[] {lcl, center, ucl}).filter(Double::isFinite).max().orElse(Double.NaN);
+        for (double v : values) {
+            if (Double.isFinite(v)) {
+                lo = Double.isNaN(lo) ? v : Math.min(lo, v);
+                hi = Double.isNaN(hi) ? v : Math.max(hi, v);
+            }
+        }
+        if (hi > lo) {
+            double margin = 0.08 * (hi - lo);
+            axis.setRange(lo - margin, hi + margin);
+        }
+        XYPlot plot = set.plot(units, axis);
         limit(plot, center, "center", PlotStyle.stroke(1f));
         limit(plot, ucl, "UCL", PlotStyle.stroke(1f, 6f, 3f));
         limit(plot, lcl, "LCL", PlotStyle.stroke(1f, 6f, 3f));
@@ -322,19 +336,11 @@ public final class Plots {
         double[] v = Arrays.stream(values).filter(Double::isFinite).toArray();
         XYIntervalSeriesCollection data = new XYIntervalSeriesCollection();
         if (v.length > 0) {
-            double lo = Arrays.stream(v).min().getAsDouble();
-            double hi = Arrays.stream(v).max().getAsDouble();
-            int bins = hi > lo ? Math.min(30, (int) Math.ceil(Math.log(v.length) / Math.log(2)) + 1) : 1;
-            double width = hi > lo ? (hi - lo) / bins : Math.max(Math.abs(lo) * 0.05, 1e-12);
-            double start = hi > lo ? lo : lo - width / 2;
-            int[] counts = new int[bins];
-            for (double d : v) {
-                counts[Math.min(bins - 1, (int) Math.floor((d - start) / width))]++;
-            }
+            Bins bins = bins(v);
             XYIntervalSeries s = new XYIntervalSeries("units");
-            for (int b = 0; b < bins; b++) {
-                double a = start + b * width;
-                s.add(a + width / 2, a, a + width, counts[b], 0, counts[b]);
+            for (int b = 0; b < bins.counts().length; b++) {
+                double a = bins.start() + b * bins.width();
+                s.add(a + bins.width() / 2, a, a + bins.width(), bins.counts()[b], 0, bins.counts()[b]);
             }
             data.addSeries(s);
         }
@@ -347,6 +353,36 @@ public final class Plots {
         int series = v.length > 0 ? 1 : 0;
         return picture(id, title, PlotStyle.chart(title, plot, false), List.of(), series, List.of(xLabel, COUNT),
                 PlotStyle.WIDTH, PlotStyle.HEIGHT);
+    }
+
+    /**
+     * A histogram's bins.
+     *
+     * @param start  the first bin's lower edge
+     * @param width  each bin's width
+     * @param counts how many values each bin holds (the last bin holds its upper edge too)
+     */
+    record Bins(double start, double width, int[] counts) {
+    }
+
+    /**
+     * Equal-width bins from the smallest to the largest value, ⌈log₂ n⌉ + 1 of them (Sturges),
+     * at most 30; one bin of ±2.5 % about the value when all values are equal.
+     *
+     * @param v finite values, at least one
+     * @return the bins
+     */
+    static Bins bins(double[] v) {
+        double lo = Arrays.stream(v).min().getAsDouble();
+        double hi = Arrays.stream(v).max().getAsDouble();
+        int n = hi > lo ? Math.min(30, (int) Math.ceil(Math.log(v.length) / Math.log(2)) + 1) : 1;
+        double width = hi > lo ? (hi - lo) / n : Math.max(Math.abs(lo) * 0.05, 1e-12);
+        double start = hi > lo ? lo : lo - width / 2;
+        int[] counts = new int[n];
+        for (double d : v) {
+            counts[Math.min(n - 1, (int) Math.floor((d - start) / width))]++;
+        }
+        return new Bins(start, width, counts);
     }
 
     /** A labelled horizontal line at {@code y}; none when y is not finite. */
