@@ -147,6 +147,7 @@ public final class SurveyCommand implements Command {
                     fingerprint);
             SurveyRun.Result result;
             ProgressBar bar = new ProgressBar(err, System.console() != null);
+            bar.unitDone(0, grouping.units().size());
             try (SurveyJournal journal = SurveyJournal.open(outDir)) {
                 result = SurveyRun.run(grouping.units(), run, journal, jobs, bar);
             } catch (IOException e) {
@@ -252,14 +253,15 @@ public final class SurveyCommand implements Command {
 
     private static void print(PrintWriter out, String mechanism, SurveyRun.Result result, List<SurveyFailure> failed,
             SurveySummary summary, int units, Path outDir) {
-        out.printf(Locale.ROOT, "Survey against %s: %d units fitted (%d of them reused from an earlier run), %d records or"
-                + " units failed%n", mechanism, units, result.skipped(), failed.size());
+        out.printf(Locale.ROOT, "Survey against %s: %d units fitted (%d of them reused from an earlier run), failed: %d%n",
+                mechanism, units, result.skipped(), failed.size());
         for (Map.Entry<String, PopulationStatistics> e : summary.terms().entrySet()) {
             PopulationStatistics s = e.getValue();
-            out.printf(Locale.ROOT, "  %-14s n %d  median %s  MAD %s  p05 %s  p95 %s  center %s  LCL %s  UCL %s%n",
+            // the limits as center ± half-width: a narrow spread reads better than two equal-looking limits
+            out.printf(Locale.ROOT, "  %-14s n %d  median %s  MAD %s  p05 %s  p95 %s  center %s, limits ± %s%n",
                     e.getKey(), s.count(), Figures.significant(s.median()), Figures.significant(s.mad()),
                     Figures.significant(s.p05()), Figures.significant(s.p95()), Figures.significant(s.center()),
-                    Figures.significant(s.lcl()), Figures.significant(s.ucl()));
+                    Figures.significant(s.ucl() - s.center()));
         }
         for (SurveySummary.Flagged f : summary.outliers()) {
             out.printf(Locale.ROOT, "outlier: %s %s %s (modified z-score %s)%n", f.unit(), f.term(),

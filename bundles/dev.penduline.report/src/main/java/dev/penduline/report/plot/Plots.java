@@ -1,6 +1,8 @@
 package dev.penduline.report.plot;
 
 import java.awt.Stroke;
+import java.text.DecimalFormat;
+import java.text.DecimalFormatSymbols;
 import java.util.Arrays;
 import java.util.HashSet;
 import java.util.List;
@@ -310,6 +312,7 @@ public final class Plots {
         if (hi > lo) {
             double margin = 0.08 * (hi - lo);
             axis.setRange(lo - margin, hi + margin);
+            enoughDecimals(axis, hi - lo);
         }
         XYPlot plot = set.plot(units, axis);
         limit(plot, center, "center", PlotStyle.stroke(1f));
@@ -348,7 +351,12 @@ public final class Plots {
         count.setStandardTickUnits(NumberAxis.createIntegerTickUnits(Locale.ROOT));
         count.setAutoRangeIncludesZero(true);
         count.setUpperMargin(0.1);
-        XYPlot plot = new XYPlot(data, PlotStyle.numberAxis(xLabel), count, new HistogramRenderer());
+        NumberAxis axis = PlotStyle.numberAxis(xLabel);
+        if (v.length > 0) {
+            Bins bins = bins(v);
+            enoughDecimals(axis, bins.width() * bins.counts().length);
+        }
+        XYPlot plot = new XYPlot(data, axis, count, new HistogramRenderer());
         PlotStyle.xyPlot(plot);
         int series = v.length > 0 ? 1 : 0;
         return picture(id, title, PlotStyle.chart(title, plot, false), List.of(), series, List.of(xLabel, COUNT),
@@ -383,6 +391,18 @@ public final class Plots {
             counts[Math.min(n - 1, (int) Math.floor((d - start) / width))]++;
         }
         return new Bins(start, width, counts);
+    }
+
+    /**
+     * Tick labels with enough decimals to tell the ticks of a narrow range apart (the standard
+     * tick units write at most three): one more than the tick spacing's, about a tenth of the range,
+     * needs; trailing zeros left out, a point as the decimal separator.
+     */
+    private static void enoughDecimals(NumberAxis axis, double range) {
+        int decimals = Math.max(0, Math.min(12, (int) Math.ceil(-Math.log10(range / 10)) + 1));
+        DecimalFormat f = new DecimalFormat("0.#", DecimalFormatSymbols.getInstance(Locale.ROOT));
+        f.setMaximumFractionDigits(decimals);
+        axis.setNumberFormatOverride(f);
     }
 
     /** A labelled horizontal line at {@code y}; none when y is not finite. */
