@@ -139,6 +139,10 @@ public final class SurveyCommand implements Command {
         MechanismSource mechanism = MechanismOptions.resolve(a, mechanismFile, defaults);
         try {
             SurveyGrouping.Grouping grouping = grouping(a);
+            if (grouping.units().isEmpty() && grouping.unassigned().isEmpty()) {
+                throw new UsageException("no records to survey: " + (a.has("manifest") ? a.value("manifest") + " lists none"
+                        : "no *.csv file in " + String.join(", ", a.positional())));
+            }
             Path outDir = outDir(a);
             refuseRecordsFolder(outDir, grouping);
             String fingerprint = SurveyFingerprint.of(sha256(Path.of(mechanismFile)), terms, a.flag("fix-inertia"), settings,

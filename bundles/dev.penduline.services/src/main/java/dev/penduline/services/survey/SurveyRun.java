@@ -84,6 +84,23 @@ public final class SurveyRun {
         }
     }
 
+    /** The fit of one unit's prepared records ({@link FrictionIdentification#identify}; a test's stand-in). */
+    @FunctionalInterface
+    interface Fitter {
+        /**
+         * Fits a unit.
+         *
+         * @param s        the survey's settings
+         * @param sessions the unit's prepared records
+         * @return the outcome
+         * @throws InputException when the records cannot make a problem
+         */
+        Outcome fit(Settings s, List<SessionInput> sessions) throws InputException;
+    }
+
+    private static final Fitter IDENTIFY = (s, sessions) -> FrictionIdentification.identify(s.mechanism(), sessions,
+            s.terms(), s.fixInertia(), s.fit(), FitControl.none());
+
     /** One unit's outcome: its row and whether it was reused. */
     private record Done(SurveyRow row, boolean reused) {
     }
@@ -104,6 +121,23 @@ public final class SurveyRun {
      */
     public static Result run(List<SurveyUnit> units, Settings settings, SurveyJournal journal, int jobs, Progress progress)
             throws InputException {
+        return run(units, settings, journal, jobs, progress, IDENTIFY);
+    }
+
+    /**
+     * Fits the units with the given fitter (a test's, to see one unit fail as a bug would).
+     *
+     * @param units    the units, in order
+     * @param settings how
+     * @param journal  where each row goes
+     * @param jobs     how many at once
+     * @param progress told after each unit
+     * @param fitter   fits one unit's prepared records
+     * @return the rows, in unit order
+     * @throws InputException when the journal cannot be written
+     */
+    static Result run(List<SurveyUnit> units, Settings settings, SurveyJournal journal, int jobs, Progress progress,
+            Fitter fitter) throws InputException {
         FitSettings fit = settings.fit().withResampling(settings.fit().resamples(), settings.fit().seed(), false);
         Settings single = new Settings(settings.mechanism(), settings.options(), settings.terms(), settings.fixInertia(), fit,
                 settings.fingerprint());
@@ -118,7 +152,7 @@ public final class SurveyRun {
             List<Future<Done>> futures = new ArrayList<>();
             for (SurveyUnit u : units) {
                 futures.add(pool.submit(() -> {
-                    Done d = unit(u, single, journal);
+                    Done d = unit(u, single, journal, fitter);
                     journal.append(single.fingerprint(), d.row());
                     synchronized (progress) {
                         progress.unitDone(done.incrementAndGet(), units.size());
@@ -155,7 +189,7 @@ public final class SurveyRun {
         }
     }
 
-    private static Done unit(SurveyUnit u, Settings s, SurveyJournal journal) {
+    private static Done unit(SurveyUnit u, Settings s, SurveyJournal journal, Fitter fitter) {
         List<String> hashes = new ArrayList<>();
         for (Path p : u.files()) {
             try {
@@ -177,11 +211,10 @@ public final class SurveyRun {
                 sessions.add(FrictionIdentification.prepare(p, s.options(), s.mechanism()));
             }
             current = u.files().stream().map(Path::toString).collect(Collectors.joining("; "));
-            Outcome o = FrictionIdentification.identify(s.mechanism(), sessions, s.terms(), s.fixInertia(), s.fit(),
-                    FitControl.none());
+            Outcome o = fitter.fit(s, sessions);
             FrictionFit fit = o.fit();
             if (!fit.converged()) {
-                return new Done(SurveyRow.failed(u, hashes, current, "not fitted: the fit ended "
+                return new Done(SurveyRow.failed(u, hashes, current, current + ": not fitted, the fit ended "
                         + fit.status().name().toLowerCase(Locale.ROOT).replace('_', ' ') + ": " + fit.message()), false);
             }
             return new Done(row(u, hashes, o), false);
