@@ -107,6 +107,7 @@ class SurveyCommandTest {
             }
         }
         Path o = dir.resolve("out");
+        byte[] design = Files.readAllBytes(mechanism);
         assertEquals(ExitCode.OK, survey(records.toString(), "--out", o.toString()), err.toString());
         Object first = json(o.resolve("summary.json"));
         assertEquals(4, JsonTree.number(first, "units"));
@@ -141,6 +142,7 @@ class SurveyCommandTest {
         try (var s = Files.list(records)) {
             assertEquals(4, s.count(), "nothing was written into the records' folder");
         }
+        assertArrayEquals(design, Files.readAllBytes(mechanism), "the mechanism file is only read");
     }
 
     @Test

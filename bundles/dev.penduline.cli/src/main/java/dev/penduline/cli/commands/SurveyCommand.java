@@ -39,7 +39,6 @@ import dev.penduline.services.survey.SurveyJournal;
 import dev.penduline.services.survey.SurveyRow;
 import dev.penduline.services.survey.SurveyRun;
 import dev.penduline.services.survey.SurveySummary;
-import dev.penduline.services.survey.SurveyUnit;
 
 /** {@code penduline survey}: fit every record of a production line against one design, and its population's statistics. */
 public final class SurveyCommand implements Command {
@@ -220,12 +219,13 @@ public final class SurveyCommand implements Command {
             throw new InputException(outDir + ": is not a folder; --out names the survey's output folder");
         }
         Path out = outDir.toAbsolutePath().normalize();
-        for (SurveyUnit u : g.units()) {
-            for (Path p : u.files()) {
-                if (out.equals(p.toAbsolutePath().normalize().getParent())) {
-                    throw new InputException(outDir + ": holds the survey's records (" + p.getFileName() + "); the output "
-                            + "goes to a folder of its own: choose another --out");
-                }
+        List<Path> records = new ArrayList<>();
+        g.units().forEach(u -> records.addAll(u.files()));
+        g.unassigned().forEach(f -> records.add(Path.of(f.file())));
+        for (Path p : records) {
+            if (out.equals(p.toAbsolutePath().normalize().getParent())) {
+                throw new InputException(outDir + ": holds the survey's records (" + p.getFileName() + "); the output "
+                        + "goes to a folder of its own: choose another --out");
             }
         }
     }
