@@ -233,6 +233,11 @@ class SurveyCommandTest {
         for (String f : List.of("units.json", "units.csv", "summary.json", "survey.html")) {
             assertArrayEquals(Files.readAllBytes(one.resolve(f)), Files.readAllBytes(two.resolve(f)), f);
         }
+        // the summary is of the rows: the median of four viscous values is the mean of the middle two
+        double[] b = rowsByKey(one).values().stream().mapToDouble(u -> JsonTree.number(u, "estimates", "viscous", "value"))
+                .sorted().toArray();
+        assertEquals((b[1] + b[2]) / 2, JsonTree.number(json(one.resolve("summary.json")), "terms", "viscous", "median"),
+                1e-15);
         String html = Files.readString(one.resolve("survey.html"));
         assertTrue(html.contains("data-series='within limits'") && html.contains("data-series='units'"), "charts drawn");
         assertTrue(html.contains("not acceptance criteria") || html.contains("no acceptance criteria"), "the caution");
