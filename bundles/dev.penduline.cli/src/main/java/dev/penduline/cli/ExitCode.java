@@ -7,7 +7,9 @@ public enum ExitCode {
     /** A computation failed: it ran but could not produce a trustworthy result. */
     COMPUTATION_FAILED(1),
     /** The command line or an input file is wrong; the message says where. */
-    USAGE_OR_INPUT(2);
+    USAGE_OR_INPUT(2),
+    /** Some items of a batch failed ({@code survey}: a record or unit), the others were done; the output lists each failure. */
+    PARTIAL_FAILURE(3);
 
     private final int code;
 
@@ -18,7 +20,7 @@ public enum ExitCode {
     /**
      * The numeric code handed to the operating system.
      *
-     * @return 0, 1 or 2
+     * @return 0, 1, 2 or 3
      */
     public int code() {
         return code;

@@ -90,6 +90,9 @@ public final class OptionRules {
             Map.entry("seed", new Rule(-9.007199254740992e15, false, 9.007199254740992e15, false, true, "", "")),
             Map.entry("resamples", new Rule(0, false, 1_000, false, true, "", "0 turns the resampling off; above 200 adds little")),
             Map.entry("max-iterations", new Rule(1, false, 10_000, false, true, "", "")),
+            Map.entry("count", new Rule(1, false, 100_000, false, true, "", "how many records to make")),
+            Map.entry("spread", closed(0, 1000, "%", "the spread of the drawn friction about the values given")),
+            Map.entry("jobs", new Rule(1, false, 1024, false, true, "", "how many units are fitted at once")),
             Map.entry("verdict-margin", new Rule(0, false, 100, true, false, "percentage points", "")));
 
     private OptionRules() {

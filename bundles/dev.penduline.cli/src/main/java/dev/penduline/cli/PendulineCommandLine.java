@@ -16,6 +16,7 @@ import dev.penduline.cli.commands.PredictCommand;
 import dev.penduline.cli.commands.ReportCommand;
 import dev.penduline.cli.commands.InertiaCommand;
 import dev.penduline.cli.commands.SimulateCommand;
+import dev.penduline.cli.commands.SurveyCommand;
 import dev.penduline.cli.internal.FaultReport;
 import dev.penduline.cli.internal.PrintableWriter;
 import dev.penduline.services.Defaults;
@@ -40,7 +41,7 @@ public final class PendulineCommandLine {
     public PendulineCommandLine() {
         this(List.of(new FitCommand(), new InertiaCommand(), new SimulateCommand(), new PredictCommand(), new AnalyzeCommand(),
                 new ImportPartsCommand(),
-                new AddSessionCommand(), new DemoRecordCommand(), new ReportCommand()));
+                new AddSessionCommand(), new DemoRecordCommand(), new ReportCommand(), new SurveyCommand()));
     }
 
     /**
@@ -173,7 +174,7 @@ public final class PendulineCommandLine {
         out.println("                     (the workbench's preferences); options given on the line still win.");
         out.println("                     Without it that file is never read.");
         out.println();
-        out.println("Exit codes: 0 ok, 1 a computation failed, 2 a usage or input error.");
+        out.println("Exit codes: 0 ok, 1 a computation failed, 2 a usage or input error, 3 some of a survey's records failed.");
     }
 
     private String commandNames() {

@@ -152,7 +152,7 @@ public final class FitCommand implements Command {
         return outcome.fit().status() == FitStatus.CONVERGED ? ExitCode.OK : ExitCode.COMPUTATION_FAILED;
     }
 
-    private static Optional<Set<FrictionTerm>> terms(String value) throws UsageException {
+    static Optional<Set<FrictionTerm>> terms(String value) throws UsageException {
         if (value == null || value.equalsIgnoreCase("auto")) {
             return Optional.empty();
         }

@@ -1,8 +1,12 @@
 package dev.penduline.report.plot;
 
 import java.awt.Stroke;
+import java.text.DecimalFormat;
+import java.text.DecimalFormatSymbols;
+import java.util.Arrays;
 import java.util.HashSet;
 import java.util.List;
+import java.util.Locale;
 import java.util.Objects;
 import java.util.Set;
 
@@ -20,6 +24,8 @@ import org.jfree.chart.ui.RectangleInsets;
 import org.jfree.chart.ui.TextAnchor;
 import org.jfree.data.category.DefaultCategoryDataset;
 import org.jfree.data.statistics.DefaultStatisticalCategoryDataset;
+import org.jfree.data.xy.XYIntervalSeries;
+import org.jfree.data.xy.XYIntervalSeriesCollection;
 
 /**
  * The report's plots, drawn from plain arrays in the units of their axes (the caller converts):
@@ -50,6 +56,8 @@ public final class Plots {
     private static final String AMPLITUDE = "amplitude (°)";
     private static final String PERIOD = "period (s)";
     private static final String SHARE_OF_J0 = "share of J0 (%)";
+    private static final String UNIT_ORDER = "unit (in key order)";
+    private static final String COUNT = "units (count)";
     private static final String SHARE_OF_ENERGY = "share of the energy dissipated (%)";
     /** Room a bar of the part shares takes, pixels, once the parts no longer fit the plain height. */
     private static final int PIXELS_A_PART = 20;
@@ -254,6 +262,169 @@ public final class Plots {
         return xyPicture(id, title, plot, set, List.of(TIME, yLabel));
     }
 
+    /**
+     * Individuals control chart: each unit's value against its place in the units' order (x
+     * "unit (in key order)"), open markers within the limits, filled-looking second markers for
+     * the units beyond them, joined in order by a light grey line; horizontal lines at the center
+     * (solid, labelled "center") and at the UCL and LCL (dashed, labelled); y as given. NaN limits
+     * draw no line. 720 × 300 px.
+     *
+     * @param id     the picture's id
+     * @param title  the title
+     * @param yLabel the vertical axis' label, with its unit
+     * @param values the values, in the units' order
+     * @param center the center line
+     * @param lcl    the lower control limit
+     * @param ucl    the upper control limit
+     * @return the picture (series: "in order", "within limits", and "beyond limits" when any is)
+     * @throws IllegalArgumentException when the id is not valid
+     */
+    public static SvgPicture controlChart(String id, String title, String yLabel, double[] values, double center, double lcl,
+            double ucl) {
+        SvgCanvas.checkId(id);
+        Objects.requireNonNull(yLabel, "yLabel");
+        int n = values.length;
+        double[] x = new double[n];
+        double[] within = new double[n];
+        double[] beyond = new double[n];
+        for (int i = 0; i < n; i++) {
+            x[i] = i + 1;
+            boolean out = values[i] > ucl || values[i] < lcl;
+            within[i] = out ? Double.NaN : values[i];
+            beyond[i] = out ? values[i] : Double.NaN;
+        }
+        SeriesSet set = new SeriesSet();
+        set.line("in order", x, values, PlotStyle.LIGHT_GREY, PlotStyle.dataColumns(PlotStyle.WIDTH));
+        set.markers("within limits", x, within);
+        set.markers("beyond limits", x, beyond);
+        NumberAxis units = PlotStyle.numberAxis(UNIT_ORDER);
+        units.setStandardTickUnits(NumberAxis.createIntegerTickUnits(Locale.ROOT));
+        NumberAxis axis = PlotStyle.numberAxis(yLabel);
+        // the limits stay in view even where every unit lies well inside them
+        double lo = Arrays.stream(new double[] {lcl, center, ucl}).filter(Double::isFinite).min().orElse(Double.NaN);
+        double hi = Arrays.stream(new double[] {lcl, center, ucl}).filter(Double::isFinite).max().orElse(Double.NaN);
+        for (double v : values) {
+            if (Double.isFinite(v)) {
+                lo = Double.isNaN(lo) ? v : Math.min(lo, v);
+                hi = Double.isNaN(hi) ? v : Math.max(hi, v);
+            }
+        }
+        if (hi > lo) {
+            double margin = 0.08 * (hi - lo);
+            axis.setRange(lo - margin, hi + margin);
+            enoughDecimals(axis, hi - lo);
+        }
+        XYPlot plot = set.plot(units, axis);
+        limit(plot, center, "center", PlotStyle.stroke(1f));
+        limit(plot, ucl, "UCL", PlotStyle.stroke(1f, 6f, 3f));
+        limit(plot, lcl, "LCL", PlotStyle.stroke(1f, 6f, 3f));
+        return xyPicture(id, title, plot, set, List.of(UNIT_ORDER, yLabel));
+    }
+
+    /**
+     * Histogram of values: equal-width bins from the smallest to the largest value, as many as
+     * Sturges' rule gives ({@code ⌈log₂ n⌉ + 1}, at most 30; one bin when all values are equal);
+     * x as given, y "units (count)". 720 × 300 px.
+     *
+     * @param id     the picture's id
+     * @param title  the title
+     * @param xLabel the horizontal axis' label, with its unit
+     * @param values the values (non-finite ones are left out)
+     * @return the picture (one series "units", none without a finite value)
+     * @throws IllegalArgumentException when the id is not valid
+     */
+    public static SvgPicture histogram(String id, String title, String xLabel, double[] values) {
+        SvgCanvas.checkId(id);
+        Objects.requireNonNull(xLabel, "xLabel");
+        double[] v = Arrays.stream(values).filter(Double::isFinite).toArray();
+        XYIntervalSeriesCollection data = new XYIntervalSeriesCollection();
+        if (v.length > 0) {
+            Bins bins = bins(v);
+            XYIntervalSeries s = new XYIntervalSeries("units");
+            for (int b = 0; b < bins.counts().length; b++) {
+                double a = bins.start() + b * bins.width();
+                s.add(a + bins.width() / 2, a, a + bins.width(), bins.counts()[b], 0, bins.counts()[b]);
+            }
+            data.addSeries(s);
+        }
+        NumberAxis count = PlotStyle.numberAxis(COUNT);
+        count.setStandardTickUnits(NumberAxis.createIntegerTickUnits(Locale.ROOT));
+        count.setAutoRangeIncludesZero(true);
+        count.setUpperMargin(0.1);
+        NumberAxis axis = PlotStyle.numberAxis(xLabel);
+        if (v.length > 0) {
+            Bins bins = bins(v);
+            enoughDecimals(axis, bins.width() * bins.counts().length);
+        }
+        XYPlot plot = new XYPlot(data, axis, count, new HistogramRenderer());
+        PlotStyle.xyPlot(plot);
+        int series = v.length > 0 ? 1 : 0;
+        return picture(id, title, PlotStyle.chart(title, plot, false), List.of(), series, List.of(xLabel, COUNT),
+                PlotStyle.WIDTH, PlotStyle.HEIGHT);
+    }
+
+    /**
+     * A histogram's bins.
+     *
+     * @param start  the first bin's lower edge
+     * @param width  each bin's width
+     * @param counts how many values each bin holds (the last bin holds its upper edge too)
+     */
+    record Bins(double start, double width, int[] counts) {
+    }
+
+    /**
+     * Equal-width bins from the smallest to the largest value, ⌈log₂ n⌉ + 1 of them (Sturges),
+     * at most 30; one bin of ±2.5 % about the value when all values are equal.
+     *
+     * @param v finite values, at least one
+     * @return the bins
+     */
+    static Bins bins(double[] v) {
+        double lo = Arrays.stream(v).min().getAsDouble();
+        double hi = Arrays.stream(v).max().getAsDouble();
+        int n = hi > lo ? Math.min(30, (int) Math.ceil(Math.log(v.length) / Math.log(2)) + 1) : 1;
+        double width = hi > lo ? (hi - lo) / n : Math.max(Math.abs(lo) * 0.05, 1e-12);
+        double start = hi > lo ? lo : lo - width / 2;
+        int[] counts = new int[n];
+        for (double d : v) {
+            counts[Math.min(n - 1, (int) Math.floor((d - start) / width))]++;
+        }
+        return new Bins(start, width, counts);
+    }
+
+    /**
+     * Tick labels with enough decimals to tell the ticks of a narrow range apart (the standard
+     * tick units write at most three): one more than the tick spacing's, about a tenth of the range,
+     * needs; trailing zeros left out, a point as the decimal separator.
+     */
+    private static void enoughDecimals(NumberAxis axis, double range) {
+        int decimals = Math.max(0, Math.min(12, (int) Math.ceil(-Math.log10(range / 10)) + 1));
+        DecimalFormat f = new DecimalFormat("0.#", DecimalFormatSymbols.getInstance(Locale.ROOT));
+        f.setMaximumFractionDigits(decimals);
+        axis.setNumberFormatOverride(f);
+    }
+
+    /** A labelled horizontal line at {@code y}; none when y is not finite. */
+    private static void limit(XYPlot plot, double y, String label, Stroke stroke) {
+        if (!Double.isFinite(y)) {
+            return;
+        }
+        plot.addRangeMarker(labelled(y, label, stroke, TextAnchor.BOTTOM_RIGHT), Layer.FOREGROUND);
+    }
+
+    /** A dark grey line at {@code v} with a label at its top right, in the ticks' font on white. */
+    private static ValueMarker labelled(double v, String label, Stroke stroke, TextAnchor text) {
+        ValueMarker m = new ValueMarker(v, PlotStyle.DARK_GREY, stroke);
+        m.setLabel(label);
+        m.setLabelFont(PlotStyle.TICK_FONT);
+        m.setLabelPaint(PlotStyle.BLACK);
+        m.setLabelAnchor(RectangleAnchor.TOP_RIGHT);
+        m.setLabelTextAnchor(text);
+        m.setLabelBackgroundColor(PlotStyle.WHITE);
+        return m;
+    }
+
     private static SvgPicture xyPicture(String id, String title, XYPlot plot, SeriesSet set, List<String> labels) {
         return picture(id, title, PlotStyle.chart(title, plot, set.drawn() > 1), List.of(set), set.drawn(), labels,
                 PlotStyle.WIDTH, PlotStyle.HEIGHT);
@@ -264,14 +435,8 @@ public final class Plots {
         if (!Double.isFinite(t)) {
             return;
         }
-        ValueMarker labelled = new ValueMarker(t, PlotStyle.DARK_GREY, stroke);
-        labelled.setLabel(label);
-        labelled.setLabelFont(PlotStyle.TICK_FONT);
-        labelled.setLabelPaint(PlotStyle.BLACK);
-        labelled.setLabelAnchor(RectangleAnchor.TOP_RIGHT);
-        labelled.setLabelTextAnchor(TextAnchor.TOP_LEFT);
+        ValueMarker labelled = labelled(t, label, stroke, TextAnchor.TOP_LEFT);
         labelled.setLabelOffset(new RectangleInsets(2, 3, 2, 3));
-        labelled.setLabelBackgroundColor(PlotStyle.WHITE);
         upper.addDomainMarker(labelled, Layer.FOREGROUND);
         lower.addDomainMarker(new ValueMarker(t, PlotStyle.DARK_GREY, stroke), Layer.FOREGROUND);
     }

@@ -73,13 +73,7 @@ final class SeriesRenderer extends XYLineAndShapeRenderer {
     public void drawItem(Graphics2D g2, XYItemRendererState state, Rectangle2D dataArea, PlotRenderingInfo info,
             XYPlot plot, ValueAxis domainAxis, ValueAxis rangeAxis, XYDataset dataset, int series, int item,
             CrosshairState crosshairState, int pass) {
-        if (item == state.getFirstItemIndex()) {
-            SvgCanvas.beginSeries(g2, String.valueOf(dataset.getSeriesKey(series)));
-        }
-        super.drawItem(g2, state, dataArea, info, plot, domainAxis, rangeAxis, dataset, series, item, crosshairState,
-                pass);
-        if (item == state.getLastItemIndex()) {
-            SvgCanvas.endSeries(g2);
-        }
+        SvgCanvas.inSeries(g2, state, dataset, series, item, () -> super.drawItem(g2, state, dataArea, info, plot,
+                domainAxis, rangeAxis, dataset, series, item, crosshairState, pass));
     }
 }

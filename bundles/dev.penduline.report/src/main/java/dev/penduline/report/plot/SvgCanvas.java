@@ -11,6 +11,8 @@ import java.util.regex.Pattern;
 import org.jfree.chart.ChartRenderingInfo;
 import org.jfree.chart.JFreeChart;
 import org.jfree.chart.plot.PlotRenderingInfo;
+import org.jfree.chart.renderer.xy.XYItemRendererState;
+import org.jfree.data.xy.XYDataset;
 import org.jfree.svg.SVGGraphics2D;
 import org.jfree.svg.SVGHints;
 import org.jfree.svg.ViewBox;
@@ -126,6 +128,27 @@ final class SvgCanvas {
             attributes.put("class", "series");
             attributes.put("data-series", name);
             g2.setRenderingHint(SVGHints.KEY_BEGIN_GROUP, attributes);
+        }
+    }
+
+    /**
+     * Draws one item of an XY series inside the series' group: the group opens before the pass's
+     * first item and closes after its last (the XY renderers' shared wrapping).
+     *
+     * @param g2      the canvas
+     * @param state   the renderer's state (first and last item of the pass)
+     * @param dataset the data
+     * @param series  the series
+     * @param item    the item
+     * @param draw    draws the item
+     */
+    static void inSeries(Graphics2D g2, XYItemRendererState state, XYDataset dataset, int series, int item, Runnable draw) {
+        if (item == state.getFirstItemIndex()) {
+            beginSeries(g2, String.valueOf(dataset.getSeriesKey(series)));
+        }
+        draw.run();
+        if (item == state.getLastItemIndex()) {
+            endSeries(g2);
         }
     }
 

@@ -109,6 +109,10 @@ class PlotsTest {
                 new double[] {62, 30, 8}, new double[] {4, 3, Double.NaN}), 1);
         all.put(Plots.timeSeries(prefix + "prediction", "Predicted swing", "angle (°)",
                 List.of(line("predicted", 30, 0.1))), 1);
+        all.put(Plots.controlChart(prefix + "control", "Individuals chart", "viscous b (N·m·s/rad)",
+                new double[] {0.010, 0.011, 0.0105, 0.0098, 0.030, 0.0102}, 0.0136, 0.0051, 0.0221), 3);
+        all.put(Plots.histogram(prefix + "histogram", "Histogram", "viscous b (N·m·s/rad)",
+                new double[] {0.010, 0.011, 0.0105, 0.0098, 0.030, 0.0102}), 1);
         return all;
     }
 
@@ -332,5 +336,34 @@ class PlotsTest {
         assertThrows(IllegalArgumentException.class,
                 () -> Plots.timeSeries("dup", "t", "angle (°)", List.of(line("a", 1, 1), line("a", 2, 1))));
         assertThrows(IllegalArgumentException.class, () -> new Curve("c", new double[2], new double[3]));
+    }
+
+    /**
+     * The control chart marks a unit beyond the limits apart from the others, and a chart with
+     * every unit within them draws no "beyond limits" series.
+     */
+    @Test
+    void theControlChartMarksTheUnitsBeyondTheLimits() throws Exception {
+        double[] v = {0.010, 0.011, 0.0105, 0.0098, 0.030, 0.0102};
+        SvgPicture beyond = Plots.controlChart("cc", "chart", "b (N·m·s/rad)", v, 0.0136, 0.0051, 0.0221);
+        assertEquals(Set.of("in order", "within limits", "beyond limits"), series(parse(beyond.svg())));
+        assertTrue(texts(parse(beyond.svg())).containsAll(Set.of("UCL", "LCL", "center")), texts(parse(beyond.svg())).toString());
+        SvgPicture within = Plots.controlChart("cw", "chart", "b (N·m·s/rad)", v, 0.0136, 0.0, 0.04);
+        assertEquals(Set.of("in order", "within limits"), series(parse(within.svg())));
+    }
+
+    /**
+     * Bins by hand: ten values 1 2 2 3 3 3 4 4 4 4 make ⌈log₂ 10⌉ + 1 = 5 bins of width 0.6 from 1
+     * (Sturges' rule), holding 1, 2, 0, 3 and 4 values (the largest value in the last bin).
+     */
+    @Test
+    void histogramBinsFollowSturgesRule() {
+        Plots.Bins b = Plots.bins(new double[] {4, 1, 2, 3, 4, 2, 3, 4, 3, 4});
+        assertEquals(1, b.start(), 1e-12);
+        assertEquals(0.6, b.width(), 1e-12);
+        assertEquals(List.of(1, 2, 0, 3, 4), java.util.Arrays.stream(b.counts()).boxed().toList());
+        Plots.Bins one = Plots.bins(new double[] {2, 2, 2});
+        assertEquals(1, one.counts().length);
+        assertEquals(3, one.counts()[0]);
     }
 }
