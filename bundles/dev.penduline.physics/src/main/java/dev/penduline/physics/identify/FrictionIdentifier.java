@@ -183,7 +183,16 @@ public final class FrictionIdentifier {
         final double k = problem.mechanism().gravityStiffness();
         final FitSettings refit = settings.withLimits(Math.min(settings.maxIterations(), 20),
                 Math.min(settings.maxEvaluations(), 40));
-        final StageOutcome[] best = {null};
+        // Levenberg–Marquardt at the first scale; at the others the chord steps of OptimumRefit
+        // on the Jacobian of the last Levenberg–Marquardt point (values-only model runs), and
+        // Levenberg–Marquardt again only where they do not settle; the best scale is polished
+        // by Levenberg–Marquardt for its Jacobian and residuals
+        final StageOutcome[] anchor = {null};
+        final List<List<StageSamples>> anchorData = new ArrayList<>();
+        anchorData.add(null);
+        final StageOutcome[] bestOutcome = {null};
+        final double[][] bestFull = {null};
+        final double[] bestCost = {Double.POSITIVE_INFINITY};
         final List<List<StageSamples>> bestData = new ArrayList<>();
         bestData.add(null);
         final UnivariateFunction cost = scale -> {
@@ -192,14 +201,37 @@ public final class FrictionIdentifier {
                 final EncoderRounding r = roundings.get(s);
                 data.add(point.data().get(s).withRounding(r == null ? null : r.withSigma(scale * r.sigma())));
             }
-            final double[] from = best[0] == null ? o.full() : best[0].full();
+            final OptimumRefit chord = anchor[0] == null ? null : OptimumRefit.at(point.layout(), anchor[0].full(),
+                    anchor[0].jacobian(), anchor[0].rss());
+            if (chord != null) {
+                final double[] reached = {Double.NaN};
+                final double[] full = chord.refit(data, k, point.stiction(), settings, control, "encoder rounding",
+                        reached);
+                if (full != null && Double.isFinite(reached[0])) {
+                    if (reached[0] < bestCost[0]) {
+                        bestCost[0] = reached[0];
+                        bestFull[0] = full;
+                        bestOutcome[0] = null;
+                        bestData.set(0, data);
+                    }
+                    return reached[0];
+                }
+            }
+            final double[] from = bestFull[0] == null ? o.full() : bestFull[0];
             final StageOutcome out = LevenbergStage.run("encoder rounding", point.layout(), from, data, k,
                     point.stiction(), refit, control);
-            if (out.status() == FitStatus.CONVERGED && (best[0] == null || out.rss() < best[0].rss())) {
-                best[0] = out;
+            if (out.status() != FitStatus.CONVERGED) {
+                return Double.MAX_VALUE;
+            }
+            anchor[0] = out;
+            anchorData.set(0, data);
+            if (out.rss() < bestCost[0]) {
+                bestCost[0] = out.rss();
+                bestFull[0] = out.full();
+                bestOutcome[0] = out;
                 bestData.set(0, data);
             }
-            return out.status() == FitStatus.CONVERGED ? out.rss() : Double.MAX_VALUE;
+            return out.rss();
         };
         try {
             new BrentOptimizer(NOISE_SCALE_ACCURACY, 1e-3).optimize(new MaxEval(NOISE_SCALE_EVALUATIONS),
@@ -207,11 +239,22 @@ public final class FrictionIdentifier {
         } catch (MathIllegalStateException e) {
             // the evaluation limit: the best refit so far stands
         }
-        if (best[0] == null) {
+        if (bestFull[0] == null) {
             return point;
         }
-        return new PointFit(point.layout(), best[0], bestData.get(0), point.stiction(), point.band(),
-                point.iterations() + best[0].iterations(), point.evaluations() + best[0].evaluations());
+        StageOutcome chosen = bestOutcome[0];
+        if (chosen == null) {
+            final StageOutcome polished = LevenbergStage.run("encoder rounding", point.layout(), bestFull[0],
+                    bestData.get(0), k, point.stiction(), refit, control);
+            if (polished.status() != FitStatus.CONVERGED) {
+                // the last converged Levenberg–Marquardt point stands (there is one: the chords need it)
+                return new PointFit(point.layout(), anchor[0], anchorData.get(0), point.stiction(), point.band(),
+                        point.iterations() + anchor[0].iterations(), point.evaluations() + anchor[0].evaluations());
+            }
+            chosen = polished;
+        }
+        return new PointFit(point.layout(), chosen, bestData.get(0), point.stiction(), point.band(),
+                point.iterations() + chosen.iterations(), point.evaluations() + chosen.evaluations());
     }
 
     /** The full vector with the friction terms scaled (a start for the spread). */

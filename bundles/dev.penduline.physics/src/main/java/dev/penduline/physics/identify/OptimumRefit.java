@@ -110,6 +110,20 @@ final class OptimumRefit {
      */
     double[] refit(List<StageSamples> data, double stiffness, double stiction, FitSettings settings,
             FitControl control, String stage) {
+        return refit(data, stiffness, stiction, settings, control, stage, new double[1]);
+    }
+
+    /**
+     * Refits data from the optimum and gives the cost it reached.
+     *
+     * @param reachedCost on return, {@code reachedCost[0]} is the residual sum of squares at the last point the
+     *             model was run at (the final correction, below a hundredth of a standard
+     *             error, changes it by less than 1e-4 of the noise variance)
+     * @return the refitted full vector (SI), or null when the full refit must do it
+     * @see #refit(List, double, double, FitSettings, FitControl, String)
+     */
+    double[] refit(List<StageSamples> data, double stiffness, double stiction, FitSettings settings,
+            FitControl control, String stage, double[] reachedCost) {
         final JointModel model = new JointModel(layout, optimum, data, stiffness, stiction,
                 settings.integrationTolerance(), control.cancelled());
         final double[] target = model.target().toArray();
@@ -131,6 +145,7 @@ final class OptimumRefit {
                 return null;
             }
             cost = next;
+            reachedCost[0] = next;
             final RealVector correction = step(r);
             u = u.add(correction);
             if (settled(correction)) {
