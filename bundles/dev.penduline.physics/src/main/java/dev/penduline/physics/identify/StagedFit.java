@@ -264,8 +264,16 @@ final class StagedFit {
     }
 
     /**
-     * The full stage when it starts with friction terms on their zero bound: those terms are held
-     * there and the others fitted, and the point is kept if it satisfies the bound's optimality
+     * A friction term this close to zero, in its scale (the equivalent of a 1 % damping ratio),
+     * starts the full stage held at zero: 1e-4 of damping ratio is far below what any record
+     * resolves, and where the term is real the optimality condition below fails and the plain
+     * stage runs.
+     */
+    private static final double NEAR_BOUND = 0.01;
+
+    /**
+     * The full stage when it starts with friction terms on or next to their zero bound: those
+     * terms are held at zero and the others fitted, and the point is kept if it satisfies the bound's optimality
      * condition (Karush–Kuhn–Tucker: the cost rises into the feasible side of every held term,
      * {@code ∂S/∂p ≥ 0}, that is {@code (Jᵀ r)_p ≤ 0} with r the residual and J the model's
      * Jacobian), checked with one evaluation of the whole set's Jacobian there. Such a point is a
@@ -278,18 +286,21 @@ final class StagedFit {
     private static StageOutcome heldAtBound(Plan plan, double[] from, FitSettings settings, FitControl control,
             Tally tally) {
         final boolean[] free = plan.layout.freeMask();
+        final double[] start = from.clone();
         boolean any = false;
         for (ParameterKind k : DISSIPATIVE_KINDS) {
             final int i = ParameterLayout.index(k);
-            if (free[i] && plan.layout.onBound(i, from[i])) {
+            if (free[i] && (plan.layout.onBound(i, from[i])
+                    || from[i] - plan.layout.lower(i) < NEAR_BOUND * plan.layout.scale(i))) {
                 free[i] = false;
+                start[i] = plan.layout.lower(i);
                 any = true;
             }
         }
         if (!any) {
             return null;
         }
-        final StageOutcome inner = tally.add(LevenbergStage.run("full", plan.layout.withFree(free), from, plan.all,
+        final StageOutcome inner = tally.add(LevenbergStage.run("full", plan.layout.withFree(free), start, plan.all,
                 plan.stiffness, plan.start.stiction(), settings, control));
         if (inner.status() != FitStatus.CONVERGED) {
             return null;
