@@ -50,7 +50,7 @@ final class FitJson {
             j.name(word(t)).beginObject();
             if (t == FrictionTerm.STICTION && fit.stiction() != null) {
                 j.field("value", fit.stiction().middle())
-                        .field("sigma", (fit.stiction().upper() - fit.stiction().lower()) / Math.sqrt(12))
+                        .field("sigma", fit.stiction().sigma())
                         .field("lower", fit.stiction().lower()).field("upper", fit.stiction().upper())
                         .field("resolved", fit.stiction().resolved());
             } else if (p.isPresent()) {

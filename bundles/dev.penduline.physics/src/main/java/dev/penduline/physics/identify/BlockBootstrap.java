@@ -45,6 +45,14 @@ final class BlockBootstrap {
             starts[s + 1] = starts[s] + data.get(s).size();
         }
         final OptimumRefit chord = OptimumRefit.at(layout, full, jacobian, LevenbergStage.sumOfSquares(residuals));
+        // the model at the optimum, the same for every replicate: the readings minus the residuals
+        final double[] fitted = new double[residuals.length];
+        for (int s = 0; s < data.size(); s++) {
+            final double[] y = data.get(s).angles();
+            for (int i = 0; i < y.length; i++) {
+                fitted[starts[s] + i] = y[i] - residuals[starts[s] + i];
+            }
+        }
         // the fallback starts at the optimum: fewer iterations suffice, and the lock stage is not needed
         final FitSettings refit = settings.withLimits(Math.min(settings.maxIterations(), 30),
                 Math.min(settings.maxEvaluations(), 60));
@@ -63,7 +71,8 @@ final class BlockBootstrap {
             }
             final String stage = "resample " + r;
             if (chord != null) {
-                final double[] quick = chord.refit(resampled, stiffness, stiction, settings, control, stage);
+                final double[] quick = chord.refit(resampled, fitted, stiffness, stiction, settings, control, stage,
+                        new double[1]);
                 if (quick != null) {
                     return quick;
                 }

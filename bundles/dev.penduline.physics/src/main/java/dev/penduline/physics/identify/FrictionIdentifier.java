@@ -205,8 +205,9 @@ public final class FrictionIdentifier {
                     anchor[0].jacobian(), anchor[0].rss());
             if (chord != null) {
                 final double[] reached = {Double.NaN};
-                final double[] full = chord.refit(data, k, point.stiction(), settings, control, "encoder rounding",
-                        reached);
+                // another noise scale is another measurement model: the model runs at the anchor too
+                final double[] full = chord.refit(data, null, k, point.stiction(), settings, control,
+                        "encoder rounding", reached);
                 if (full != null && Double.isFinite(reached[0])) {
                     if (reached[0] < bestCost[0]) {
                         bestCost[0] = reached[0];

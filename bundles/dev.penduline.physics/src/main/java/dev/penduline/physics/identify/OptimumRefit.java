@@ -98,39 +98,36 @@ final class OptimumRefit {
     }
 
     /**
-     * Refits resampled data from the optimum.
-     *
-     * @param data      the resampled sessions (the fitted trajectory plus resampled residuals)
-     * @param stiffness gravity stiffness K (N·m/rad)
-     * @param stiction  holding torque (N·m), 0 meaning "as Coulomb"
-     * @param settings  the integration tolerance
-     * @param control   cancellation and progress
-     * @param stage     name reported to the monitor
-     * @return the refitted full vector (SI), or null when the full refit must do it
-     */
-    double[] refit(List<StageSamples> data, double stiffness, double stiction, FitSettings settings,
-            FitControl control, String stage) {
-        return refit(data, stiffness, stiction, settings, control, stage, new double[1]);
-    }
-
-    /**
      * Refits data from the optimum and gives the cost it reached.
      *
-     * @param reachedCost on return, {@code reachedCost[0]} is the residual sum of squares at the last point the
-     *             model was run at (the final correction, below a hundredth of a standard
-     *             error, changes it by less than 1e-4 of the noise variance)
+     * @param data        the sessions to refit: for the bootstrap, the fitted trajectory plus
+     *                    resampled residuals
+     * @param atOptimum   the model's values at the optimum for this data's measurement model,
+     *                    when the caller knows them (the bootstrap: the fitted trajectory, the
+     *                    same for every replicate), or null to run the model there
+     * @param stiffness   gravity stiffness K (N·m/rad)
+     * @param stiction    holding torque (N·m), 0 meaning "as Coulomb"
+     * @param settings    the integration tolerance
+     * @param control     cancellation and progress
+     * @param stage       name reported to the monitor
+     * @param reachedCost on return, {@code reachedCost[0]} is the residual sum of squares at the
+     *                    last point the model was run at (the final correction, below a
+     *                    hundredth of a standard error, changes it by less than 1e-4 of the
+     *                    noise variance)
      * @return the refitted full vector (SI), or null when the full refit must do it
-     * @see #refit(List, double, double, FitSettings, FitControl, String)
      */
-    double[] refit(List<StageSamples> data, double stiffness, double stiction, FitSettings settings,
-            FitControl control, String stage, double[] reachedCost) {
+    double[] refit(List<StageSamples> data, double[] atOptimum, double stiffness, double stiction,
+            FitSettings settings, FitControl control, String stage, double[] reachedCost) {
         final JointModel model = new JointModel(layout, optimum, data, stiffness, stiction,
                 settings.integrationTolerance(), control.cancelled());
         final double[] target = model.target().toArray();
         final double[] values = new double[target.length];
         final double[] r = new double[target.length];
-        // at the optimum the model is the fitted trajectory: target minus it is e*
-        model.evaluate(optimum, values, null);
+        if (atOptimum != null) {
+            System.arraycopy(atOptimum, 0, values, 0, values.length);
+        } else {
+            model.evaluate(optimum, values, null);
+        }
         double cost = residual(target, values, r);
         RealVector u = scaledOptimum.add(step(r));
         for (int evaluation = 1; evaluation <= MAX_CORRECTIONS; evaluation++) {

@@ -19,4 +19,15 @@ public record StictionBand(double lower, double upper, boolean resolved) {
     public double middle() {
         return 0.5 * (lower + upper);
     }
+
+    /**
+     * The standard uncertainty of the middle: every Ts in the band fits alike, so it is taken
+     * as uniformly distributed over the band, σ = width/√12 (JCGM 100:2008, §4.3.7, the
+     * rectangular distribution).
+     *
+     * @return (upper − lower)/√12 (N·m)
+     */
+    public double sigma() {
+        return (upper - lower) / Math.sqrt(12);
+    }
 }

@@ -40,8 +40,14 @@ class OptimumRefitTest {
         final FitSettings tight = settings.withTolerances(1e-14, 1e-12);
         for (int shift : new int[] {97, 331, 1201, 2503}) {
             final List<StageSamples> data = shifted(point, o, shift);
-            final double[] fast = chord.refit(data, k, point.stiction(), settings, FitControl.none(), "test");
+            // as the bootstrap calls it: the model at the optimum is the readings minus the residuals
+            final double[] fast = chord.refit(data, fitted(point, o), k, point.stiction(), settings,
+                    FitControl.none(), "test", new double[1]);
             assertNotNull(fast, "the chord steps settle for a residual shift of " + shift);
+            // and the same when the refit runs the model at the optimum itself
+            final double[] run = chord.refit(data, null, k, point.stiction(), settings, FitControl.none(), "test",
+                    new double[1]);
+            assertNotNull(run);
             final StageOutcome full = LevenbergStage.run("reference", point.layout(), o.full(), data, k,
                     point.stiction(), tight, FitControl.none());
             assertEquals(FitStatus.CONVERGED, full.status(), full.message());
@@ -51,6 +57,7 @@ class OptimumRefitTest {
                 // the refit moves each parameter by about one σ; the two must agree to 5 % of it
                 assertEquals(full.full()[i], fast[i], 0.05 * sigma[c],
                         point.layout().name(i) + " after a shift of " + shift);
+                assertEquals(run[i], fast[i], 1e-6 * sigma[c], point.layout().name(i) + ": given or run at the optimum");
                 moved |= Math.abs(fast[i] - o.full()[i]) > 0.1 * sigma[c];
             }
             assertTrue(moved, "the resampled data moved the estimate (shift " + shift + ")");
@@ -73,8 +80,9 @@ class OptimumRefitTest {
         final int drag = ParameterLayout.index(ParameterKind.DRAG);
         int handedOver = 0;
         for (int shift = 101; shift < 101 + 12 * 397; shift += 397) {
-            final double[] fast = chord.refit(shifted(point, o, shift), problem.mechanism().gravityStiffness(), point.stiction(),
-                            settings, FitControl.none(), "test");
+            final double[] fast = chord.refit(shifted(point, o, shift), fitted(point, o),
+                    problem.mechanism().gravityStiffness(), point.stiction(), settings, FitControl.none(), "test",
+                    new double[1]);
             if (fast == null) {
                 handedOver++;
             } else {
@@ -108,6 +116,19 @@ class OptimumRefitTest {
             from += n;
         }
         return out;
+    }
+
+    /** The model at the optimum: each session's readings minus its residuals, concatenated. */
+    private static double[] fitted(PointFit point, StageOutcome o) {
+        final double[] f = new double[o.residuals().length];
+        int from = 0;
+        for (StageSamples d : point.data()) {
+            for (int i = 0; i < d.size(); i++) {
+                f[from + i] = d.angles()[i] - o.residuals()[from + i];
+            }
+            from += d.size();
+        }
+        return f;
     }
 
     /** σ of each free column from the Jacobian, in the units of the full vector. */

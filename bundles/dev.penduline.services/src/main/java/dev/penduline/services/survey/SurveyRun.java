@@ -237,9 +237,8 @@ public final class SurveyRun {
             terms.add(word);
             Optional<ParameterEstimate> p = fit.parameter(t.symbol());
             if (t == FrictionTerm.STICTION && fit.stiction() != null) {
-                // the stop band's middle and the σ of a uniform distribution over it, as fit's JSON gives them
-                estimates.add(new SurveyRow.Estimate(word, fit.stiction().middle(),
-                        (fit.stiction().upper() - fit.stiction().lower()) / Math.sqrt(12)));
+                // the stop band's middle and its σ, as fit's JSON gives them
+                estimates.add(new SurveyRow.Estimate(word, fit.stiction().middle(), fit.stiction().sigma()));
             } else if (p.isPresent()) {
                 estimates.add(new SurveyRow.Estimate(word, p.get().value(), p.get().sigma()));
             }
