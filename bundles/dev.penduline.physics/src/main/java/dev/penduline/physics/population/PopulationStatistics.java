@@ -1,9 +1,9 @@
 package dev.penduline.physics.population;
 
 import java.util.ArrayList;
-import java.util.Arrays;
 import java.util.List;
 
+import org.hipparchus.stat.descriptive.moment.Mean;
 import org.hipparchus.stat.descriptive.rank.Percentile;
 import org.hipparchus.stat.descriptive.rank.Percentile.EstimationType;
 
@@ -90,7 +90,7 @@ public record PopulationStatistics(int count, double median, double mad, double 
                 outliers.add(i);
             }
         }
-        double center = Arrays.stream(values).sum() / values.length;
+        double center = new Mean().evaluate(values);
         double movingRange = Double.NaN;
         double lcl = Double.NaN;
         double ucl = Double.NaN;
@@ -122,26 +122,5 @@ public record PopulationStatistics(int count, double median, double mad, double 
      */
     public static double percentile(double[] values, double p) {
         return new Percentile(p).withEstimationType(EstimationType.R_7).evaluate(values);
-    }
-
-    @Override
-    public boolean equals(Object o) {
-        return o instanceof PopulationStatistics s && count == s.count && Double.compare(median, s.median) == 0
-                && Double.compare(mad, s.mad) == 0 && Double.compare(p05, s.p05) == 0 && Double.compare(p95, s.p95) == 0
-                && Double.compare(center, s.center) == 0 && Double.compare(movingRange, s.movingRange) == 0
-                && Double.compare(lcl, s.lcl) == 0 && Double.compare(ucl, s.ucl) == 0 && Arrays.equals(scores, s.scores)
-                && outliers.equals(s.outliers) && beyondLimits.equals(s.beyondLimits);
-    }
-
-    @Override
-    public int hashCode() {
-        return Arrays.hashCode(new double[] {count, median, mad, center, lcl, ucl}) * 31 + Arrays.hashCode(scores);
-    }
-
-    @Override
-    public String toString() {
-        return "PopulationStatistics[n=" + count + ", median=" + median + ", mad=" + mad + ", p05=" + p05 + ", p95=" + p95
-                + ", center=" + center + ", lcl=" + lcl + ", ucl=" + ucl + ", outliers=" + outliers + ", beyond="
-                + beyondLimits + "]";
     }
 }
