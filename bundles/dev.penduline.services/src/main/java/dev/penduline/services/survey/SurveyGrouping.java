@@ -18,6 +18,8 @@ import java.util.regex.Matcher;
 import java.util.regex.Pattern;
 
 import dev.penduline.model.persistence.AtomicFileWrite;
+import dev.penduline.records.DelimitedLine;
+import dev.penduline.records.RecordFormatException;
 import dev.penduline.services.InputException;
 
 /**
@@ -164,7 +166,12 @@ public final class SurveyGrouping {
             if (line.isBlank() || line.stripLeading().startsWith("#")) {
                 continue;
             }
-            List<String> fields = fields(line);
+            List<String> fields;
+            try {
+                fields = DelimitedLine.split(line, ',', manifest.toString(), n + 1);
+            } catch (RecordFormatException e) {
+                throw new InputException(e.getMessage(), e);
+            }
             String where = manifest + ": line " + (n + 1);
             if (fileAt < 0) {
                 fileAt = fields.indexOf(FILE_COLUMN);
@@ -212,35 +219,6 @@ public final class SurveyGrouping {
             list.add(new SurveyUnit(k, files));
         });
         return new Grouping(list, unassigned);
-    }
-
-    /** The fields of a comma-separated line; a field in double quotes may hold commas and doubled quotes. */
-    static List<String> fields(String line) {
-        List<String> out = new ArrayList<>();
-        StringBuilder b = new StringBuilder();
-        boolean quoted = false;
-        for (int i = 0; i < line.length(); i++) {
-            char c = line.charAt(i);
-            if (quoted) {
-                if (c == '"' && i + 1 < line.length() && line.charAt(i + 1) == '"') {
-                    b.append('"');
-                    i++;
-                } else if (c == '"') {
-                    quoted = false;
-                } else {
-                    b.append(c);
-                }
-            } else if (c == '"') {
-                quoted = true;
-            } else if (c == ',') {
-                out.add(b.toString().strip());
-                b.setLength(0);
-            } else {
-                b.append(c);
-            }
-        }
-        out.add(b.toString().strip());
-        return out;
     }
 
     private static String stem(String name) {
