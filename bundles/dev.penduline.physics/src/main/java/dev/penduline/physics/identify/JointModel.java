@@ -95,6 +95,35 @@ final class JointModel implements MultivariateJacobianFunction {
         return rows;
     }
 
+    /**
+     * The first row of each session, and one past the last row: the Jacobian is zero in a
+     * session's own columns (its θ0, release time and offset) outside that session's rows.
+     */
+    int[] sessionRowStarts() {
+        final int[] starts = new int[data.size() + 1];
+        for (int s = 0; s < data.size(); s++) {
+            starts[s + 1] = starts[s] + data.get(s).size();
+        }
+        return starts;
+    }
+
+    /** The free columns of each session's own parameters (θ0, release time, offset), in order. */
+    int[][] sessionOwnColumns() {
+        final int[][] own = new int[data.size()][];
+        for (int s = 0; s < data.size(); s++) {
+            final int[] columns = new int[ParameterLayout.PER_SESSION];
+            int count = 0;
+            for (int k = 0; k < ParameterLayout.PER_SESSION; k++) {
+                final int c = layout.column(ParameterLayout.index(s, k));
+                if (c >= 0) {
+                    columns[count++] = c;
+                }
+            }
+            own[s] = Arrays.copyOf(columns, count);
+        }
+        return own;
+    }
+
     /** The number of free (scaled) parameters: the Jacobian's columns. */
     int freeCount() {
         return layout.freeCount();

@@ -85,6 +85,41 @@ class ReducedProblemTest {
     }
 
     /**
+     * The block-wise reduction of a two-session problem keeps what the optimiser uses: the
+     * normal matrix {@code J'ᵀJ' = JᵀJ}, the gradient {@code J'ᵀr' = Jᵀr} and the cost
+     * {@code ‖r'‖ = ‖r‖}, with JᵀJ and Jᵀr by Hipparchus' matrix algebra on the full problem.
+     */
+    @Test
+    void blockReductionKeepsNormalMatrixGradientAndCost() {
+        final SyntheticRelease release = SyntheticRelease.of(new FrictionTorques(0.02, 0.03, 0, 0.01))
+                .withDuration(5, 100).withNoise(1e-3, 5);
+        final List<StageSamples> data = List.of(StageSamples.all(release.session("a")),
+                StageSamples.all(release.withTheta0(0.2).withNoise(1e-3, 6).session("b")));
+        final double[] scales = {0.01, 0.01, 0.01, 0.5, 0.3, 0.1, 0.01, 0.3, 0.1, 0.01};
+        final double[] lower = new double[10];
+        java.util.Arrays.fill(lower, Double.NEGATIVE_INFINITY);
+        final boolean[] free = new boolean[10];
+        java.util.Arrays.fill(free, true);
+        free[2] = false;
+        final ParameterLayout layout = new ParameterLayout(List.of("a", "b"), scales, new double[10], lower, free);
+        final double[] point = {0.025, 0.028, 0.01, 0.51, 0.29, 0.41, 0.019, 0.21, 0.39, 0.021};
+        final double k = SyntheticRelease.ARM.gravityStiffness();
+        final JointModel model = new JointModel(layout, point, data, k, 0, 1e-10, null);
+        final var full = model.value(layout.scaled(point));
+        final RealMatrix j = full.getSecond();
+        final RealVector r = model.target().subtract(full.getFirst());
+        final var small = new ReducedProblem(new JointModel(layout, point, data, k, 0, 1e-10, null))
+                .value(layout.scaled(point));
+        final RealMatrix jr = small.getSecond();
+        final RealVector rr = small.getFirst().mapMultiply(-1);
+        final RealMatrix normal = j.transpose().multiply(j);
+        assertEquals(0, normal.subtract(jr.transpose().multiply(jr)).getNorm1(), 1e-12 * normal.getNorm1());
+        final RealVector gradient = j.transpose().operate(r);
+        assertEquals(0, gradient.subtract(jr.transpose().operate(rr)).getNorm(), 1e-10 * gradient.getNorm());
+        assertEquals(r.getNorm(), rr.getNorm(), 1e-13 * r.getNorm());
+    }
+
+    /**
      * Hipparchus' Levenberg–Marquardt on the full problem (one row per sample) and on the
      * reduced one take the same number of iterations and stop at the same optimum: apart by
      * less than a thousandth of each parameter's standard error (rounding carried through the
