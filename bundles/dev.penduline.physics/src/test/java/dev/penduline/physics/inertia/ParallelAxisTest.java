@@ -26,9 +26,13 @@ class ParallelAxisTest {
         // pendulum example; numbers from memory): slender rod 10 kg, 0.45 m, pivoted at O, with
         // a 15 kg sphere of radius 0.1 m at its end (centre 0.55 m from O).
         // I_O = (1/3)(10)(0.45²) + (2/5)(15)(0.1²) + 15(0.55²) = 5.27 kg·m² (book value, 3 s.f.).
+        // The book's sum itself is exact: 0.675 + 0.06 + 4.5375 = 5.2725 kg·m²; its printed
+        // 5.27 is that to three figures (±0.005, half a unit in the last place).
         final Part rod = Part.of("rod", new SlenderRod(0.45, Axis.Y), 10, new Vector3D(0, -0.225, 0));
         final Part ball = Part.of("sphere", new Sphere(0.1), 15, new Vector3D(0, -0.55, 0));
-        assertEquals(5.27, ENGINE.compute(List.of(rod, ball)).pivotInertia(), 0.005);
+        final double j0 = ENGINE.compute(List.of(rod, ball)).pivotInertia();
+        assertEquals(10 * 0.45 * 0.45 / 3 + 0.4 * 15 * 0.1 * 0.1 + 15 * 0.55 * 0.55, j0, 1e-14);
+        assertEquals(5.27, j0, 0.005);
     }
 
     @Test
@@ -38,14 +42,22 @@ class ParallelAxisTest {
         // concentric hole r = 125 mm, axis normal to the disc through O on the rim (0.25 m from
         // the centre). Book: m_d = 15.71 kg, m_h = 3.93 kg,
         // I_O = [½(15.71)(0.25²) + 15.71(0.25²)] − [½(3.93)(0.125²) + 3.93(0.25²)] = 1.20 kg·m².
+        // Exactly, with m = ρ π r² t: m_d = 15.70796 kg, m_h = 3.92699 kg, I_O = 1.196505 kg·m²;
+        // the book's figures are these to the places it prints (±half a unit in the last place).
         final Vector3D centre = new Vector3D(0, -0.25, 0);
         final Part disc = Part.ofDensity("disc", Cylinder.solid(0.25, 0.01, Axis.Z), 8000, centre);
         final Part hole = Part.ofDensity("hole", Cylinder.solid(0.125, 0.01, Axis.Z), 8000, centre).withCutout(true);
+        final double md = 8000 * Math.PI * 0.25 * 0.25 * 0.01;
+        final double mh = 8000 * Math.PI * 0.125 * 0.125 * 0.01;
+        assertEquals(md, disc.mass(), 1e-13);
+        assertEquals(mh, hole.mass(), 1e-13);
         assertEquals(15.71, disc.mass(), 0.005);
         assertEquals(3.93, hole.mass(), 0.005);
         final InertiaSummary s = ENGINE.compute(List.of(disc, hole));
+        final double exact = (0.5 * md * 0.25 * 0.25 + md * 0.25 * 0.25) - (0.5 * mh * 0.125 * 0.125 + mh * 0.25 * 0.25);
+        assertEquals(exact, s.pivotInertia(), 1e-14);
         assertEquals(1.20, s.pivotInertia(), 0.005);
-        assertEquals(15.71 - 3.93, s.totalMass(), 0.01);
+        assertEquals(md - mh, s.totalMass(), 1e-13);
     }
 
     @Test
