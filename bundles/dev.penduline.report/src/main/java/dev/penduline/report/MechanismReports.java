@@ -176,8 +176,8 @@ public final class MechanismReports {
                 "Each part's share of the pivot inertia J0; the shares add up to 100 %."));
         List<List<Cell>> totals = new ArrayList<>();
         totals.add(List.of(Cell.of("total mass m"), sig(s.totalMass(), "inertia.mass_kg"), Cell.of("kg")));
-        totals.add(List.of(Cell.of("centroid (x, y, z)"), Cell.of("(" + Figures.significant(s.centroid().x()) + ", "
-                + Figures.significant(s.centroid().y()) + ", " + Figures.significant(s.centroid().z()) + ")"), Cell.of("m")));
+        totals.add(List.of(Cell.of("centroid (x, y, z)"), Cell.of("(" + Figures.significant(s.centroid().getX()) + ", "
+                + Figures.significant(s.centroid().getY()) + ", " + Figures.significant(s.centroid().getZ()) + ")"), Cell.of("m")));
         totals.add(List.of(Cell.of("centroid distance Lc"), sig(s.centroidDistance(), "inertia.centroid_distance_m"),
                 Cell.of("m")));
         totals.add(List.of(Cell.of("inertia about the pivot J0"), sig(s.pivotInertia(), "inertia.pivot_inertia_kg_m2"),

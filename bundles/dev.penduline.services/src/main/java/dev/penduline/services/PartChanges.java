@@ -9,6 +9,8 @@ import java.util.Optional;
 import java.util.regex.Matcher;
 import java.util.regex.Pattern;
 
+import org.hipparchus.geometry.euclidean.threed.Vector3D;
+
 import dev.penduline.physics.inertia.Box;
 import dev.penduline.physics.inertia.Cylinder;
 import dev.penduline.physics.inertia.Part;
@@ -16,7 +18,6 @@ import dev.penduline.physics.inertia.PartShape;
 import dev.penduline.physics.inertia.SlenderRod;
 import dev.penduline.physics.inertia.Sphere;
 import dev.penduline.physics.inertia.ThinRing;
-import dev.penduline.physics.inertia.Vector3;
 import dev.penduline.physics.units.Quantity;
 import dev.penduline.physics.units.Unit;
 import dev.penduline.records.PlainText;
@@ -146,13 +147,13 @@ public final class PartChanges {
 
     private static Part changed(Part p, Setting s) {
         double v = s.value();
-        Vector3 c = p.centroid();
+        Vector3D c = p.centroid();
         return switch (s.field()) {
             case "mass" -> p.withMass(v);
             case "quantity" -> p.withQuantity((int) v);
-            case "x" -> p.withCentroid(Vector3.of(v, c.y(), c.z()));
-            case "y" -> p.withCentroid(Vector3.of(c.x(), v, c.z()));
-            case "z" -> p.withCentroid(Vector3.of(c.x(), c.y(), v));
+            case "x" -> p.withCentroid(new Vector3D(v, c.getY(), c.getZ()));
+            case "y" -> p.withCentroid(new Vector3D(c.getX(), v, c.getZ()));
+            case "z" -> p.withCentroid(new Vector3D(c.getX(), c.getY(), v));
             default -> p.withShape(reshaped(p.shape(), s.field(), v));
         };
     }

@@ -268,14 +268,14 @@ public final class PartsImport {
     private static void add(Mechanism m, Part p) {
         dev.penduline.model.Part q = NamedElements.addPart(m, p.name());
         q.setMass(tidy(p.mass()));
-        q.setCentroidX(tidy(p.centroid().x()));
-        q.setCentroidY(tidy(p.centroid().y()));
-        q.setCentroidZ(tidy(p.centroid().z()));
+        q.setCentroidX(tidy(p.centroid().getX()));
+        q.setCentroidY(tidy(p.centroid().getY()));
+        q.setCentroidZ(tidy(p.centroid().getZ()));
         q.setCutout(p.cutout());
         q.setQuantity(p.quantity());
         q.setMassTolerance(tidy(p.tolerance().mass()));
         q.setDimensionTolerance(tidy(p.tolerance().dimension()));
-        if (!p.orientation().isIdentity() && !(p.shape() instanceof GivenTensor)) {
+        if (p.orientation().getAngle() != 0 && !(p.shape() instanceof GivenTensor)) {
             throw new IllegalArgumentException("part '" + p.name()
                     + "': a rotated standard shape cannot come from a parts list");
         }

@@ -56,7 +56,9 @@ class NewMechanismFileTest {
                 arm,point,heavy,0,-0.3,0
                 """);
         InputException e = assertThrows(InputException.class, () -> NewMechanismFile.readPartsList(csv));
-        assertTrue(e.getMessage().contains("bad.csv"), e.getMessage());
-        assertTrue(e.getMessage().contains("2"), e.getMessage());
+        // file and line (the bad value is on line 2, under the header), then the column and the value
+        assertTrue(e.getMessage().contains("bad.csv:2:"), e.getMessage());
+        assertTrue(e.getMessage().contains("mass_kg"), e.getMessage());
+        assertTrue(e.getMessage().contains("'heavy'"), e.getMessage());
     }
 }

@@ -6,6 +6,7 @@ import static org.junit.jupiter.api.Assertions.assertTrue;
 
 import java.util.List;
 
+import org.hipparchus.geometry.euclidean.threed.Vector3D;
 import org.junit.jupiter.api.Test;
 
 import dev.penduline.physics.inertia.Axis;
@@ -14,14 +15,13 @@ import dev.penduline.physics.inertia.Part;
 import dev.penduline.physics.inertia.PivotInertia;
 import dev.penduline.physics.inertia.PointMass;
 import dev.penduline.physics.inertia.SlenderRod;
-import dev.penduline.physics.inertia.Vector3;
 
 class PartChangesTest {
 
     private static final List<Part> PARTS = List.of(
-            Part.of("arm", new SlenderRod(0.8, Axis.Y), 1.5, Vector3.of(0, -0.4, 0)),
-            Part.of("bob", new PointMass(), 2.0, Vector3.of(0, -0.8, 0)),
-            Part.of("tag", new Box(0.02, 0.03, 0.004), 0.01, Vector3.of(0, -0.1, 0)));
+            Part.of("arm", new SlenderRod(0.8, Axis.Y), 1.5, new Vector3D(0, -0.4, 0)),
+            Part.of("bob", new PointMass(), 2.0, new Vector3D(0, -0.8, 0)),
+            Part.of("tag", new Box(0.02, 0.03, 0.004), 0.01, new Vector3D(0, -0.1, 0)));
 
     private static double j0(List<Part> parts) {
         return PivotInertia.DEFAULT.compute(parts).pivotInertia();

@@ -56,8 +56,8 @@ class PartsListFuzzTest {
             if (!(p.mass() > 0) || !Double.isFinite(p.mass())) {
                 throw new AssertionError("part '" + p.name() + "' has the mass " + p.mass());
             }
-            if (!Double.isFinite(p.centroid().x()) || !Double.isFinite(p.centroid().y())
-                    || !Double.isFinite(p.centroid().z())) {
+            if (!Double.isFinite(p.centroid().getX()) || !Double.isFinite(p.centroid().getY())
+                    || !Double.isFinite(p.centroid().getZ())) {
                 throw new AssertionError("part '" + p.name() + "' has the centroid " + p.centroid());
             }
             if (p.quantity() < 1) {

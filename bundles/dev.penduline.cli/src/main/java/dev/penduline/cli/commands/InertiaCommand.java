@@ -118,8 +118,8 @@ public final class InertiaCommand implements Command {
         j.beginObject()
                 .field("source", source.label())
                 .field("mass_kg", s.totalMass())
-                .name("centroid_m").beginArray().value(s.centroid().x()).value(s.centroid().y())
-                .value(s.centroid().z()).endArray()
+                .name("centroid_m").beginArray().value(s.centroid().getX()).value(s.centroid().getY())
+                .value(s.centroid().getZ()).endArray()
                 .field("centroid_distance_m", s.centroidDistance())
                 .field("pivot_inertia_kg_m2", s.pivotInertia())
                 .field("centroid_inertia_kg_m2", s.centroidalInertia())
@@ -180,8 +180,8 @@ public final class InertiaCommand implements Command {
         }
         out.println();
         out.printf("  total mass                      %s kg%n", num(s.totalMass()));
-        out.printf("  centroid (x, y, z)              (%s, %s, %s) m%n", num(s.centroid().x()), num(s.centroid().y()),
-                num(s.centroid().z()));
+        out.printf("  centroid (x, y, z)              (%s, %s, %s) m%n", num(s.centroid().getX()), num(s.centroid().getY()),
+                num(s.centroid().getZ()));
         out.printf("  centroid distance Lc            %s m%n", num(s.centroidDistance()));
         out.printf("  equilibrium angle               %s°%n", Figures.fixed(Unit.DEGREE.fromSi(s.equilibriumAngle()), 3));
         out.printf("  inertia about the pivot J0      %s kg·m²%n", num(s.pivotInertia()));

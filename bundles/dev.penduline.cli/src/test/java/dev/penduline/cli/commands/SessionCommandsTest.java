@@ -84,14 +84,22 @@ class SessionCommandsTest {
         assertEquals(ExitCode.OK, run(concat(concat(new String[] {"analyze", record.toString(), "--counts-per-rev",
                 "4096", "--json"}, ROD))), err.toString());
         Object json = JsonTree.parse(out.toString());
+        // the release within 2 of its own standard uncertainties (a 95 % coverage factor, JCGM
+        // 100:2008 §6.3) and within one 5 ms sample step
+        assertEquals(1.00185, number(json, "release_time_s"), 2 * number(json, "release_time_uncertainty_s"));
         assertEquals(1.00185, number(json, "release_time_s"), 0.005);
         assertEquals(1.5, number(json, "offset_deg"), 0.02);
         assertEquals(20, number(json, "theta0_deg"), 0.1);
         assertEquals(200, number(json, "sample_rate_hz"), 1e-6);
         assertEquals("coulomb", at(json, "dominant"), out.toString());
-        // Linear Coulomb decay, Den Hartog: 4 Tc/(m g Lc) per cycle = 4·0.05/(2·9.80665·0.4) rad = 1.4608°.
-        assertEquals(1.4608, number(json, "envelope", "linear", "decrement_deg_per_cycle"), 0.05);
-        assertEquals(0.05, number(json, "estimates", "coulomb"), 0.005);
+        // Linear Coulomb decay, Den Hartog: 4 Tc/(m g Lc) per cycle = 4·0.05/(2·9.80665·0.4) rad = 1.4608°
+        // at small angles; gravity's K sin x instead of K x makes a swing of amplitude A lose
+        // A/sin A times that (energy balance, cos A2 − cos A1 = 2 sin Ā sin(ΔA/2)), 1.021 at 20°:
+        // up to 0.031° more per cycle.
+        assertEquals(1.4608, number(json, "envelope", "linear", "decrement_deg_per_cycle"), 0.031);
+        // the first estimate of Tc: Coulomb's work Tc (A1 + A2) per half-swing is exact at any
+        // amplitude, so only its own scatter remains: within 3 of its σ
+        assertEquals(0.05, number(json, "estimates", "coulomb"), 3 * number(json, "estimates_sigma", "coulomb"));
     }
 
     @Test

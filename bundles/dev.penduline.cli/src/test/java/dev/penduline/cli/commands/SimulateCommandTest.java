@@ -9,7 +9,10 @@ import java.io.PrintWriter;
 import java.io.StringWriter;
 import java.nio.file.Files;
 import java.nio.file.Path;
+import java.util.Arrays;
 import java.util.List;
+import java.util.Locale;
+import java.util.function.DoubleUnaryOperator;
 
 import org.junit.jupiter.api.Test;
 import org.junit.jupiter.api.io.TempDir;
@@ -52,12 +55,58 @@ class SimulateCommandTest {
     void dryFrictionStopsTheSwingAndTheSummarySaysWhere() {
         // Linear Coulomb decay: amplitude falls by 4 Tc/(m g Lc) per cycle (Den Hartog,
         // Mechanical Vibrations, Coulomb damping): with Tc = 0.05 m g Lc the 10° (0.1745 rad)
-        // release loses 0.2 rad per cycle, so it stops within the first cycle.
+        // release loses 0.2 rad per cycle, so it stops within the first cycle. Where exactly, by
+        // the energy balance of each half-swing between reversals x1 and x2 (gravity's potential
+        // K(1 − cos x), Coulomb's work Tc|x1 − x2|, K = m g Lc): cos x2 − cos x1 = 0.05 |x1 − x2|.
+        // From 10° that gives −4.2532° and then −1.4793°, where K sin|x| = 0.0255 K is below
+        // Ts = Tc (Coulomb's law of static friction), so the swing rests there.
         double mgl = 9.80665;
-        assertEquals(ExitCode.OK, run("simulate", "--mass", "1", "--centroid-distance", "1", "--pivot-inertia", "1",
-                "--theta0-deg", "10", "--coulomb", String.valueOf(0.05 * mgl), "--duration", "5"), err.toString());
-        assertTrue(out.toString().contains("came to rest at"), out.toString());
-        assertTrue(out.toString().contains("Caution"), out.toString());
+        double x1 = reversal(Math.toRadians(10));
+        double x2 = reversal(x1);
+        assertTrue(Math.sin(Math.abs(x2)) < 0.05, "at rest inside the static band");
+        String[] args = {"simulate", "--mass", "1", "--centroid-distance", "1", "--pivot-inertia", "1",
+            "--theta0-deg", "10", "--coulomb", String.valueOf(0.05 * mgl), "--duration", "5"};
+        assertEquals(ExitCode.OK, run(args), err.toString());
+        String text = out.toString();
+        assertTrue(text.contains(String.format(Locale.ROOT, ", %.3f° from the hanging equilibrium", Math.toDegrees(x2))),
+                "the rest angle by the energy balance, " + Math.toDegrees(x2) + "°: " + text);
+        assertTrue(text.contains("Caution"), text);
+        out.getBuffer().setLength(0);
+        assertEquals(ExitCode.OK, run(append(args, "--json")), err.toString());
+        Object json = JsonTree.parse(out.toString());
+        assertEquals(Boolean.TRUE, at(json, "stopped"), out.toString());
+        assertEquals(Math.toDegrees(x2), number(json, "rest_angle_deg"), 1e-6);
+        // two half-swings, each within the large-amplitude correction θ0²/16 of half the
+        // small-angle period 2π sqrt(J0/(m g Lc)) (Halliday, Resnick & Walker, as above)
+        double t0 = 2 * Math.PI * Math.sqrt(1 / mgl);
+        double theta0 = Math.toRadians(10);
+        double stop = number(json, "stop_time_s");
+        assertTrue(stop >= t0 && stop <= t0 * (1 + theta0 * theta0 / 16), "stop at " + stop + " s");
+    }
+
+    /**
+     * The reversal after x1 (rad, outside the static band) with Coulomb friction Tc = 0.05 K: the
+     * root of the half-swing's energy balance between x1 and its mirror −x1, by bisection.
+     */
+    private static double reversal(double x1) {
+        DoubleUnaryOperator balance = x -> Math.cos(x) - Math.cos(x1) - 0.05 * Math.abs(x1 - x);
+        double moving = x1 - Math.signum(x1) * 1e-9; // just past x1 the balance is still positive
+        double mirror = -x1; // there it is negative: friction has taken energy on the way
+        for (int i = 0; i < 100; i++) {
+            double mid = 0.5 * (moving + mirror);
+            if (balance.applyAsDouble(mid) > 0) {
+                moving = mid;
+            } else {
+                mirror = mid;
+            }
+        }
+        return 0.5 * (moving + mirror);
+    }
+
+    private static String[] append(String[] args, String more) {
+        String[] all = Arrays.copyOf(args, args.length + 1);
+        all[args.length] = more;
+        return all;
     }
 
     @Test

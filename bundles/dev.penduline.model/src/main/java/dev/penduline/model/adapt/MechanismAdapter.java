@@ -3,6 +3,11 @@ package dev.penduline.model.adapt;
 import java.util.ArrayList;
 import java.util.List;
 
+import org.hipparchus.geometry.euclidean.threed.Rotation;
+import org.hipparchus.geometry.euclidean.threed.RotationConvention;
+import org.hipparchus.geometry.euclidean.threed.RotationOrder;
+import org.hipparchus.geometry.euclidean.threed.Vector3D;
+
 import dev.penduline.model.Mechanism;
 import dev.penduline.model.ShapeAxis;
 import dev.penduline.model.TensorReference;
@@ -13,7 +18,6 @@ import dev.penduline.physics.inertia.CadMassProperties;
 import dev.penduline.physics.inertia.Cylinder;
 import dev.penduline.physics.inertia.InertiaSummary;
 import dev.penduline.physics.inertia.InertiaTensor;
-import dev.penduline.physics.inertia.Orientation;
 import dev.penduline.physics.inertia.Part;
 import dev.penduline.physics.inertia.PartShape;
 import dev.penduline.physics.inertia.PartTolerance;
@@ -23,7 +27,6 @@ import dev.penduline.physics.inertia.PointMass;
 import dev.penduline.physics.inertia.SlenderRod;
 import dev.penduline.physics.inertia.Sphere;
 import dev.penduline.physics.inertia.ThinRing;
-import dev.penduline.physics.inertia.Vector3;
 
 /**
  * Turns a mechanism file's model into the inertia engine's inputs: parts, pivot axis, gravity.
@@ -76,7 +79,7 @@ public final class MechanismAdapter {
      */
     public static PivotAxis axis(Mechanism mechanism) {
         return new PivotAxis(
-                new Vector3(mechanism.getAxisPointX(), mechanism.getAxisPointY(), mechanism.getAxisPointZ()),
+                new Vector3D(mechanism.getAxisPointX(), mechanism.getAxisPointY(), mechanism.getAxisPointZ()),
                 axisDirection(mechanism));
     }
 
@@ -90,16 +93,16 @@ public final class MechanismAdapter {
      * @throws IllegalArgumentException when the axis is zero, the downward direction is parallel
      *                                  to the axis, or |α| ≥ π/2
      */
-    public static Vector3 gravityDirection(Mechanism mechanism) {
-        final Vector3 n = axisDirection(mechanism);
-        if (!(n.norm() > 0) || !n.isFinite()) {
+    public static Vector3D gravityDirection(Mechanism mechanism) {
+        final Vector3D n = axisDirection(mechanism);
+        if (!(n.getNorm() > 0) || n.isNaN() || n.isInfinite()) {
             throw new IllegalArgumentException("the pivot axis direction must be a non-zero vector, got " + n);
         }
-        final Vector3 unitN = n.normalized();
-        final Vector3 d = new Vector3(mechanism.getGravityDirectionX(), mechanism.getGravityDirectionY(),
+        final Vector3D unitN = n.normalize();
+        final Vector3D d = new Vector3D(mechanism.getGravityDirectionX(), mechanism.getGravityDirectionY(),
                 mechanism.getGravityDirectionZ());
-        final Vector3 perpendicular = d.minus(unitN.times(d.dot(unitN)));
-        if (!perpendicular.isFinite() || perpendicular.norm() < 1e-12 * Math.max(1, d.norm())) {
+        final Vector3D perpendicular = d.subtract(unitN.scalarMultiply(d.dotProduct(unitN)));
+        if (perpendicular.isNaN() || perpendicular.isInfinite() || perpendicular.getNorm() < 1e-12 * Math.max(1, d.getNorm())) {
             throw new IllegalArgumentException("the downward direction " + d
                     + " is parallel to the pivot axis (or zero): gravity would exert no restoring torque");
         }
@@ -108,7 +111,7 @@ public final class MechanismAdapter {
             throw new IllegalArgumentException("the axis tilt must be less than 90° in magnitude, got "
                     + Math.toDegrees(tilt) + "°");
         }
-        return perpendicular.normalized().times(Math.cos(tilt)).minus(unitN.times(Math.sin(tilt)));
+        return perpendicular.normalize().scalarMultiply(Math.cos(tilt)).subtract(unitN.scalarMultiply(Math.sin(tilt)));
     }
 
     /**
@@ -136,8 +139,8 @@ public final class MechanismAdapter {
     public static Part part(dev.penduline.model.Part p) {
         final String name = label(p);
         try {
-            final Vector3 centroid = new Vector3(p.getCentroidX(), p.getCentroidY(), p.getCentroidZ());
-            final Orientation orientation = orientation(p);
+            final Vector3D centroid = new Vector3D(p.getCentroidX(), p.getCentroidY(), p.getCentroidZ());
+            final Rotation orientation = orientation(p);
             final Part base;
             if (p.getShape() == dev.penduline.model.ShapeKind.MASS_PROPERTIES) {
                 base = massPropertiesPart(p, name, centroid, orientation);
@@ -161,16 +164,28 @@ public final class MechanismAdapter {
      * The orientation of a part's frame: rotationX about the mechanism's x axis, then rotationY
      * about its y axis, then rotationZ about its z axis (fixed axes; R = Rz·Ry·Rx).
      *
+     * <p>What the file's angles mean, in Hipparchus' terms: the three turns are vector operators
+     * (each turns a vector positively, right-hand rule, about a fixed mechanism axis), so the
+     * rotation is {@code RotationOrder.ZYX} with {@code RotationConvention.VECTOR_OPERATOR} and the
+     * angles (rotationZ, rotationY, rotationX): Hipparchus composes that as Rz·Ry·Rx, which is the
+     * same as turning about the part's own z, then its new y′, then its new x″ (intrinsic
+     * z-y′-x″). Its {@code applyTo} carries a part-frame vector into the mechanism frame.
+     *
      * @param p the part
      * @return the orientation R, mapping part-frame vectors into the mechanism frame
+     * @throws IllegalArgumentException when an angle is not finite
      */
-    public static Orientation orientation(dev.penduline.model.Part p) {
+    public static Rotation orientation(dev.penduline.model.Part p) {
         if (p.getRotationX() == 0 && p.getRotationY() == 0 && p.getRotationZ() == 0) {
-            return Orientation.IDENTITY;
+            return Rotation.IDENTITY;
         }
-        return Orientation.about(Vector3.PLUS_X, p.getRotationX())
-                .then(Orientation.about(Vector3.PLUS_Y, p.getRotationY()))
-                .then(Orientation.about(Vector3.PLUS_Z, p.getRotationZ()));
+        for (double angle : new double[] {p.getRotationX(), p.getRotationY(), p.getRotationZ()}) {
+            if (!Double.isFinite(angle)) {
+                throw new IllegalArgumentException("rotation angle must be finite, got " + angle);
+            }
+        }
+        return new Rotation(RotationOrder.ZYX, RotationConvention.VECTOR_OPERATOR,
+                p.getRotationZ(), p.getRotationY(), p.getRotationX());
     }
 
     /**
@@ -222,8 +237,8 @@ public final class MechanismAdapter {
         return container instanceof Mechanism m ? "#" + (m.getParts().indexOf(p) + 1) : "(unnamed)";
     }
 
-    private static Part massPropertiesPart(dev.penduline.model.Part p, String name, Vector3 centroid,
-            Orientation orientation) {
+    private static Part massPropertiesPart(dev.penduline.model.Part p, String name, Vector3D centroid,
+            Rotation orientation) {
         if (!p.isSetMass()) {
             throw new IllegalArgumentException("a mass-properties part needs its mass (a density is not enough)");
         }
@@ -233,20 +248,13 @@ public final class MechanismAdapter {
         }
         // About the mechanism origin, along the part frame's axes: the centroid seen from that
         // origin, in part axes, is Rᵀ·c.
-        final Vector3 local = transposeApply(orientation, centroid);
+        final Vector3D local = orientation.applyInverseTo(centroid);
         return new CadMassProperties(p.getMass(), local, tensor, dev.penduline.physics.inertia.TensorReference.FRAME_ORIGIN)
-                .toPart(name, orientation, Vector3.ZERO);
+                .toPart(name, orientation, Vector3D.ZERO);
     }
 
-    private static Vector3 transposeApply(Orientation r, Vector3 v) {
-        return new Vector3(
-                r.entry(0, 0) * v.x() + r.entry(1, 0) * v.y() + r.entry(2, 0) * v.z(),
-                r.entry(0, 1) * v.x() + r.entry(1, 1) * v.y() + r.entry(2, 1) * v.z(),
-                r.entry(0, 2) * v.x() + r.entry(1, 2) * v.y() + r.entry(2, 2) * v.z());
-    }
-
-    private static Vector3 axisDirection(Mechanism m) {
-        return new Vector3(m.getAxisDirectionX(), m.getAxisDirectionY(), m.getAxisDirectionZ());
+    private static Vector3D axisDirection(Mechanism m) {
+        return new Vector3D(m.getAxisDirectionX(), m.getAxisDirectionY(), m.getAxisDirectionZ());
     }
 
     private static Axis axis(ShapeAxis a) {

@@ -15,6 +15,7 @@ import dev.penduline.model.TensorReference;
 import dev.penduline.model.naming.NamedElements;
 import dev.penduline.physics.MechanismProperties;
 import dev.penduline.physics.inertia.InertiaSummary;
+import dev.penduline.physics.inertia.InertiaTensor;
 
 class MechanismAdapterTest {
 
@@ -104,6 +105,44 @@ class MechanismAdapterTest {
     }
 
     @Test
+    void fileAnglesTurnAGivenTensorAsRIRTransposedByHand() {
+        // rotationX = 90°, then rotationZ = 90°, both about fixed mechanism axes: R = Rz·Rx.
+        //   Rx(90°) = [[1, 0, 0], [0, 0, −1], [0, 1, 0]], Rz(90°) = [[0, −1, 0], [1, 0, 0], [0, 0, 1]]
+        //   Rz·Rx = [[0, 0, 1], [1, 0, 0], [0, 1, 0]]: the part's x lies along mechanism y, its y
+        //   along z, its z along x.
+        // A tensor turns as I' = R I Rᵀ (Goldstein, Classical Mechanics, ch. 5, the inertia tensor
+        // under a change of axes); with this permutation, for I = [[a, d, e], [d, b, f], [e, f, c]],
+        // by hand: I' = [[c, e, f], [e, a, d], [f, d, b]]. (Turned the other way round, Rx·Rz, the
+        // moment about mechanism x would be b, not c.)
+        final double a = 1.2e-4;
+        final double b = 2.1e-4;
+        final double c = 2.6e-4;
+        final double d = -1.5e-5;
+        final double e = 0.8e-5;
+        final double f = -0.6e-5;
+        final Mechanism m = NamedElements.mechanism("Latch");
+        final Part latch = NamedElements.addPart(m, "Latch");
+        latch.setShape(ShapeKind.MASS_PROPERTIES);
+        latch.setMass(0.25);
+        latch.setIxx(a);
+        latch.setIyy(b);
+        latch.setIzz(c);
+        latch.setIxy(d);
+        latch.setIxz(e);
+        latch.setIyz(f);
+        latch.setRotationX(Math.PI / 2);
+        latch.setRotationZ(Math.PI / 2);
+        final InertiaTensor t = MechanismAdapter.part(latch).centroidalInertia();
+        final double tol = 1e-15;
+        assertEquals(c, t.xx(), tol);
+        assertEquals(a, t.yy(), tol);
+        assertEquals(b, t.zz(), tol);
+        assertEquals(e, t.xy(), tol);
+        assertEquals(f, t.xz(), tol);
+        assertEquals(d, t.yz(), tol);
+    }
+
+    @Test
     void tensorAboutTheOriginGivesTheSameInertiaAsTheShape() {
         final double mass = 2.0;
         final double r = 0.05;
@@ -167,11 +206,44 @@ class MechanismAdapterTest {
     }
 
     @Test
-    void wholeHatchIsPlausible() {
+    void wholeHatchMatchesAHandSumOfItsParts() {
         final InertiaSummary s = MechanismAdapter.inertia(InspectionHatch.create());
-        // Radius of gyration at least Lc (docs/physics.md §2 "Inertia about the pivot"; follows from the parallel-axis
-        // theorem).
-        assertTrue(s.radiusOfGyration() >= s.centroidDistance());
+        // By hand, part by part, about the hinge (the z axis through the origin): each part's own
+        // moment about the z axis through its centroid, plus m (x² + y²) (parallel-axis theorem,
+        // Meriam & Kraige, Engineering Mechanics: Dynamics, Appendix B); a part's z offset along
+        // the hinge adds nothing. Moments from Machinery's Handbook, "Moments of Inertia" table.
+        // Lid: box t × a × L (x, y, z) from the density; about z: m (t² + a²)/12, at (0, −a/2, 0).
+        final double lidMass = RHO * T * A * L;
+        final double lid = lidMass * (T * T + A * A) / 12 + lidMass * (A / 2) * (A / 2);
+        // Rib, two copies: slender rod 0.38 m along y, 0.45 kg each; about z: m l²/12, at (0.012, −0.2, 0).
+        final double rib = 2 * (0.45 * 0.38 * 0.38 / 12 + 0.45 * (0.012 * 0.012 + 0.2 * 0.2));
+        // Handle: point mass 0.3 kg at (0.035, −0.37, 0).
+        final double handle = 0.3 * (0.035 * 0.035 + 0.37 * 0.37);
+        // Hinge pin: tube r = 6 mm, ri = 3 mm along z, 0.1 kg, on the axis; about its own axis m (r² + ri²)/2.
+        final double pin = 0.1 * (0.006 * 0.006 + 0.003 * 0.003) / 2;
+        // Inspection hole, cut out: solid cylinder r = 0.05 m, h = t along x, steel; about z (a
+        // diameter): m (3r² + h²)/12, at (0, −0.25, 0.15); subtracted.
+        final double holeMass = RHO * Math.PI * 0.05 * 0.05 * T;
+        final double hole = holeMass * (3 * 0.05 * 0.05 + T * T) / 12 + holeMass * 0.25 * 0.25;
+        // Latch: given tensor about its centroid, Izz = 2.6e-4 kg·m², 0.25 kg at (0.02, −0.39, 0.2).
+        final double latch = 2.6e-4 + 0.25 * (0.02 * 0.02 + 0.39 * 0.39);
+        final double mass = lidMass + 2 * 0.45 + 0.3 + 0.1 - holeMass + 0.25;
+        // Composite centroid: Σ m c / Σ m (definition).
+        final double cx = (2 * 0.45 * 0.012 + 0.3 * 0.035 + 0.25 * 0.02) / mass;
+        final double cy = (lidMass * -A / 2 + 2 * 0.45 * -0.2 + 0.3 * -0.37 - holeMass * -0.25 + 0.25 * -0.39) / mass;
+        final double cz = (-holeMass * 0.15 + 0.25 * 0.2) / mass;
+        final double j0 = lid + rib + handle + pin - hole + latch;
+        // (The same sums on a calculator: M = 8.83938498 kg, centroid (0.00297532, −0.20748573,
+        // 0.00147157) m, Lc = 0.20750706 m, J0 = 0.51314650 kg·m².)
+        assertEquals(mass, s.totalMass(), 1e-12 * mass);
+        assertEquals(cx, s.centroid().getX(), 1e-15);
+        assertEquals(cy, s.centroid().getY(), 1e-15);
+        assertEquals(cz, s.centroid().getZ(), 1e-15);
+        assertEquals(Math.hypot(cx, cy), s.centroidDistance(), 1e-15);
+        assertEquals(j0, s.pivotInertia(), 1e-12 * j0);
+        assertEquals(j0 - mass * (cx * cx + cy * cy), s.centroidalInertia(), 1e-12 * j0);
         assertEquals(6, s.contributions().size(), "one contribution per part");
+        assertEquals(lid, s.contributions().get(0).pivotInertia(), 1e-12 * lid);
+        assertEquals(-hole, s.contributions().get(4).pivotInertia(), 1e-12 * hole);
     }
 }

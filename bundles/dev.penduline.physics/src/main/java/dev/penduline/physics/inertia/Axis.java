@@ -2,18 +2,20 @@ package dev.penduline.physics.inertia;
 
 import java.util.Locale;
 
+import org.hipparchus.geometry.euclidean.threed.Vector3D;
+
 /** One of the three axes of a shape's own frame, for shapes with a long or symmetry axis. */
 public enum Axis {
     /** The x axis. */
-    X(Vector3.PLUS_X),
+    X(Vector3D.PLUS_I),
     /** The y axis. */
-    Y(Vector3.PLUS_Y),
+    Y(Vector3D.PLUS_J),
     /** The z axis. */
-    Z(Vector3.PLUS_Z);
+    Z(Vector3D.PLUS_K);
 
-    private final Vector3 unit;
+    private final Vector3D unit;
 
-    Axis(Vector3 unit) {
+    Axis(Vector3D unit) {
         this.unit = unit;
     }
 
@@ -22,7 +24,7 @@ public enum Axis {
      *
      * @return the unit vector
      */
-    public Vector3 unit() {
+    public Vector3D unit() {
         return unit;
     }
 

@@ -1,5 +1,8 @@
 package dev.penduline.physics.inertia;
 
+import org.hipparchus.geometry.euclidean.threed.Rotation;
+import org.hipparchus.geometry.euclidean.threed.Vector3D;
+
 /**
  * A mass-property report as CAD programs export it: mass, centroid and a full inertia tensor,
  * all in the report's output frame, the tensor taken either about the centroid or about the
@@ -14,7 +17,7 @@ package dev.penduline.physics.inertia;
  * @param tensor    the inertia tensor in the output frame's axes (kg·m²)
  * @param reference the point the tensor is taken about
  */
-public record CadMassProperties(double mass, Vector3 centroid, InertiaTensor tensor, TensorReference reference) {
+public record CadMassProperties(double mass, Vector3D centroid, InertiaTensor tensor, TensorReference reference) {
 
     /**
      * Checks the report.
@@ -25,7 +28,7 @@ public record CadMassProperties(double mass, Vector3 centroid, InertiaTensor ten
         if (!(mass > 0) || !Double.isFinite(mass)) {
             throw new IllegalArgumentException("mass must be positive, got " + mass + " kg");
         }
-        if (centroid == null || !centroid.isFinite()) {
+        if (centroid == null || centroid.isNaN() || centroid.isInfinite()) {
             throw new IllegalArgumentException("centroid must be a finite position, got " + centroid);
         }
         if (tensor == null || reference == null) {
@@ -57,12 +60,13 @@ public record CadMassProperties(double mass, Vector3 centroid, InertiaTensor ten
      * The part when the report's output frame sits elsewhere in the mechanism frame.
      *
      * @param name        the part's name
-     * @param frame       orientation of the output frame in the mechanism frame
+     * @param frame       orientation of the output frame in the mechanism frame: {@code frame.applyTo}
+     *                    carries a vector from the output frame's axes into the mechanism's
      * @param frameOrigin the output frame's origin in the mechanism frame (m)
      * @return the part, its tensor kept in the output frame and turned by {@code frame}
      */
-    public Part toPart(String name, Orientation frame, Vector3 frameOrigin) {
-        return Part.ofTensor(name, mass, frameOrigin.plus(frame.apply(centroid)), centroidalTensor())
+    public Part toPart(String name, Rotation frame, Vector3D frameOrigin) {
+        return Part.ofTensor(name, mass, frameOrigin.add(frame.applyTo(centroid)), centroidalTensor())
                 .withOrientation(frame);
     }
 }

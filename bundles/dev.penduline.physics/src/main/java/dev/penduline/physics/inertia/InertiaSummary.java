@@ -2,6 +2,8 @@ package dev.penduline.physics.inertia;
 
 import java.util.List;
 
+import org.hipparchus.geometry.euclidean.threed.Vector3D;
+
 import dev.penduline.physics.MechanismProperties;
 
 /**
@@ -21,7 +23,7 @@ import dev.penduline.physics.MechanismProperties;
  * @param axisTilt          tilt α of the axis from horizontal (rad, 0 to π/2)
  * @param contributions     per-part contributions, in parts-list order
  */
-public record InertiaSummary(double totalMass, Vector3 centroid, double centroidDistance, double equilibriumAngle,
+public record InertiaSummary(double totalMass, Vector3D centroid, double centroidDistance, double equilibriumAngle,
         double pivotInertia, double centroidalInertia, InertiaTensor centroidalTensor, PivotAxis axis,
         double gravity, double axisTilt, List<PartContribution> contributions) {
 

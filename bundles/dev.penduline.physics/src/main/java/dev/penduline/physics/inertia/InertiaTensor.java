@@ -1,5 +1,7 @@
 package dev.penduline.physics.inertia;
 
+import org.hipparchus.geometry.euclidean.threed.Rotation;
+import org.hipparchus.geometry.euclidean.threed.Vector3D;
 import org.hipparchus.linear.EigenDecompositionSymmetric;
 import org.hipparchus.linear.MatrixUtils;
 import org.hipparchus.linear.RealMatrix;
@@ -124,10 +126,10 @@ public record InertiaTensor(double xx, double yy, double zz, double xy, double x
      * @param r    position of the mass relative to the reference point (m)
      * @return the transfer tensor (kg·m²)
      */
-    public static InertiaTensor transfer(double mass, Vector3 r) {
-        final double x = r.x();
-        final double y = r.y();
-        final double z = r.z();
+    public static InertiaTensor transfer(double mass, Vector3D r) {
+        final double x = r.getX();
+        final double y = r.getY();
+        final double z = r.getZ();
         return new InertiaTensor(mass * (y * y + z * z), mass * (x * x + z * z), mass * (x * x + y * y),
                 -mass * x * y, -mass * x * z, -mass * y * z);
     }
@@ -140,7 +142,7 @@ public record InertiaTensor(double xx, double yy, double zz, double xy, double x
      * @param centroidFromPoint  the centroid's position relative to the new point (m)
      * @return the tensor about the new point (kg·m²)
      */
-    public InertiaTensor aboutPoint(double mass, Vector3 centroidFromPoint) {
+    public InertiaTensor aboutPoint(double mass, Vector3D centroidFromPoint) {
         return plus(transfer(mass, centroidFromPoint));
     }
 
@@ -152,7 +154,7 @@ public record InertiaTensor(double xx, double yy, double zz, double xy, double x
      * @param centroidFromPoint the centroid's position relative to the point this tensor is about (m)
      * @return the centroidal tensor (kg·m²)
      */
-    public InertiaTensor toCentroid(double mass, Vector3 centroidFromPoint) {
+    public InertiaTensor toCentroid(double mass, Vector3D centroidFromPoint) {
         return plus(transfer(-mass, centroidFromPoint));
     }
 
@@ -178,33 +180,18 @@ public record InertiaTensor(double xx, double yy, double zz, double xy, double x
 
     /**
      * This tensor expressed in the mechanism frame when it was given in a frame oriented by
-     * {@code r}: {@code R I Rᵀ}.
+     * {@code r}: {@code R I Rᵀ}, with {@code R = r.getMatrix()} the matrix for which
+     * {@code r.applyTo(v) = R v} (a vector in that frame carried into the mechanism frame).
      *
      * @param r the orientation of the frame this tensor is given in
      * @return the rotated tensor (kg·m²)
      */
-    public InertiaTensor rotated(Orientation r) {
-        if (r.isIdentity()) {
+    public InertiaTensor rotated(Rotation r) {
+        if (r.getAngle() == 0) {
             return this;
         }
-        final double[][] a = toMatrix();
-        final double[][] ra = new double[3][3];
-        for (int i = 0; i < 3; i++) {
-            for (int j = 0; j < 3; j++) {
-                for (int k = 0; k < 3; k++) {
-                    ra[i][j] += r.entry(i, k) * a[k][j];
-                }
-            }
-        }
-        final double[][] out = new double[3][3];
-        for (int i = 0; i < 3; i++) {
-            for (int j = 0; j < 3; j++) {
-                for (int k = 0; k < 3; k++) {
-                    out[i][j] += ra[i][k] * r.entry(j, k);
-                }
-            }
-        }
-        return fromMatrix(out);
+        final RealMatrix m = MatrixUtils.createRealMatrix(r.getMatrix());
+        return fromMatrix(m.multiply(toRealMatrix()).multiplyTransposed(m).getData());
     }
 
     /**
@@ -213,10 +200,15 @@ public record InertiaTensor(double xx, double yy, double zz, double xy, double x
      * @param direction the axis direction (any non-zero length; it is normalised)
      * @return the moment (kg·m²)
      */
-    public double momentAbout(Vector3 direction) {
-        final Vector3 n = direction.normalized();
-        return n.x() * n.x() * xx + n.y() * n.y() * yy + n.z() * n.z() * zz
-                + 2 * (n.x() * n.y() * xy + n.x() * n.z() * xz + n.y() * n.z() * yz);
+    public double momentAbout(Vector3D direction) {
+        if (direction.isNaN() || direction.isInfinite() || !(direction.getNorm() > 0)) {
+            throw new IllegalArgumentException("cannot take the direction of the vector " + direction);
+        }
+        final Vector3D n = direction.normalize();
+        final double x = n.getX();
+        final double y = n.getY();
+        final double z = n.getZ();
+        return x * x * xx + y * y * yy + z * z * zz + 2 * (x * y * xy + x * z * xz + y * z * yz);
     }
 
     /**

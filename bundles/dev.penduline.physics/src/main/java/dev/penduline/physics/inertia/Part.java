@@ -2,6 +2,9 @@ package dev.penduline.physics.inertia;
 
 import java.util.Objects;
 
+import org.hipparchus.geometry.euclidean.threed.Rotation;
+import org.hipparchus.geometry.euclidean.threed.Vector3D;
+
 /**
  * One line of a parts list: a shape of a given mass placed in the mechanism frame.
  *
@@ -13,12 +16,14 @@ import java.util.Objects;
  * @param shape       its shape, in its own frame
  * @param mass        the mass of one copy (kg), &gt; 0 (for a cut-out: the mass of the removed material)
  * @param centroid    the part's centroid in the mechanism frame (m)
- * @param orientation how the shape's own frame sits in the mechanism frame
+ * @param orientation how the shape's own frame sits in the mechanism frame: {@code applyTo} carries a
+ *                    vector from the shape's frame into the mechanism frame ({@link Rotation#IDENTITY}
+ *                    when the frames are parallel)
  * @param cutout      true for material removed (negative mass of the same density)
  * @param quantity    number of identical copies at the same place, ≥ 1
  * @param tolerance   ± tolerances on mass and dimensions (data only, for uncertainty studies)
  */
-public record Part(String name, PartShape shape, double mass, Vector3 centroid, Orientation orientation,
+public record Part(String name, PartShape shape, double mass, Vector3D centroid, Rotation orientation,
         boolean cutout, int quantity, PartTolerance tolerance) {
 
     /**
@@ -35,7 +40,7 @@ public record Part(String name, PartShape shape, double mass, Vector3 centroid, 
             throw new IllegalArgumentException("part '" + name + "': mass must be positive and finite, got "
                     + mass + " kg (mark a hole as a cut-out instead of giving it negative mass)");
         }
-        if (centroid == null || !centroid.isFinite()) {
+        if (centroid == null || centroid.isNaN() || centroid.isInfinite()) {
             throw new IllegalArgumentException("part '" + name + "': centroid must be a finite position, got " + centroid);
         }
         if (orientation == null) {
@@ -58,8 +63,8 @@ public record Part(String name, PartShape shape, double mass, Vector3 centroid, 
      * @param centroid its centroid in the mechanism frame (m)
      * @return the part
      */
-    public static Part of(String name, PartShape shape, double mass, Vector3 centroid) {
-        return new Part(name, shape, mass, centroid, Orientation.IDENTITY, false, 1, PartTolerance.NONE);
+    public static Part of(String name, PartShape shape, double mass, Vector3D centroid) {
+        return new Part(name, shape, mass, centroid, Rotation.IDENTITY, false, 1, PartTolerance.NONE);
     }
 
     /**
@@ -72,7 +77,7 @@ public record Part(String name, PartShape shape, double mass, Vector3 centroid, 
      * @return the part
      * @throws IllegalArgumentException when the shape has no volume or the density is not positive
      */
-    public static Part ofDensity(String name, PartShape shape, double density, Vector3 centroid) {
+    public static Part ofDensity(String name, PartShape shape, double density, Vector3D centroid) {
         if (!(density > 0) || !Double.isFinite(density)) {
             throw new IllegalArgumentException("part '" + name + "': density must be positive, got " + density + " kg/m³");
         }
@@ -90,7 +95,7 @@ public record Part(String name, PartShape shape, double mass, Vector3 centroid, 
      * @param tensor   its inertia tensor about the centroid, mechanism axes (kg·m²)
      * @return the part
      */
-    public static Part ofTensor(String name, double mass, Vector3 centroid, InertiaTensor tensor) {
+    public static Part ofTensor(String name, double mass, Vector3D centroid, InertiaTensor tensor) {
         return of(name, new GivenTensor(tensor, mass), mass, centroid);
     }
 
@@ -120,8 +125,8 @@ public record Part(String name, PartShape shape, double mass, Vector3 centroid, 
      * @param point the reference point in the mechanism frame (m)
      * @return the signed tensor (kg·m²)
      */
-    public InertiaTensor inertiaAbout(Vector3 point) {
-        return centroidalInertia().aboutPoint(signedMass(), centroid.minus(point));
+    public InertiaTensor inertiaAbout(Vector3D point) {
+        return centroidalInertia().aboutPoint(signedMass(), centroid.subtract(point));
     }
 
     /**
@@ -160,7 +165,7 @@ public record Part(String name, PartShape shape, double mass, Vector3 centroid, 
      * @param newCentroid the centroid in the mechanism frame (m)
      * @return the copy
      */
-    public Part withCentroid(Vector3 newCentroid) {
+    public Part withCentroid(Vector3D newCentroid) {
         return new Part(name, shape, mass, newCentroid, orientation, cutout, quantity, tolerance);
     }
 
@@ -170,7 +175,7 @@ public record Part(String name, PartShape shape, double mass, Vector3 centroid, 
      * @param newOrientation how the shape's frame sits in the mechanism frame
      * @return the copy
      */
-    public Part withOrientation(Orientation newOrientation) {
+    public Part withOrientation(Rotation newOrientation) {
         return new Part(name, shape, mass, centroid, newOrientation, cutout, quantity, tolerance);
     }
 

@@ -5,7 +5,8 @@ import java.util.OptionalDouble;
 /**
  * The geometry of a part, as far as its inertia goes: a standard handbook body or a tensor
  * exported by CAD. Dimensions are in metres, in the part's own frame (which the part's
- * {@link Orientation} places in the mechanism frame).
+ * orientation, a Hipparchus {@link org.hipparchus.geometry.euclidean.threed.Rotation}, places in the
+ * mechanism frame).
  */
 public sealed interface PartShape permits PointMass, SlenderRod, Box, Cylinder, Sphere, ThinRing, GivenTensor {
 

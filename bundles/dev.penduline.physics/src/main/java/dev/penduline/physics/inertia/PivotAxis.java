@@ -1,5 +1,7 @@
 package dev.penduline.physics.inertia;
 
+import org.hipparchus.geometry.euclidean.threed.Vector3D;
+
 /**
  * The axis a mechanism turns about: a point on it and its direction, in the mechanism frame.
  *
@@ -7,10 +9,10 @@ package dev.penduline.physics.inertia;
  * @param direction the axis direction; stored as a unit vector. Angles about the axis are
  *                  positive by the right-hand rule about this direction.
  */
-public record PivotAxis(Vector3 point, Vector3 direction) {
+public record PivotAxis(Vector3D point, Vector3D direction) {
 
     /** The default axis: z through the origin. */
-    public static final PivotAxis Z_THROUGH_ORIGIN = new PivotAxis(Vector3.ZERO, Vector3.PLUS_Z);
+    public static final PivotAxis Z_THROUGH_ORIGIN = new PivotAxis(Vector3D.ZERO, Vector3D.PLUS_K);
 
     /**
      * Checks the axis and normalises its direction.
@@ -18,13 +20,13 @@ public record PivotAxis(Vector3 point, Vector3 direction) {
      * @throws IllegalArgumentException for a zero or non-finite direction or point
      */
     public PivotAxis {
-        if (point == null || !point.isFinite()) {
+        if (point == null || point.isNaN() || point.isInfinite()) {
             throw new IllegalArgumentException("pivot axis point must be a finite position, got " + point);
         }
-        if (direction == null || !direction.isFinite() || !(direction.norm() > 0)) {
+        if (direction == null || direction.isNaN() || direction.isInfinite() || !(direction.getNorm() > 0)) {
             throw new IllegalArgumentException("pivot axis direction must be a non-zero finite vector, got " + direction);
         }
-        direction = direction.normalized();
+        direction = direction.normalize();
     }
 
     /**
@@ -34,9 +36,9 @@ public record PivotAxis(Vector3 point, Vector3 direction) {
      * @param p a position in the mechanism frame (m)
      * @return the perpendicular offset (m)
      */
-    public Vector3 perpendicularOffset(Vector3 p) {
-        final Vector3 r = p.minus(point);
-        return r.minus(direction.times(r.dot(direction)));
+    public Vector3D perpendicularOffset(Vector3D p) {
+        final Vector3D r = p.subtract(point);
+        return r.subtract(direction.scalarMultiply(r.dotProduct(direction)));
     }
 
     /**
@@ -45,7 +47,7 @@ public record PivotAxis(Vector3 point, Vector3 direction) {
      * @param p a position in the mechanism frame (m)
      * @return the distance (m)
      */
-    public double distanceTo(Vector3 p) {
-        return perpendicularOffset(p).norm();
+    public double distanceTo(Vector3D p) {
+        return perpendicularOffset(p).getNorm();
     }
 }

@@ -5,6 +5,8 @@ import java.util.List;
 import java.util.Locale;
 import java.util.Optional;
 
+import org.hipparchus.geometry.euclidean.threed.Vector3D;
+
 import dev.penduline.physics.MechanismProperties;
 
 /**
@@ -20,11 +22,11 @@ import dev.penduline.physics.MechanismProperties;
  * @param gravityDirection direction of gravity (any non-zero length), −y by default
  * @param gravity          local gravitational acceleration g (m/s²)
  */
-public record PivotInertia(PivotAxis axis, Vector3 gravityDirection, double gravity) {
+public record PivotInertia(PivotAxis axis, Vector3D gravityDirection, double gravity) {
 
     /** z axis through the origin, gravity along −y, standard g. */
     public static final PivotInertia DEFAULT =
-            new PivotInertia(PivotAxis.Z_THROUGH_ORIGIN, Vector3.MINUS_Y, MechanismProperties.STANDARD_GRAVITY);
+            new PivotInertia(PivotAxis.Z_THROUGH_ORIGIN, Vector3D.MINUS_J, MechanismProperties.STANDARD_GRAVITY);
 
     /** Relative slack on J0 ≥ M Lc², as in {@link MechanismProperties}. */
     private static final double INERTIA_SLACK = 1e-9;
@@ -38,10 +40,11 @@ public record PivotInertia(PivotAxis axis, Vector3 gravityDirection, double grav
         if (axis == null) {
             throw new IllegalArgumentException("pivot axis is missing");
         }
-        if (gravityDirection == null || !gravityDirection.isFinite() || !(gravityDirection.norm() > 0)) {
+        if (gravityDirection == null || gravityDirection.isNaN() || gravityDirection.isInfinite()
+                || !(gravityDirection.getNorm() > 0)) {
             throw new IllegalArgumentException("gravity direction must be a non-zero vector, got " + gravityDirection);
         }
-        gravityDirection = gravityDirection.normalized();
+        gravityDirection = gravityDirection.normalize();
         if (!(gravity > 0) || !Double.isFinite(gravity)) {
             throw new IllegalArgumentException("gravity must be positive, got " + gravity + " m/s²");
         }
@@ -63,7 +66,7 @@ public record PivotInertia(PivotAxis axis, Vector3 gravityDirection, double grav
      * @param direction the direction of gravity (any non-zero length)
      * @return the copy
      */
-    public PivotInertia withGravityDirection(Vector3 direction) {
+    public PivotInertia withGravityDirection(Vector3D direction) {
         return new PivotInertia(axis, direction, gravity);
     }
 
@@ -120,10 +123,10 @@ public record PivotInertia(PivotAxis axis, Vector3 gravityDirection, double grav
     }
 
     private InertiaSummary summary(List<Part> parts, Totals t) {
-        final Vector3 n = axis.direction();
-        final Vector3 offset = axis.perpendicularOffset(t.centroid);
-        final double lc = offset.norm();
-        final InertiaTensor central = t.aboutAxisPoint.toCentroid(t.mass, t.centroid.minus(axis.point()));
+        final Vector3D n = axis.direction();
+        final Vector3D offset = axis.perpendicularOffset(t.centroid);
+        final double lc = offset.getNorm();
+        final InertiaTensor central = t.aboutAxisPoint.toCentroid(t.mass, t.centroid.subtract(axis.point()));
         final List<PartContribution> contributions = new ArrayList<>(parts.size());
         for (Part p : parts) {
             final double j = p.inertiaAbout(axis.point()).momentAbout(n);
@@ -157,7 +160,7 @@ public record PivotInertia(PivotAxis axis, Vector3 gravityDirection, double grav
         if (fatal != null) {
             out.add(fatal);
         }
-        if (Double.isNaN(equilibriumAngle(Vector3.PLUS_X))) {
+        if (Double.isNaN(equilibriumAngle(Vector3D.PLUS_I))) {
             out.add("the pivot axis is parallel to gravity: gravity exerts no restoring torque about it");
         }
         return out;
@@ -169,23 +172,23 @@ public record PivotInertia(PivotAxis axis, Vector3 gravityDirection, double grav
      * @return α (rad), 0 for a level axis, π/2 for a vertical one
      */
     public double axisTilt() {
-        return Math.asin(Math.min(1, Math.abs(axis.direction().dot(gravityDirection))));
+        return Math.asin(Math.min(1, Math.abs(axis.direction().dotProduct(gravityDirection))));
     }
 
     /** Sums over the parts, about the axis point. */
-    private record Totals(double mass, Vector3 centroid, InertiaTensor aboutAxisPoint, double j0) {
+    private record Totals(double mass, Vector3D centroid, InertiaTensor aboutAxisPoint, double j0) {
     }
 
     private Totals totals(List<Part> parts) {
         double m = 0;
-        Vector3 moment = Vector3.ZERO;
+        Vector3D moment = Vector3D.ZERO;
         InertiaTensor about = InertiaTensor.ZERO;
         for (Part p : parts) {
             m += p.signedMass();
-            moment = moment.plus(p.centroid().times(p.signedMass()));
+            moment = moment.add(p.centroid().scalarMultiply(p.signedMass()));
             about = about.plus(p.inertiaAbout(axis.point()));
         }
-        final Vector3 c = m > 0 ? moment.times(1 / m) : Vector3.ZERO;
+        final Vector3D c = m > 0 ? moment.scalarMultiply(1 / m) : Vector3D.ZERO;
         return new Totals(m, c, about, about.momentAbout(axis.direction()));
     }
 
@@ -227,15 +230,15 @@ public record PivotInertia(PivotAxis axis, Vector3 gravityDirection, double grav
     /**
      * Angle about the axis from the straight-down direction to the given perpendicular offset.
      */
-    private double equilibriumAngle(Vector3 offset) {
-        final Vector3 n = axis.direction();
-        final Vector3 down = gravityDirection.minus(n.times(gravityDirection.dot(n)));
-        if (down.norm() < 1e-12) {
+    private double equilibriumAngle(Vector3D offset) {
+        final Vector3D n = axis.direction();
+        final Vector3D down = gravityDirection.subtract(n.scalarMultiply(gravityDirection.dotProduct(n)));
+        if (down.getNorm() < 1e-12) {
             return Double.NaN;
         }
-        if (offset.norm() < 1e-12) {
+        if (offset.getNorm() < 1e-12) {
             return 0;
         }
-        return Math.atan2(n.dot(down.cross(offset)), down.dot(offset));
+        return Math.atan2(n.dotProduct(down.crossProduct(offset)), down.dotProduct(offset));
     }
 }

@@ -4,6 +4,7 @@ import java.util.ArrayList;
 import java.util.Arrays;
 import java.util.List;
 
+import org.hipparchus.geometry.euclidean.threed.Vector3D;
 import org.hipparchus.random.RandomGenerator;
 import org.hipparchus.random.Well19937c;
 import org.hipparchus.stat.descriptive.rank.Percentile;
@@ -207,7 +208,7 @@ public final class ToleranceSpread {
                 part = part.withMass(part.mass() + mass[p]);
             }
             if (centroid[p][0] != 0 || centroid[p][1] != 0 || centroid[p][2] != 0) {
-                part = part.withCentroid(part.centroid().plus(Vector3.of(centroid[p][0], centroid[p][1], centroid[p][2])));
+                part = part.withCentroid(part.centroid().add(new Vector3D(centroid[p][0], centroid[p][1], centroid[p][2])));
             }
             if (dims[p] != null) {
                 part = part.withShape(reshaped(part.shape(), dims[p]));

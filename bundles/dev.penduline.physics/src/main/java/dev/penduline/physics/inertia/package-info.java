@@ -13,9 +13,12 @@
  *
  * <p><b>Frame and units.</b> SI throughout (kg, m, kg·m², rad). The default mechanism frame has
  * the pivot axis along z through the origin and gravity along −y, so a part hanging below the
- * pivot has negative y. A shape's dimensions are in its own frame; the part's
- * {@link dev.penduline.physics.inertia.Orientation} {@code R} turns them into the mechanism
- * frame, and its centroidal tensor becomes {@code R Icg Rᵀ}.
+ * pivot has negative y. Positions and directions are Hipparchus'
+ * {@link org.hipparchus.geometry.euclidean.threed.Vector3D}. A shape's dimensions are in its own
+ * frame; the part's orientation, a Hipparchus
+ * {@link org.hipparchus.geometry.euclidean.threed.Rotation} {@code R} (its {@code applyTo} carries
+ * a vector from the part's frame into the mechanism frame), turns them into the mechanism frame,
+ * and its centroidal tensor becomes {@code R Icg Rᵀ}.
  *
  * <p><b>Products of inertia</b> are the tensor's off-diagonal elements, {@code Ixy = −∫ x y dm}
  * (see {@link dev.penduline.physics.inertia.InertiaTensor}); CAD reports that print

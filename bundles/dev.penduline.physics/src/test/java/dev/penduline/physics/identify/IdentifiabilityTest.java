@@ -30,8 +30,10 @@ class IdentifiabilityTest {
         assertTrue(fit.warnings().stream().anyMatch(w -> w.message().contains("different amplitudes")),
                 fit.warnings().toString());
         assertTrue(Math.abs(fit.correlation().get("b", "Tc")) > 0.95, "ρ(b, Tc) = " + fit.correlation().get("b", "Tc"));
-        // and no confident wrong answer: either the truth lies within 2σ or σ is large
+        // and no confident wrong answer: its σ, inflated by the correlation, still covers the truth
+        // (an honest σ does so at 2σ in 95 % of records, the normal distribution's coverage; this
+        // one lies 0.3 σ from it)
         final ParameterEstimate b = fit.parameter("b").orElseThrow();
-        assertTrue(Math.abs(b.value() - 0.02) <= 2 * b.sigma() || b.sigma() > 0.2 * b.value(), b.toString());
+        assertTrue(Math.abs(b.value() - 0.02) <= 2 * b.sigma(), b.toString());
     }
 }

@@ -5,6 +5,8 @@ import java.util.List;
 
 import org.hipparchus.analysis.integration.gauss.GaussIntegrator;
 import org.hipparchus.analysis.integration.gauss.GaussIntegratorFactory;
+import org.hipparchus.geometry.euclidean.threed.Rotation;
+import org.hipparchus.geometry.euclidean.threed.Vector3D;
 
 /**
  * Test fixture: a body replaced by point masses at the nodes of a tensor-product Gauss–Legendre
@@ -24,13 +26,13 @@ final class GaussCloud {
     }
 
     /** A body sampled in its own frame: local positions and masses. */
-    record Sample(List<Vector3> positions, List<Double> masses) {
+    record Sample(List<Vector3D> positions, List<Double> masses) {
 
         /** The point-mass parts of this body placed at {@code centroid}, turned by {@code r}. */
-        List<Part> place(String name, Vector3 centroid, Orientation r) {
+        List<Part> place(String name, Vector3D centroid, Rotation r) {
             final List<Part> parts = new ArrayList<>(positions.size());
             for (int i = 0; i < positions.size(); i++) {
-                parts.add(Part.of(name + "#" + i, new PointMass(), masses.get(i), centroid.plus(r.apply(positions.get(i)))));
+                parts.add(Part.of(name + "#" + i, new PointMass(), masses.get(i), centroid.add(r.applyTo(positions.get(i)))));
             }
             return parts;
         }
@@ -40,7 +42,7 @@ final class GaussCloud {
         final Sample s = new Sample(new ArrayList<>(), new ArrayList<>());
         final GaussIntegrator g = FACTORY.legendre(6, -length / 2, length / 2);
         for (int i = 0; i < g.getNumberOfPoints(); i++) {
-            s.positions.add(axis.unit().times(g.getPoint(i)));
+            s.positions.add(axis.unit().scalarMultiply(g.getPoint(i)));
             s.masses.add(mass / length * g.getWeight(i));
         }
         return s;
@@ -55,7 +57,7 @@ final class GaussCloud {
         for (int i = 0; i < 4; i++) {
             for (int j = 0; j < 4; j++) {
                 for (int k = 0; k < 4; k++) {
-                    s.positions.add(new Vector3(gx.getPoint(i), gy.getPoint(j), gz.getPoint(k)));
+                    s.positions.add(new Vector3D(gx.getPoint(i), gy.getPoint(j), gz.getPoint(k)));
                     s.masses.add(rho * gx.getWeight(i) * gy.getWeight(j) * gz.getWeight(k));
                 }
             }
@@ -75,7 +77,7 @@ final class GaussCloud {
                 for (int k = 0; k < gz.getNumberOfPoints(); k++) {
                     final double r = gr.getPoint(i);
                     final double phi = gp.getPoint(j);
-                    s.positions.add(new Vector3(r * Math.cos(phi), r * Math.sin(phi), gz.getPoint(k)));
+                    s.positions.add(new Vector3D(r * Math.cos(phi), r * Math.sin(phi), gz.getPoint(k)));
                     s.masses.add(rho * r * gr.getWeight(i) * gp.getWeight(j) * gz.getWeight(k));
                 }
             }
@@ -95,7 +97,7 @@ final class GaussCloud {
                     final double r = gr.getPoint(i);
                     final double t = gt.getPoint(j);
                     final double p = gp.getPoint(k);
-                    s.positions.add(new Vector3(r * Math.sin(t) * Math.cos(p), r * Math.sin(t) * Math.sin(p),
+                    s.positions.add(new Vector3D(r * Math.sin(t) * Math.cos(p), r * Math.sin(t) * Math.sin(p),
                             r * Math.cos(t)));
                     s.masses.add(rho * r * r * Math.sin(t) * gr.getWeight(i) * gt.getWeight(j) * gp.getWeight(k));
                 }
@@ -110,7 +112,7 @@ final class GaussCloud {
         final GaussIntegrator gp = FACTORY.legendre(30, 0, 2 * Math.PI);
         for (int j = 0; j < gp.getNumberOfPoints(); j++) {
             final double p = gp.getPoint(j);
-            s.positions.add(new Vector3(radius * Math.cos(p), radius * Math.sin(p), 0));
+            s.positions.add(new Vector3D(radius * Math.cos(p), radius * Math.sin(p), 0));
             s.masses.add(mass / (2 * Math.PI) * gp.getWeight(j));
         }
         return s;

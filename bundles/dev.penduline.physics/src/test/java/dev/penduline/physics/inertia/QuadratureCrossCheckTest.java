@@ -1,9 +1,12 @@
 package dev.penduline.physics.inertia;
 
+import static org.hipparchus.geometry.euclidean.threed.RotationConvention.VECTOR_OPERATOR;
 import static org.junit.jupiter.api.Assertions.assertEquals;
 
 import java.util.List;
 
+import org.hipparchus.geometry.euclidean.threed.Rotation;
+import org.hipparchus.geometry.euclidean.threed.Vector3D;
 import org.junit.jupiter.api.Test;
 
 /**
@@ -17,12 +20,12 @@ class QuadratureCrossCheckTest {
 
     /** A skew axis through an off-origin point, so every tensor component matters. */
     private static final PivotInertia SKEW = PivotInertia.DEFAULT
-            .withAxis(new PivotAxis(new Vector3(0.05, 0.1, -0.02), new Vector3(0.3, -0.2, 1.0)));
+            .withAxis(new PivotAxis(new Vector3D(0.05, 0.1, -0.02), new Vector3D(0.3, -0.2, 1.0)));
 
     /** An arbitrary turn, so the shape's own frame is not the mechanism frame. */
-    private static final Orientation TURN = Orientation.about(new Vector3(1, 2, 0.5), 0.7);
+    private static final Rotation TURN = new Rotation(new Vector3D(1, 2, 0.5), 0.7, VECTOR_OPERATOR);
 
-    private static final Vector3 WHERE = new Vector3(0.2, -0.45, 0.07);
+    private static final Vector3D WHERE = new Vector3D(0.2, -0.45, 0.07);
 
     private static void assertSameBody(PartShape shape, double mass, GaussCloud.Sample cloud) {
         final Part part = Part.of("closed form", shape, mass, WHERE).withOrientation(TURN);
@@ -65,7 +68,7 @@ class QuadratureCrossCheckTest {
     @Test
     void cylinderAlongXMatchesQuadratureTurnedOntoX() {
         // The cloud is built along z; turning it by +90° about y carries its z axis onto x.
-        final Orientation zOntoX = Orientation.about(Vector3.PLUS_Y, Math.PI / 2);
+        final Rotation zOntoX = new Rotation(Vector3D.PLUS_J, Math.PI / 2, VECTOR_OPERATOR);
         final Part part = Part.of("closed form", new Cylinder(0.05, 0.02, 0.3, Axis.X), 1.3, WHERE);
         final InertiaSummary closed = SKEW.compute(List.of(part));
         final InertiaSummary numeric = SKEW.compute(GaussCloud.cylinderAlongZ(1.3, 0.05, 0.02, 0.3)

@@ -4,6 +4,7 @@ import static org.junit.jupiter.api.Assertions.assertEquals;
 import static org.junit.jupiter.api.Assertions.assertThrows;
 import static org.junit.jupiter.api.Assertions.assertTrue;
 
+import org.hipparchus.geometry.euclidean.threed.Vector3D;
 import org.junit.jupiter.api.Test;
 
 /**
@@ -89,14 +90,14 @@ class StandardShapesTest {
     void densityGivesMassFromVolume() {
         // A 100 mm steel cube at 7850 kg/m³ (typical carbon steel, Machinery's Handbook
         // properties of metals) weighs 7850 × 0.001 = 7.85 kg.
-        final Part cube = Part.ofDensity("cube", new Box(0.1, 0.1, 0.1), 7850, Vector3.ZERO);
+        final Part cube = Part.ofDensity("cube", new Box(0.1, 0.1, 0.1), 7850, Vector3D.ZERO);
         assertEquals(7.85, cube.mass(), 1e-12);
     }
 
     @Test
     void shapesWithoutVolumeRefuseADensity() {
         final IllegalArgumentException e = assertThrows(IllegalArgumentException.class,
-                () -> Part.ofDensity("link", new SlenderRod(1, Axis.X), 7850, Vector3.ZERO));
+                () -> Part.ofDensity("link", new SlenderRod(1, Axis.X), 7850, Vector3D.ZERO));
         assertTrue(e.getMessage().contains("'link'") && e.getMessage().contains("rod"), e.getMessage());
     }
 

@@ -6,6 +6,7 @@ import static org.junit.jupiter.api.Assertions.assertTrue;
 
 import java.util.List;
 
+import org.hipparchus.geometry.euclidean.threed.Vector3D;
 import org.junit.jupiter.api.Test;
 
 class ToleranceSpreadTest {
@@ -18,7 +19,7 @@ class ToleranceSpreadTest {
 
     /** A slender rod along x, its centroid D below the pivot axis (the z axis through the origin). */
     private static List<Part> rod() {
-        return List.of(Part.of("arm", new SlenderRod(L, Axis.X), M, Vector3.of(0, -D, 0))
+        return List.of(Part.of("arm", new SlenderRod(L, Axis.X), M, new Vector3D(0, -D, 0))
                 .withTolerance(new PartTolerance(MASS_TOL, DIM_TOL)));
     }
 
@@ -61,7 +62,7 @@ class ToleranceSpreadTest {
 
     @Test
     void withoutTolerancesThereIsNothingToSpreadAndASeedRepeats() {
-        assertFalse(ToleranceSpread.applies(List.of(Part.of("arm", new SlenderRod(L, Axis.X), M, Vector3.of(0, -D, 0)))));
+        assertFalse(ToleranceSpread.applies(List.of(Part.of("arm", new SlenderRod(L, Axis.X), M, new Vector3D(0, -D, 0)))));
         assertTrue(ToleranceSpread.applies(rod()));
         final ToleranceSpread.Result a = ToleranceSpread.of(PivotInertia.DEFAULT, rod(), 50, 9);
         final ToleranceSpread.Result b = ToleranceSpread.of(PivotInertia.DEFAULT, rod(), 50, 9);
@@ -71,7 +72,7 @@ class ToleranceSpreadTest {
     @Test
     void drawsThatCannotBeComputedAreCountedNotFatal() {
         // a rod 1 mm long with a 2 mm dimension tolerance goes below zero length in about a quarter of the draws
-        final List<Part> shortRod = List.of(Part.of("pin", new SlenderRod(0.001, Axis.X), 0.1, Vector3.of(0, -0.3, 0))
+        final List<Part> shortRod = List.of(Part.of("pin", new SlenderRod(0.001, Axis.X), 0.1, new Vector3D(0, -0.3, 0))
                 .withTolerance(new PartTolerance(0, 0.002)));
         final ToleranceSpread.Result r = ToleranceSpread.of(PivotInertia.DEFAULT, shortRod, 2000, 1);
         assertTrue(r.failed() > 300 && r.failed() < 700, "failed " + r.failed());

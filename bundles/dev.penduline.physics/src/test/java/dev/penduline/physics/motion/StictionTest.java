@@ -40,9 +40,19 @@ class StictionTest {
         final double halfPeriod = Math.PI / ARM.naturalFrequency();
         assertEquals(6 * halfPeriod, sameAsCoulomb.stopTime(), 1e-8);
         assertEquals(5 * halfPeriod, sticky.stopTime(), 1e-8);
-        // the closed form agrees on both
-        assertEquals(a, roundTrip(new LinearCoulombDecay(ARM, tc, 0).turningPoints(theta0), a));
-        assertEquals(b, roundTrip(new LinearCoulombDecay(ARM, tc, 0.011 * K).turningPoints(theta0), b));
+        // the reversals by hand above, one every half period (a linear oscillator with Coulomb
+        // friction keeps its period: Den Hartog, as above), and the closed form, agree with both runs
+        final double[] byHand = {0.1, -0.082, 0.064, -0.046, 0.028, -0.010, -0.008};
+        for (int i = 0; i < a.size(); i++) {
+            assertEquals(byHand[i], a.get(i).angle() - ARM.equilibriumAngle(), 1e-10, "reversal " + i);
+            assertEquals(i * halfPeriod, a.get(i).time(), 1e-8, "time of reversal " + i);
+        }
+        for (int i = 0; i < b.size(); i++) {
+            assertEquals(byHand[i], b.get(i).angle() - ARM.equilibriumAngle(), 1e-10, "sticky reversal " + i);
+            assertEquals(i * halfPeriod, b.get(i).time(), 1e-8, "time of sticky reversal " + i);
+        }
+        assertSameTurningPoints(new LinearCoulombDecay(ARM, tc, 0).turningPoints(theta0), a);
+        assertSameTurningPoints(new LinearCoulombDecay(ARM, tc, 0.011 * K).turningPoints(theta0), b);
     }
 
     @Test
@@ -103,13 +113,12 @@ class StictionTest {
         assertEquals(0, run.energy().imbalance(), 1e-12);
     }
 
-    /** Compares closed-form points with simulated ones (1e-8 s, 1e-10 rad), returning the simulated list when they agree. */
-    private static List<TurningPoint> roundTrip(List<TurningPoint> closed, List<TurningPoint> simulated) {
+    /** Compares closed-form points with simulated ones (1e-8 s, 1e-10 rad). */
+    private static void assertSameTurningPoints(List<TurningPoint> closed, List<TurningPoint> simulated) {
         assertEquals(closed.size(), simulated.size());
         for (int i = 0; i < closed.size(); i++) {
-            assertEquals(closed.get(i).time(), simulated.get(i).time(), 1e-8);
-            assertEquals(closed.get(i).angle(), simulated.get(i).angle(), 1e-10);
+            assertEquals(closed.get(i).time(), simulated.get(i).time(), 1e-8, "time of point " + i);
+            assertEquals(closed.get(i).angle(), simulated.get(i).angle(), 1e-10, "angle of point " + i);
         }
-        return simulated;
     }
 }

@@ -27,6 +27,9 @@ class NarrowAmplitudeVerdictRegressionTest {
         assertEquals(LossVerdict.Loss.VISCOUS, a.verdict().kind(), a.verdict().evidence().toString());
         DecrementRegression r = a.regression().orElseThrow();
         assertTrue(r.dropped().contains("a0") && r.dropped().contains("a2"), r.dropped().toString());
-        assertEquals(0.01, a.estimates().orElseThrow().viscous(), 0.15 * 0.01);
+        // the first estimate: low by up to 0.36 % at 15° from the small-angle viscous work (the
+        // basis is in SyntheticRecordTest.pureViscous), and the regression's own scatter, 3 σ
+        FrictionEstimates e = a.estimates().orElseThrow();
+        assertEquals(0.01, e.viscous(), 0.0036 * 0.01 + 3 * e.viscousError());
     }
 }

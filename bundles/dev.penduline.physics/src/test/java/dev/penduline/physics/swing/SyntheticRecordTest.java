@@ -71,7 +71,13 @@ class SyntheticRecordTest {
         assertEquals(DecayEnvelope.Model.GEOMETRIC, a.verdict().bestEnvelope());
         // ζ from the logarithmic decrement (Thomson, Theory of Vibration with Applications, §2.6)
         assertEquals(zeta, a.envelope(DecayEnvelope.Model.GEOMETRIC).orElseThrow().dampingRatio(), 0.03 * zeta);
-        assertEquals(b, a.estimates().orElseThrow().viscous(), 0.15 * b);
+        // The first estimate's basis (DecrementRegression): its work integrals assume small-angle,
+        // harmonic half-swings. Over a pendulum's half-swing of amplitude A the viscous work is
+        // b ωn ∫ sqrt(2(cos θ − cos A)) dθ over −A..A (ω from the pendulum's energy integral),
+        // 0.9937 of the small-angle (π/2) b ωn A² at A = 20° (the integral evaluated numerically),
+        // so b comes out low by up to 0.64 %; on top, the regression's own scatter, 3 of its σ.
+        final FrictionEstimates e = a.estimates().orElseThrow();
+        assertEquals(b, e.viscous(), 0.0064 * b + 3 * e.viscousError());
         assertTrue(!a.stop().stopped());
     }
 
@@ -126,7 +132,12 @@ class SyntheticRecordTest {
                 Math.toRadians(40)));
         assertEquals(LossVerdict.Loss.DRAG, a.verdict().kind());
         assertEquals(DecayEnvelope.Model.RECIPROCAL, a.verdict().bestEnvelope());
-        assertEquals(0.05, a.estimates().orElseThrow().drag(), 0.15 * 0.05);
+        // The small-angle drag work (4/3) c ωn² A³ of DecrementRegression overstates the
+        // pendulum's c ωn² ∫ 2(cos θ − cos A) dθ = 4 c ωn² (sin A − A cos A) by the factor
+        // A³ / (3(sin A − A cos A)): 1/0.952 at 40°, so the first estimate of c is low by up to
+        // 4.8 %; the viscous term the regression keeps beside it (0.004 against a true 0.002 here)
+        // takes a little more of the same decrement: 8 % in all.
+        assertEquals(0.05, a.estimates().orElseThrow().drag(), 0.08 * 0.05);
     }
 
     @Test
@@ -138,8 +149,12 @@ class SyntheticRecordTest {
         assertEquals(LossVerdict.Loss.MIXED, a.verdict().kind());
         assertTrue(a.verdict().coulombShare() > 0.25 && a.verdict().viscousShare() > 0.25,
                 "both terms carry a share: " + a.verdict());
-        assertEquals(tc, a.estimates().orElseThrow().coulomb(), 0.25 * tc);
-        assertEquals(b, a.estimates().orElseThrow().viscous(), 0.35 * b);
+        // Coulomb's work over a half-swing, Tc (A1 + A2), is exact at any amplitude; the viscous
+        // work's small-angle form is high by up to 0.64 % at 20° (see pureViscous). The two terms
+        // trade against each other in the regression, whose σ carries that: within 3 σ.
+        final FrictionEstimates e = a.estimates().orElseThrow();
+        assertEquals(tc, e.coulomb(), 3 * e.coulombError());
+        assertEquals(b, e.viscous(), 0.0064 * b + 3 * e.viscousError());
     }
 
     @Test

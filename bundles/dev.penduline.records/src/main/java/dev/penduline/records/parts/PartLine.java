@@ -7,11 +7,13 @@ import java.util.Optional;
 import java.util.OptionalDouble;
 import java.util.Set;
 
+import org.hipparchus.geometry.euclidean.threed.Rotation;
+import org.hipparchus.geometry.euclidean.threed.Vector3D;
+
 import dev.penduline.physics.inertia.Axis;
 import dev.penduline.physics.inertia.Box;
 import dev.penduline.physics.inertia.Cylinder;
 import dev.penduline.physics.inertia.InertiaTensor;
-import dev.penduline.physics.inertia.Orientation;
 import dev.penduline.physics.inertia.Part;
 import dev.penduline.physics.inertia.PartShape;
 import dev.penduline.physics.inertia.PartTolerance;
@@ -20,7 +22,6 @@ import dev.penduline.physics.inertia.SlenderRod;
 import dev.penduline.physics.inertia.Sphere;
 import dev.penduline.physics.inertia.TensorCheck;
 import dev.penduline.physics.inertia.ThinRing;
-import dev.penduline.physics.inertia.Vector3;
 import dev.penduline.records.PlainText;
 import dev.penduline.records.RecordFormatException;
 
@@ -72,12 +73,12 @@ final class PartLine {
                         + "' is not used by a " + kind + " and is ignored");
             }
         }
-        final Vector3 centroid = new Vector3(coordinate(row, PartsColumn.X), coordinate(row, PartsColumn.Y),
+        final Vector3D centroid = new Vector3D(coordinate(row, PartsColumn.X), coordinate(row, PartsColumn.Y),
                 coordinate(row, PartsColumn.Z));
         final double mass = mass(row, shape, kind);
         final Part base = shape == null
                 ? Part.ofTensor(name, mass, centroid, tensor(row))
-                : new Part(name, shape, mass, centroid, Orientation.IDENTITY, false, 1, PartTolerance.NONE);
+                : new Part(name, shape, mass, centroid, Rotation.IDENTITY, false, 1, PartTolerance.NONE);
         return base.withCutout(cutout(row)).withQuantity(quantity(row))
                 .withTolerance(new PartTolerance(row.nonNegative(PartsColumn.MASS_TOL), row.nonNegative(PartsColumn.DIM_TOL)));
     }

@@ -91,7 +91,7 @@ class PartsListReaderTest {
                 PivotInertia.DEFAULT.compute(converted.parts()).pivotInertia(), 1e-12);
         final Part arm = converted.parts().get(0);
         assertEquals(1.2, arm.mass(), 1e-15);
-        assertEquals(-0.4, arm.centroid().y(), 1e-15);
+        assertEquals(-0.4, arm.centroid().getY(), 1e-15);
         assertEquals(0.005, arm.tolerance().mass(), 1e-18);
         assertEquals(0.02, ((Cylinder) converted.parts().get(4).shape()).radius(), 1e-15);
     }

@@ -97,8 +97,8 @@ public record MechanismSheet(String title, String source, List<TotalRow> totals,
                     : Figures.significant(t.valueOf(s));
             rows.add(new TotalRow(t, t.label(), value, t.unit()));
             if (t == InertiaTotal.MASS) {
-                rows.add(new TotalRow(null, "centroid (x, y, z)", "(" + Figures.significant(s.centroid().x()) + ", "
-                        + Figures.significant(s.centroid().y()) + ", " + Figures.significant(s.centroid().z()) + ")",
+                rows.add(new TotalRow(null, "centroid (x, y, z)", "(" + Figures.significant(s.centroid().getX()) + ", "
+                        + Figures.significant(s.centroid().getY()) + ", " + Figures.significant(s.centroid().getZ()) + ")",
                         "m"));
             }
         }
