@@ -144,7 +144,7 @@ public final class FitWording {
      * @return "viscous", "coulomb", "stiction" or "drag"
      */
     public static String word(FrictionTerm t) {
-        return t.name().toLowerCase(Locale.ROOT);
+        return t.word();
     }
 
     /**

@@ -232,7 +232,7 @@ public record StoredFitText(String id, String computedAt, String status, String 
         if ("mixed".equals(dominant)) {
             return "Verdict: mixed: no loss leads the next by a clear margin (see the shares)";
         }
-        double share = shareOf(r, "stiction".equals(dominant) ? "coulomb" : dominant);
+        double share = shareOf(r, FrictionTerm.STICTION.word().equals(dominant) ? FrictionTerm.COULOMB.word() : dominant);
         return "Verdict: " + lossName(dominant) + " dominates, dissipating "
                 + Figures.fixed(100 * share, 0) + " % of the energy lost over the records";
     }

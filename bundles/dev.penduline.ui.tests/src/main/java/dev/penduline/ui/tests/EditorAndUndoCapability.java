@@ -144,7 +144,7 @@ final class EditorAndUndoCapability implements Capability {
         int before = parts.getItemCount();
         press("parts", "Add");
         assertEquals(before + 1, parts.getItemCount(), "Add adds a row");
-        assertEquals("point-mass", parts.getItem(before).getText(column(parts, "shape")), "a new part is a point mass");
+        assertEquals("point", parts.getItem(before).getText(column(parts, "shape")), "a new part is a point mass");
         parts.setSelection(before);
         press("parts", "Duplicate");
         assertEquals(before + 2, parts.getItemCount(), "Duplicate adds a copy");
