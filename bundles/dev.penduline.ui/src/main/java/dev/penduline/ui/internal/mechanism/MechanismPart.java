@@ -44,7 +44,6 @@ import dev.penduline.ui.internal.document.MechanismDocument;
  */
 public final class MechanismPart {
 
-    static final String CAUTION = Cautions.TEXT;
     private static final String HINT = "Select a mechanism file (.penduline) or a parts list (.csv) in Project Files.";
 
     private final UISynchronize sync;
@@ -97,7 +96,7 @@ public final class MechanismPart {
         GridDataFactory.fillDefaults().grab(true, false).hint(300, SWT.DEFAULT).applyTo(warnings);
         exclude(warnings, true);
         Label caution = new Label(parent, SWT.WRAP);
-        caution.setText(CAUTION);
+        caution.setText(Cautions.TEXT);
         caution.setFont(JFaceResources.getFontRegistry().getItalic(JFaceResources.DEFAULT_FONT));
         GridDataFactory.fillDefaults().grab(true, false).hint(300, SWT.DEFAULT).applyTo(caution);
         live = new LiveModel(sync::asyncExec, () -> {
