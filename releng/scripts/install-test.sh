@@ -90,7 +90,7 @@ fi
 cp_jars=""
 for jar in "$product"/plugins/dev.penduline.*.jar "$product"/plugins/org.hipparchus.*.jar \
            "$product"/plugins/org.eclipse.emf.common_*.jar "$product"/plugins/org.eclipse.emf.ecore_*.jar \
-           "$product"/plugins/org.eclipse.emf.ecore.xmi_*.jar; do
+           "$product"/plugins/org.eclipse.emf.ecore.xmi_*.jar "$product"/plugins/com.google.gson_*.jar; do
   case "$(basename "$jar")" in dev.penduline.ui*|dev.penduline.app*) continue ;; esac
   cp_jars="$cp_jars${cp_jars:+:}$jar"
 done

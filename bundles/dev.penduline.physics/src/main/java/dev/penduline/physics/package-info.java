@@ -10,5 +10,9 @@
  *
  * <p>Units are SI throughout: kilograms, metres, seconds, radians, newton-metres. Conversion
  * to degrees, millimetres or encoder counts happens only at the edges (import and display).
+ *
+ * <p>The physics and the methods are written out with their published sources in the
+ * repository's {@code docs/physics.md} and {@code docs/methods.md}; the layers in
+ * {@code docs/architecture.md}.
  */
 package dev.penduline.physics;

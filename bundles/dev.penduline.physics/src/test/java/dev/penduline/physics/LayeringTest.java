@@ -16,10 +16,11 @@ import java.util.stream.Stream;
 import org.junit.jupiter.api.Test;
 
 /**
- * The layering rule of the architecture, enforced: the physics and the model run headless and
- * outside OSGi, so nothing in them may import a user interface, a workbench, OSGi or the
- * workspace; the physics may not import EMF either, and no lower layer imports a higher one.
- * Checked on the import lines of the sources (the bundle manifests state the same rule to OSGi).
+ * The layering rule of the architecture (docs/architecture.md §1 "The layers"), enforced: the
+ * physics and the model run headless and outside OSGi, so nothing in them may import a user
+ * interface, a workbench, OSGi or the workspace; the physics may not import EMF either, and no
+ * lower layer imports a higher one. Checked on the import lines of the sources (the bundle
+ * manifests state the same rule to OSGi).
  */
 class LayeringTest {
 

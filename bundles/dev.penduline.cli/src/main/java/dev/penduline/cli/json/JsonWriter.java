@@ -1,31 +1,41 @@
 package dev.penduline.cli.json;
 
+import java.io.FilterWriter;
+import java.io.IOException;
 import java.io.PrintWriter;
-import java.util.ArrayDeque;
-import java.util.Deque;
+import java.io.UncheckedIOException;
+import java.io.Writer;
 
 /**
- * A small streaming JSON writer for the command line's {@code --json} output: objects, arrays,
- * strings, numbers and booleans, indented by two spaces, keys in the order written. Non-finite
- * numbers are written as {@code null} (JSON has no NaN). Misuse (a value where a key is due,
+ * The command line's {@code --json} output, written by Gson's streaming writer
+ * ({@link com.google.gson.stream.JsonWriter}): objects, arrays, strings, numbers and booleans,
+ * indented by two spaces, keys in the order written, strings escaped by Gson. This class adds
+ * only what Gson does not do the CLI's way: the fluent {@code field(key, value)} shorthand, no
+ * checked exceptions (the output is a {@link PrintWriter}, which reports no I/O errors), and the
+ * numbers: an integral double below 10<sup>15</sup> in magnitude is written as an integer
+ * ({@code 3}, not Gson's {@code 3.0}), any other finite double with the shortest digits that read
+ * back the same value ({@link Double#toString(double)}), and a non-finite one as {@code null}
+ * (JSON has no NaN, RFC 8259 §6, where Gson would throw). Misuse (a value where a key is due,
  * unbalanced ends) is a programming error and throws {@link IllegalStateException}.
  */
 public final class JsonWriter {
 
-    private enum Scope { OBJECT, ARRAY }
+    /** Integral doubles below this magnitude are written without a fraction (all are exact longs). */
+    private static final double INTEGRAL_LIMIT = 1e15;
 
     private final PrintWriter out;
-    private final Deque<Scope> scopes = new ArrayDeque<>();
-    private final Deque<Boolean> empty = new ArrayDeque<>();
-    private boolean keyPending;
+    private final com.google.gson.stream.JsonWriter gson;
 
     /**
      * Creates a writer.
      *
-     * @param out where the JSON text goes
+     * @param out where the JSON text goes (not closed by {@link #finish()})
      */
     public JsonWriter(PrintWriter out) {
         this.out = out;
+        this.gson = new com.google.gson.stream.JsonWriter(new Unclosed(out));
+        gson.setIndent("  ");
+        gson.setSerializeNulls(true);
     }
 
     /**
@@ -34,11 +44,7 @@ public final class JsonWriter {
      * @return this writer
      */
     public JsonWriter beginObject() {
-        beforeValue();
-        out.print('{');
-        scopes.push(Scope.OBJECT);
-        empty.push(Boolean.TRUE);
-        return this;
+        return io(gson::beginObject);
     }
 
     /**
@@ -47,7 +53,7 @@ public final class JsonWriter {
      * @return this writer
      */
     public JsonWriter endObject() {
-        return end(Scope.OBJECT, '}');
+        return io(gson::endObject);
     }
 
     /**
@@ -56,11 +62,7 @@ public final class JsonWriter {
      * @return this writer
      */
     public JsonWriter beginArray() {
-        beforeValue();
-        out.print('[');
-        scopes.push(Scope.ARRAY);
-        empty.push(Boolean.TRUE);
-        return this;
+        return io(gson::beginArray);
     }
 
     /**
@@ -69,7 +71,7 @@ public final class JsonWriter {
      * @return this writer
      */
     public JsonWriter endArray() {
-        return end(Scope.ARRAY, ']');
+        return io(gson::endArray);
     }
 
     /**
@@ -79,14 +81,7 @@ public final class JsonWriter {
      * @return this writer
      */
     public JsonWriter name(String key) {
-        if (scopes.peek() != Scope.OBJECT || keyPending) {
-            throw new IllegalStateException("a key is only allowed directly inside an object: " + key);
-        }
-        separate();
-        out.print(quote(key));
-        out.print(": ");
-        keyPending = true;
-        return this;
+        return io(() -> gson.name(key));
     }
 
     /**
@@ -96,21 +91,24 @@ public final class JsonWriter {
      * @return this writer
      */
     public JsonWriter value(String value) {
-        beforeValue();
-        out.print(value == null ? "null" : quote(value));
-        return this;
+        return io(() -> gson.value(value));
     }
 
     /**
-     * Writes a number with enough digits to read back the same double; non-finite as null.
+     * Writes a number: integral below 10<sup>15</sup> as an integer, else the shortest digits that
+     * read back the same double; non-finite as null.
      *
      * @param value the number
      * @return this writer
      */
     public JsonWriter value(double value) {
-        beforeValue();
-        out.print(format(value));
-        return this;
+        if (!Double.isFinite(value)) {
+            return io(gson::nullValue);
+        }
+        if (value == Math.rint(value) && Math.abs(value) < INTEGRAL_LIMIT) {
+            return io(() -> gson.value((long) value));
+        }
+        return io(() -> gson.value(value));
     }
 
     /**
@@ -120,9 +118,7 @@ public final class JsonWriter {
      * @return this writer
      */
     public JsonWriter value(long value) {
-        beforeValue();
-        out.print(value);
-        return this;
+        return io(() -> gson.value(value));
     }
 
     /**
@@ -132,9 +128,7 @@ public final class JsonWriter {
      * @return this writer
      */
     public JsonWriter value(boolean value) {
-        beforeValue();
-        out.print(value);
-        return this;
+        return io(() -> gson.value(value));
     }
 
     /**
@@ -198,85 +192,40 @@ public final class JsonWriter {
 
     /** Ends the document with a newline and flushes; every scope must be closed. */
     public void finish() {
-        if (!scopes.isEmpty()) {
-            throw new IllegalStateException("unclosed JSON " + scopes.peek());
+        try {
+            gson.close(); // refuses an incomplete document; closes only the Unclosed wrapper
+        } catch (IOException e) {
+            throw new IllegalStateException("unclosed JSON: " + e.getMessage(), e);
         }
         out.println();
         out.flush();
     }
 
-    private JsonWriter end(Scope scope, char close) {
-        if (scopes.peek() != scope || keyPending) {
-            throw new IllegalStateException("cannot close " + scope + " here");
+    private JsonWriter io(Step step) {
+        try {
+            step.run();
+        } catch (IOException e) {
+            throw new UncheckedIOException(e); // a PrintWriter reports none; kept for the contract
         }
-        scopes.pop();
-        boolean wasEmpty = empty.pop();
-        if (!wasEmpty) {
-            newline();
-        }
-        out.print(close);
         return this;
     }
 
-    private void beforeValue() {
-        if (scopes.isEmpty()) {
-            return;
-        }
-        if (scopes.peek() == Scope.OBJECT) {
-            if (!keyPending) {
-                throw new IllegalStateException("a value inside an object needs a key first");
-            }
-            keyPending = false;
-        } else {
-            separate();
-        }
+    /** One call of Gson's writer. */
+    @FunctionalInterface
+    private interface Step {
+        void run() throws IOException;
     }
 
-    private void separate() {
-        if (!empty.peek()) {
-            out.print(',');
-        }
-        empty.pop();
-        empty.push(Boolean.FALSE);
-        newline();
-    }
+    /** The output as Gson sees it: closing it leaves the caller's writer open. */
+    private static final class Unclosed extends FilterWriter {
 
-    private void newline() {
-        out.println();
-        for (int i = 0; i < scopes.size(); i++) {
-            out.print("  ");
+        Unclosed(Writer out) {
+            super(out);
         }
-    }
 
-    static String format(double value) {
-        if (!Double.isFinite(value)) {
-            return "null";
+        @Override
+        public void close() {
+            // the caller owns the stream (standard output, or a file it closes itself)
         }
-        if (value == Math.rint(value) && Math.abs(value) < 1e15) {
-            return Long.toString((long) value);
-        }
-        return Double.toString(value);
-    }
-
-    static String quote(String s) {
-        StringBuilder b = new StringBuilder(s.length() + 2).append('"');
-        for (int i = 0; i < s.length(); i++) {
-            char c = s.charAt(i);
-            switch (c) {
-                case '"' -> b.append("\\\"");
-                case '\\' -> b.append("\\\\");
-                case '\n' -> b.append("\\n");
-                case '\r' -> b.append("\\r");
-                case '\t' -> b.append("\\t");
-                default -> {
-                    if (c < 0x20) {
-                        b.append(String.format("\\u%04x", (int) c));
-                    } else {
-                        b.append(c);
-                    }
-                }
-            }
-        }
-        return b.append('"').toString();
     }
 }

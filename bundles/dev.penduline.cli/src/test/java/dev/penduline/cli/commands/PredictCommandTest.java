@@ -1,15 +1,18 @@
 package dev.penduline.cli.commands;
 
+import static dev.penduline.cli.JsonTree.at;
 import static org.junit.jupiter.api.Assertions.assertEquals;
+import static org.junit.jupiter.api.Assertions.assertFalse;
 import static org.junit.jupiter.api.Assertions.assertTrue;
 
 import java.nio.file.Path;
-import java.util.regex.Matcher;
-import java.util.regex.Pattern;
+import java.util.Arrays;
+import java.util.Map;
 
 import org.junit.jupiter.api.Test;
 
 import dev.penduline.cli.ExitCode;
+import dev.penduline.cli.JsonTree;
 
 class PredictCommandTest {
 
@@ -21,10 +24,11 @@ class PredictCommandTest {
         return cli.run(args);
     }
 
-    private static double number(String json, String path) {
-        Matcher m = Pattern.compile(path + "[^0-9-]*([-0-9.eE]+)", Pattern.DOTALL).matcher(json);
-        assertTrue(m.find(), path + " missing in " + json);
-        return Double.parseDouble(m.group(1));
+    /** A number of the {@code --json} output at a path of keys and indices. */
+    private static double number(String json, Object... path) {
+        double v = JsonTree.number(JsonTree.parse(json), path);
+        assertFalse(Double.isNaN(v), Arrays.toString(path) + " missing in " + json);
+        return v;
     }
 
     @Test
@@ -35,11 +39,12 @@ class PredictCommandTest {
         assertEquals(ExitCode.OK, run("predict", "--mass", "1", "--centroid-distance", "1", "--pivot-inertia", "1",
                 "--viscous", "0", "--theta0-deg", "60", "--at-deg", "0", "--radius-m", "1", "--json"), cli.err());
         String json = cli.out();
-        assertEquals("options", json.replaceAll("(?s).*\"fit\": \"([^\"]*)\".*", "$1"));
-        assertEquals(-Math.sqrt(9.80665), number(json, "\"angular_velocity_rad_s\": \\{\\s*\"value\""), 1e-6);
-        assertEquals(Math.sqrt(9.80665), number(json, "\"tip_speed_m_s\": \\{\\s*\"value\""), 1e-4);
-        assertEquals(0.5 * 9.80665, number(json, "\"kinetic_energy_J\": \\{\\s*\"value\""), 1e-3);
-        assertTrue(json.contains("\"settled\": false"), json);
+        Object tree = JsonTree.parse(json);
+        assertEquals("options", at(tree, "fit"), json);
+        assertEquals(-Math.sqrt(9.80665), number(json, "at_angle", "angular_velocity_rad_s", "value"), 1e-6);
+        assertEquals(Math.sqrt(9.80665), number(json, "at_angle", "tip_speed_m_s", "value"), 1e-4);
+        assertEquals(0.5 * 9.80665, number(json, "at_angle", "kinetic_energy_J", "value"), 1e-3);
+        assertEquals(Boolean.FALSE, at(tree, "settled"), json);
     }
 
     @Test
@@ -47,17 +52,19 @@ class PredictCommandTest {
         assertEquals(ExitCode.OK, run("predict", HATCH.toString(), "--theta0-deg", "40", "--at-deg", "0",
                 "--draws", "20", "--json"), cli.err());
         String json = cli.out();
-        assertTrue(json.contains("\"fit\": \"fit-"), json);
-        for (String key : new String[] {"settle_time_s", "half_swings", "peak_angular_velocity_rad_s", "peak_time_s",
-                "max_overshoot_deg", "kinetic_energy_J"}) {
-            double value = number(json, "\"" + key + "\": \\{\\s*\"value\"");
-            double low = number(json, "\"" + key + "\": \\{[^}]*\"low\"");
-            double high = number(json, "\"" + key + "\": \\{[^}]*\"high\"");
-            assertTrue(low <= high, key + ": " + low + " > " + high);
-            assertTrue(Double.isFinite(value), key);
+        Object tree = JsonTree.parse(json);
+        assertTrue(at(tree, "fit") instanceof String id && id.startsWith("fit-"), json);
+        for (String[] key : new String[][] {{"settle_time_s"}, {"half_swings"}, {"peak_angular_velocity_rad_s"},
+            {"peak_time_s"}, {"max_overshoot_deg"}, {"at_angle", "kinetic_energy_J"}}) {
+            double value = number(json, (Object[]) concat(key, new String[] {"value"}));
+            double low = number(json, (Object[]) concat(key, new String[] {"low"}));
+            double high = number(json, (Object[]) concat(key, new String[] {"high"}));
+            assertTrue(low <= high, Arrays.toString(key) + ": " + low + " > " + high);
+            assertTrue(Double.isFinite(value), Arrays.toString(key));
         }
-        assertTrue(json.contains("\"band_definition\": \"low and high are the 5th and 95th percentiles"), json);
-        assertTrue(json.contains("\"rest_band_deg\": {"), json);
+        assertTrue(at(tree, "band_definition") instanceof String d
+                && d.startsWith("low and high are the 5th and 95th percentiles"), json);
+        assertTrue(at(tree, "rest_band_deg") instanceof Map, json);
     }
 
     @Test
@@ -96,14 +103,14 @@ class PredictCommandTest {
             "17", "--band-deg", "0.5", "--settle-within-s", "8", "--json"});
         assertEquals(ExitCode.OK, run(args), cli.err());
         String json = cli.out();
-        assertTrue(json.contains("\"meets\": true"), json);
-        double total = number(json, "\"total\"");
+        assertEquals(Boolean.TRUE, at(JsonTree.parse(json), "design", "meets"), json);
+        double total = number(json, "design", "total");
         assertTrue(total > 0.01, json);
         cli.clear();
         // the simulate command, told the found damping, settles inside ±0.5° within the 8 s asked for
         assertEquals(ExitCode.OK, run(concat(concat(new String[] {"simulate"}, arm), new String[] {"--viscous",
             Double.toString(total), "--theta0-deg", "17", "--band-deg", "0.5", "--duration", "20", "--json"})), cli.err());
-        double settle = number(cli.out(), "\"settle_time_s\"");
+        double settle = number(cli.out(), "settle_time_s");
         // (to the root finder's accuracy: the answer is the smallest damping that meets the spec)
         assertTrue(settle <= 8 + 1e-6 && settle > 7, "settles after " + settle);
     }
@@ -124,9 +131,9 @@ class PredictCommandTest {
                 "--set", "bob.y=-500mm", "--json"), cli.err());
         String json = cli.out();
         double g = 9.80665;
-        assertEquals(2 * Math.PI * Math.sqrt(1 / g), number(json, "\"baseline\": \\{[^}]*\"small_angle_period_s\""), 1e-9);
-        assertEquals(2 * Math.PI * Math.sqrt(0.5 / g), number(json, "\"changed\": \\{[^}]*\"small_angle_period_s\""), 1e-9);
-        assertEquals(2 * 0.25, number(json, "\"changed\": \\{[^}]*\"pivot_inertia_kg_m2\""), 1e-12);
+        assertEquals(2 * Math.PI * Math.sqrt(1 / g), number(json, "what_if", "baseline", "small_angle_period_s"), 1e-9);
+        assertEquals(2 * Math.PI * Math.sqrt(0.5 / g), number(json, "what_if", "changed", "small_angle_period_s"), 1e-9);
+        assertEquals(2 * 0.25, number(json, "what_if", "changed", "pivot_inertia_kg_m2"), 1e-12);
         cli.clear();
         assertEquals(ExitCode.OK, run("predict", parts.toString(), "--viscous", "0.05", "--theta0-deg", "5",
                 "--set", "bob.y=-500mm"), cli.err());

@@ -1,6 +1,7 @@
 package dev.penduline.cli.commands;
 
 import static org.junit.jupiter.api.Assertions.assertEquals;
+import static org.junit.jupiter.api.Assertions.assertFalse;
 import static org.junit.jupiter.api.Assertions.assertTrue;
 
 import java.math.BigDecimal;
@@ -15,6 +16,7 @@ import org.junit.jupiter.api.Test;
 import org.junit.jupiter.api.io.TempDir;
 
 import dev.penduline.cli.ExitCode;
+import dev.penduline.cli.JsonTree;
 import dev.penduline.cli.OptionRules;
 import dev.penduline.model.persistence.MechanismFiles;
 import dev.penduline.services.Defaults;
@@ -58,10 +60,11 @@ class UsePreferencesTest {
         Files.writeString(prefs, text);
     }
 
+    /** A number at the top level of a command's {@code --json} output. */
     private static double number(String json, String key) {
-        Matcher m = Pattern.compile("\"" + key + "\": ([-0-9.eE]+)").matcher(json);
-        assertTrue(m.find(), key + " missing in " + json);
-        return Double.parseDouble(m.group(1));
+        double v = JsonTree.number(JsonTree.parse(json), key);
+        assertFalse(Double.isNaN(v), key + " missing in " + json);
+        return v;
     }
 
     /** The period line of the readable inertia report: the figure as printed. */

@@ -64,7 +64,7 @@ final class FrictionRules {
         }
     }
 
-    /** Static friction can hold what dynamic friction can: Ts ≥ Tc (DOMAIN.md §3). */
+    /** Static friction can hold what dynamic friction can: Ts ≥ Tc (docs/physics.md §3 "Friction and drag torques"). */
     private static void stictionAtLeastCoulomb(String who, FrictionTerm stiction, FrictionTerm coulomb, Problems out) {
         if (stiction == null || coulomb == null) {
             return;

@@ -169,7 +169,8 @@ class MechanismAdapterTest {
     @Test
     void wholeHatchIsPlausible() {
         final InertiaSummary s = MechanismAdapter.inertia(InspectionHatch.create());
-        // Radius of gyration at least Lc (DOMAIN.md §2; follows from the parallel-axis theorem).
+        // Radius of gyration at least Lc (docs/physics.md §2 "Inertia about the pivot"; follows from the parallel-axis
+        // theorem).
         assertTrue(s.radiusOfGyration() >= s.centroidDistance());
         assertEquals(6, s.contributions().size(), "one contribution per part");
     }

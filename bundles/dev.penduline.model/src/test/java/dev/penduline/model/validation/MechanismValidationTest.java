@@ -103,7 +103,7 @@ class MechanismValidationTest {
         hole.setCentroidY(-0.5);
         hole.setCutout(true);
         // J0 = 1·0.1² − 0.5·0.5² < 0 < M·Lc²: no body has less inertia than its mass at its
-        // centroid (parallel-axis theorem; DOMAIN.md §2 "Sanity").
+        // centroid (parallel-axis theorem; docs/physics.md §2 "Inertia about the pivot").
         final List<String> problems = MechanismValidation.errors(m);
         assertEquals(1, problems.size(), problems.toString());
         assertTrue(problems.get(0).startsWith("mechanism 'Hatch': inertia about the pivot J0 = "), problems.get(0));

@@ -1,6 +1,7 @@
 package dev.penduline.physics.identify;
 
 import java.util.ArrayList;
+import java.util.Arrays;
 import java.util.List;
 import java.util.function.BooleanSupplier;
 
@@ -33,7 +34,7 @@ final class JointModel implements MultivariateJacobianFunction {
     private final List<SensitivitySwing> swings = new ArrayList<>();
     /** Swings without sensitivities, made on first use, for evaluations without a Jacobian. */
     private final SensitivitySwing[] plain;
-    private final List<int[]> columns = new ArrayList<>();
+    private final List<int[]> sessionColumns = new ArrayList<>();
     private final double[][] tau;
     private final int rows;
     private final double[] target;
@@ -74,7 +75,7 @@ final class JointModel implements MultivariateJacobianFunction {
                 }
             }
             swings.add(new SensitivitySwing(size, kinds.toArray(new ParameterKind[0])));
-            columns.add(cols.stream().mapToInt(Integer::intValue).toArray());
+            sessionColumns.add(cols.stream().mapToInt(Integer::intValue).toArray());
         }
         this.rows = n;
         this.target = new double[n];
@@ -94,15 +95,75 @@ final class JointModel implements MultivariateJacobianFunction {
         return rows;
     }
 
+    /**
+     * The first row of each session, and one past the last row: the Jacobian is zero in a
+     * session's own columns (its θ0, release time and offset) outside that session's rows.
+     */
+    int[] sessionRowStarts() {
+        final int[] starts = new int[data.size() + 1];
+        for (int s = 0; s < data.size(); s++) {
+            starts[s + 1] = starts[s] + data.get(s).size();
+        }
+        return starts;
+    }
+
+    /** The free columns of each session's own parameters (θ0, release time, offset), in order. */
+    int[][] sessionOwnColumns() {
+        final int[][] own = new int[data.size()][];
+        for (int s = 0; s < data.size(); s++) {
+            final int[] columns = new int[ParameterLayout.PER_SESSION];
+            int count = 0;
+            for (int k = 0; k < ParameterLayout.PER_SESSION; k++) {
+                final int c = layout.column(ParameterLayout.index(s, k));
+                if (c >= 0) {
+                    columns[count++] = c;
+                }
+            }
+            own[s] = Arrays.copyOf(columns, count);
+        }
+        return own;
+    }
+
+    /** The number of free (scaled) parameters: the Jacobian's columns. */
+    int freeCount() {
+        return layout.freeCount();
+    }
+
     @Override
     public Pair<RealVector, RealMatrix> value(RealVector point) {
+        final double[] values = new double[rows];
+        final double[][] columns = new double[layout.freeCount()][rows];
+        evaluate(point, values, columns);
+        return new Pair<>(new ArrayRealVector(values, false), rowMajor(columns, rows));
+    }
+
+    /** A Jacobian given column by column as a matrix (one row per sample). */
+    static RealMatrix rowMajor(double[][] columns, int rows) {
+        final double[][] jacobian = new double[rows][columns.length];
+        for (int k = 0; k < columns.length; k++) {
+            final double[] column = columns[k];
+            for (int i = 0; i < rows; i++) {
+                jacobian[i][k] = column[i];
+            }
+        }
+        return new Array2DRowRealMatrix(jacobian, false);
+    }
+
+    /**
+     * One counted evaluation with its Jacobian, written column by column (the layout the
+     * reduction of {@link ReducedProblem} reads); it remembers the lowest cost as {@link #value} does.
+     *
+     * @param point   the scaled free parameters
+     * @param values  on return, the model's value at every sample
+     * @param columns on return, {@code columns[k][i]}: ∂value_i/∂(scaled free parameter k)
+     * @return the residual sum of squares
+     */
+    double evaluate(RealVector point, double[] values, double[][] columns) {
         if (cancel != null && cancel.getAsBoolean()) {
             throw new FitCancelledException();
         }
         final double[] full = layout.expand(point, base);
-        final double[] values = new double[rows];
-        final double[][] jacobian = new double[rows][layout.freeCount()];
-        evaluate(full, values, jacobian);
+        evaluate(full, values, columns);
         evaluations++;
         double cost = 0;
         for (int i = 0; i < rows; i++) {
@@ -113,15 +174,21 @@ final class JointModel implements MultivariateJacobianFunction {
             bestCost = cost;
             bestFull = full;
         }
-        return new Pair<>(new ArrayRealVector(values, false), new Array2DRowRealMatrix(jacobian, false));
+        return cost;
     }
 
     /**
-     * Model values and (when jacobian is not null) the Jacobian rows at a full vector. Without a
-     * Jacobian no sensitivities are integrated (the values are the same: the steps follow the
-     * motion alone), and the evaluation is not counted.
+     * Model values and (when columns is not null) the Jacobian's columns at a full vector. Without
+     * a Jacobian no sensitivities are integrated (the values are the same: the steps follow the
+     * motion alone), and the evaluation is not counted. The columns are overwritten whole (a
+     * session's rows are zero in the columns of the other sessions' own parameters).
      */
-    void evaluate(double[] full, double[] values, double[][] jacobian) {
+    void evaluate(double[] full, double[] values, double[][] columns) {
+        if (columns != null) {
+            for (double[] column : columns) {
+                Arrays.fill(column, 0);
+            }
+        }
         final double b = full[ParameterLayout.index(ParameterKind.VISCOUS)];
         final double tc = full[ParameterLayout.index(ParameterKind.COULOMB)];
         final double c = full[ParameterLayout.index(ParameterKind.DRAG)];
@@ -136,10 +203,10 @@ final class JointModel implements MultivariateJacobianFunction {
             for (int i = 0; i < t.length; i++) {
                 ts[i] = t[i] - release;
             }
-            final SensitivitySwing swing = jacobian != null ? swings.get(s) : plainSwing(s);
+            final SensitivitySwing swing = columns != null ? swings.get(s) : plainSwing(s);
             swing.configure(stiffness, j, b, tc, stiction, c, tolerance, cancel);
             swing.run(theta0, ts, 0, t.length);
-            final int[] cols = columns.get(s);
+            final int[] cols = sessionColumns.get(s);
             final int releaseColumn = layout.column(ParameterLayout.index(s, ParameterKind.RELEASE_TIME));
             final int offsetColumn = layout.column(ParameterLayout.index(s, ParameterKind.OFFSET));
             final double releaseScale = layout.scale(ParameterLayout.index(s, ParameterKind.RELEASE_TIME));
@@ -159,18 +226,17 @@ final class JointModel implements MultivariateJacobianFunction {
                     values[row] = expected[0];
                     slope = expected[1];
                 }
-                if (jacobian == null) {
+                if (columns == null) {
                     continue;
                 }
-                final double[] jr = jacobian[row];
                 for (int k = 0; k < cols.length; k++) {
-                    jr[cols[k]] = swing.sensitivity[k][i] * colScale[k] * slope;
+                    columns[cols[k]][row] = swing.sensitivity[k][i] * colScale[k] * slope;
                 }
                 if (releaseColumn >= 0) {
-                    jr[releaseColumn] = -swing.velocity[i] * releaseScale * slope;
+                    columns[releaseColumn][row] = -swing.velocity[i] * releaseScale * slope;
                 }
                 if (offsetColumn >= 0) {
-                    jr[offsetColumn] = offsetScale * slope;
+                    columns[offsetColumn][row] = offsetScale * slope;
                 }
             }
         }

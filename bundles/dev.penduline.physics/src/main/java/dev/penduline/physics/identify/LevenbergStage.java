@@ -9,7 +9,6 @@ import org.hipparchus.linear.RealMatrix;
 import org.hipparchus.linear.RealVector;
 import org.hipparchus.optim.ConvergenceChecker;
 import org.hipparchus.optim.LocalizedOptimFormats;
-import org.hipparchus.optim.nonlinear.vector.leastsquares.EvaluationRmsChecker;
 import org.hipparchus.optim.nonlinear.vector.leastsquares.LeastSquaresBuilder;
 import org.hipparchus.optim.nonlinear.vector.leastsquares.LeastSquaresProblem.Evaluation;
 import org.hipparchus.optim.nonlinear.vector.leastsquares.LeastSquaresOptimizer.Optimum;
@@ -17,6 +16,7 @@ import org.hipparchus.optim.nonlinear.vector.leastsquares.LeastSquaresProblem;
 import org.hipparchus.optim.nonlinear.vector.leastsquares.LevenbergMarquardtOptimizer;
 import org.hipparchus.optim.nonlinear.vector.leastsquares.MultivariateJacobianFunction;
 import org.hipparchus.util.Pair;
+import org.hipparchus.util.Precision;
 
 /**
  * Runs one Levenberg–Marquardt stage on a {@link JointModel} and turns every way it can end
@@ -53,8 +53,11 @@ final class LevenbergStage {
         final JointModel model = new JointModel(layout, base, data, stiffness, stiction,
                 settings.integrationTolerance(), control.cancelled());
         final int rows = model.rows();
+        // many more samples than parameters (always, in practice): the optimiser works on the
+        // reduced problem of p + 1 rows, the same steps at a fraction of the cost
+        final ReducedProblem reduced = rows > layout.freeCount() + 1 ? new ReducedProblem(model) : null;
         final MultivariateJacobianFunction reporting = point -> {
-            final Pair<RealVector, RealMatrix> value = model.value(point);
+            final Pair<RealVector, RealMatrix> value = reduced != null ? reduced.value(point) : model.value(point);
             control.monitor().evaluated(stage, model.evaluations(), Math.sqrt(model.bestCost() / rows));
             return value;
         };
@@ -65,15 +68,18 @@ final class LevenbergStage {
         // Hipparchus' problem hands out fresh counters, so the stage counts for itself: the
         // checker is asked once per successful iteration, the model once per evaluation
         final int[] iterations = {0};
-        final EvaluationRmsChecker rms = new EvaluationRmsChecker(RMS_RELATIVE, 1e-12 * amplitude);
+        // the RMS over the samples (the reduced problem's own RMS divides by p + 1 rows)
+        final double absolute = 1e-12 * amplitude;
         final ConvergenceChecker<Evaluation> checker = (iteration, previous, current) -> {
             iterations[0] = iteration;
-            return rms.converged(iteration, previous, current);
+            final double before = rms(previous.getCost(), rows);
+            final double now = rms(current.getCost(), rows);
+            return Precision.equals(before, now, absolute) || Precision.equalsWithRelativeTolerance(before, now, RMS_RELATIVE);
         };
         final LeastSquaresProblem problem = new LeastSquaresBuilder()
                 .start(layout.scaled(base))
                 .model(reporting)
-                .target(model.target())
+                .target(reduced != null ? reduced.target() : model.target())
                 .parameterValidator(layout.validator())
                 .checker(checker)
                 .maxIterations(settings.maxIterations())
@@ -85,6 +91,17 @@ final class LevenbergStage {
                 .withParameterRelativeTolerance(settings.parameterTolerance());
         try {
             final Optimum optimum = optimizer.optimize(problem);
+            if (reduced != null) {
+                final double[] residuals = reduced.residualsAt(optimum.getPoint());
+                if (residuals == null) {
+                    // not the lowest-cost point evaluated (it always is): evaluate it in full
+                    return stopped(model, layout, layout.expand(optimum.getPoint(), base), FitStatus.CONVERGED,
+                            "converged", optimum.getIterations());
+                }
+                return new StageOutcome(layout.expand(optimum.getPoint(), base), FitStatus.CONVERGED, "converged",
+                        optimum.getIterations(), optimum.getEvaluations(), sumOfSquares(residuals), residuals,
+                        reduced.jacobianAt(optimum.getPoint()));
+            }
             final double[] full = layout.expand(optimum.getPoint(), base);
             final double[] residuals = optimum.getResiduals().toArray();
             return new StageOutcome(full, FitStatus.CONVERGED, "converged", optimum.getIterations(),
@@ -135,6 +152,11 @@ final class LevenbergStage {
             return new StageOutcome(full, FitStatus.FAILED, message + "; " + e.getMessage(), iterations,
                     evaluations, model.bestCost(), null, null);
         }
+    }
+
+    /** The RMS residual over the samples from a cost (the residuals' norm), as Hipparchus writes it. */
+    private static double rms(double cost, int rows) {
+        return Math.sqrt(cost * cost / rows);
     }
 
     static double sumOfSquares(double[] r) {

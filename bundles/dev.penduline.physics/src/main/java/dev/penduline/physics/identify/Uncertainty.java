@@ -70,20 +70,18 @@ record Uncertainty(double[] sigma, List<String> names, int[] indices, double[][]
         if (q == 0 || dof <= 0 || jacobian == null) {
             return new Uncertainty(sigma, List.of(), new int[0], new double[0][0], false);
         }
-        // normal matrix of the active, equilibrated columns
+        // normal matrix of the active, equilibrated columns (each column read once, contiguous;
+        // every sum runs over the rows in order, as a row-by-row loop would)
         final double[] norms = new double[q];
         final double[][] normal = new double[q][q];
         final int n = jacobian.getRowDimension();
-        final double[] row = new double[q];
-        for (int r = 0; r < n; r++) {
-            for (int a = 0; a < q; a++) {
-                row[a] = jacobian.getEntry(r, active.get(a));
-            }
-            for (int a = 0; a < q; a++) {
-                final double ra = row[a];
-                for (int b = 0; b <= a; b++) {
-                    normal[a][b] += ra * row[b];
-                }
+        final double[][] columns = new double[q][];
+        for (int a = 0; a < q; a++) {
+            columns[a] = jacobian.getColumn(active.get(a));
+        }
+        for (int a = 0; a < q; a++) {
+            for (int b = 0; b <= a; b++) {
+                normal[a][b] = dot(columns[a], columns[b]);
             }
         }
         for (int a = 0; a < q; a++) {
@@ -105,7 +103,7 @@ record Uncertainty(double[] sigma, List<String> names, int[] indices, double[][]
         RealMatrix inverse = svd.getSolver().getInverse();
         double variance = rss / dof;
         if (residuals != null && residuals.length == n) {
-            inverse = sandwich(inverse, jacobian, active, norms, residuals).scalarMultiply((double) n / dof);
+            inverse = sandwich(inverse, columns, norms, residuals).scalarMultiply((double) n / dof);
             variance = 1;
         }
         final double[][] correlation = new double[q][q];
@@ -128,9 +126,8 @@ record Uncertainty(double[] sigma, List<String> names, int[] indices, double[][]
     private static final double CORRELATION_TIMES = 10;
 
     /** A⁻¹ M A⁻¹ on the equilibrated active columns, M from batch means of the score. */
-    private static RealMatrix sandwich(RealMatrix inverse, RealMatrix jacobian, List<Integer> active, double[] norms,
-            double[] residuals) {
-        final int q = active.size();
+    private static RealMatrix sandwich(RealMatrix inverse, double[][] columns, double[] norms, double[] residuals) {
+        final int q = columns.length;
         final int n = residuals.length;
         final double rho = Math.max(0, Math.min(0.99, RecordSignals.lag1(residuals, 0, n)));
         final int block = (int) Math.max(1, Math.min(n / 20.0, Math.ceil(CORRELATION_TIMES * (1 + rho) / (1 - rho))));
@@ -140,7 +137,7 @@ record Uncertainty(double[] sigma, List<String> names, int[] indices, double[][]
             Arrays.fill(sum, 0);
             for (int r = start; r < Math.min(n, start + block); r++) {
                 for (int a = 0; a < q; a++) {
-                    sum[a] += jacobian.getEntry(r, active.get(a)) / norms[a] * residuals[r];
+                    sum[a] += columns[a][r] / norms[a] * residuals[r];
                 }
             }
             for (int a = 0; a < q; a++) {
@@ -155,5 +152,13 @@ record Uncertainty(double[] sigma, List<String> names, int[] indices, double[][]
             }
         }
         return inverse.multiply(MatrixUtils.createRealMatrix(meat)).multiply(inverse);
+    }
+
+    private static double dot(double[] x, double[] y) {
+        double sum = 0;
+        for (int i = 0; i < x.length; i++) {
+            sum += x[i] * y[i];
+        }
+        return sum;
     }
 }

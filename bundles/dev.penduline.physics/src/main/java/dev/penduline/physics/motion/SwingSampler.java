@@ -9,16 +9,19 @@ import org.hipparchus.ode.sampling.ODEStepHandler;
  * components of the companion's state, written into buffers that are reused from run to run.
  *
  * <p>In each accepted step the samples that fall in it are interpolated directly when they are
- * few, and through the step's polynomial ({@link ChebyshevStep}) when there are more than its
- * nodes. Samples at or before the release get the state at release; samples after the body has
+ * few, and through the step's polynomial ({@link HermiteStep}, two interpolations a step) when
+ * there are more. Samples at or before the release get the state at release; samples after the body has
  * come to rest for good get the resting state. One instance per thread.
  */
 public final class SwingSampler implements ODEStepHandler {
 
+    /** Up to this many samples in a step are interpolated one by one (the polynomial costs two). */
+    private static final int DIRECT_SAMPLES = 2;
+
     private final int[] recorded;
     /** values[0]: θ (rad), values[1]: ω (rad/s), values[2 + k]: companion component recorded[k]. */
     private final double[][] values;
-    private final ChebyshevStep polynomial;
+    private final HermiteStep polynomial;
     private double[] times;
     private int next;
     private int end;
@@ -33,7 +36,7 @@ public final class SwingSampler implements ODEStepHandler {
     public SwingSampler(int capacity, int... companion) {
         this.recorded = companion.clone();
         this.values = new double[2 + recorded.length][capacity];
-        this.polynomial = new ChebyshevStep(2 + recorded.length);
+        this.polynomial = new HermiteStep(2 + recorded.length);
     }
 
     /**
@@ -115,18 +118,22 @@ public final class SwingSampler implements ODEStepHandler {
         }
         final double tPrevious = interpolator.getPreviousState().getTime();
         final int components = values.length;
-        if (last - next > ChebyshevStep.NODES && tCurrent > tPrevious) {
-            final ChebyshevStep poly = polynomial;
+        if (last - next > DIRECT_SAMPLES && tCurrent > tPrevious) {
+            final HermiteStep poly = polynomial;
             poly.begin(tPrevious, tCurrent);
-            for (int j = 0; j < ChebyshevStep.NODES; j++) {
-                final ODEStateAndDerivative s = interpolator.getInterpolatedState(poly.nodeTime(j));
+            for (int j = 0; j < HermiteStep.NODES; j++) {
+                final ODEStateAndDerivative s = j == 0 ? interpolator.getPreviousState()
+                        : j == HermiteStep.NODES - 1 ? interpolator.getCurrentState()
+                        : interpolator.getInterpolatedState(poly.nodeTime(j));
                 final double[] y = s.getPrimaryState();
-                poly.set(0, j, y[0]);
-                poly.set(1, j, y[1]);
+                final double[] dy = s.getPrimaryDerivative();
+                poly.set(0, j, y[0], dy[0]);
+                poly.set(1, j, y[1], dy[1]);
                 if (components > 2) {
                     final double[] z = s.getSecondaryState(1);
+                    final double[] dz = s.getSecondaryDerivative(1);
                     for (int k = 0; k < recorded.length; k++) {
-                        poly.set(2 + k, j, z[recorded[k]]);
+                        poly.set(2 + k, j, z[recorded[k]], dz[recorded[k]]);
                     }
                 }
             }
