@@ -113,7 +113,7 @@ final class JointModel implements MultivariateJacobianFunction {
         for (int s = 0; s < data.size(); s++) {
             final int[] columns = new int[ParameterLayout.PER_SESSION];
             int count = 0;
-            for (int k = 0; k < ParameterLayout.PER_SESSION; k++) {
+            for (ParameterKind k : ParameterLayout.NUISANCE) {
                 final int c = layout.column(ParameterLayout.index(s, k));
                 if (c >= 0) {
                     columns[count++] = c;
