@@ -42,8 +42,9 @@ import dev.penduline.model.persistence.SaveLock;
 /**
  * Fault tests of saving, with real processes: a save killed (SIGKILL) at random moments leaves
  * the old or the new file, byte for byte, and the next save removes what it left; writers in
- * several processes at once lose no session and no fit; a writer that cannot get the lock gives
- * up without writing. Full disks and read-only folders are in the model's AtomicFileWriteTest (a
+ * several processes at once lose no session and no fit (a fit of content another writer changed
+ * meanwhile is refused, not stored over it); a writer that cannot get the lock gives up without
+ * writing. Full disks and read-only folders are in the model's AtomicFileWriteTest (a
  * file-system seam: a test machine cannot offer them, and root ignores permissions).
  */
 class SaveFaultTest {
@@ -251,7 +252,7 @@ class SaveFaultTest {
     }
 
     @Test
-    void fitsStoredFromSeveralProcessesAtOnceAreAllKept() throws Exception {
+    void fitsOfOneFileAtOnceNeverLoseAChangeAndALateOneIsRefusedWithoutWriting() throws Exception {
         Path mechanism = project(0, 0);
         Mechanism one = MechanismFiles.load(mechanism);
         one.getSessions().subList(1, one.getSessions().size()).clear();
@@ -259,12 +260,24 @@ class SaveFaultTest {
         MechanismFiles.save(one, mechanism);
         int before = MechanismFiles.load(mechanism).getFitResults().size();
         int children = 2;
-        int runs = 1; // a fit takes seconds; both children compute the same one and store it at about the same moment
+        int runs = 1; // a fit takes seconds; both children read the same content and store at about the same moment
         List<Process> ps = startTogether(dir, children, runs, "fit", mechanism.toString(), "--resamples", "0", "--terms",
                 "viscous,coulomb,drag");
-        allSucceed(dir, ps);
+        int stored = 0;
+        for (int c = 0; c < children; c++) {
+            finish(ps.get(c));
+            String log = Files.readString(dir.resolve("log-" + c + ".txt"));
+            if (ps.get(c).exitValue() == 0) {
+                stored++;
+                continue;
+            }
+            // the one that stores second read the file before the first stored: it refuses (exit 2), writing nothing
+            assertTrue(log.contains("exit " + ExitCode.USAGE_OR_INPUT.code()), log);
+            assertTrue(log.contains(mechanism + ": changed since it was read") && log.contains("nothing was written"), log);
+        }
+        assertTrue(stored >= 1, "the first to store keeps its fit");
         List<FitResult> fits = MechanismFiles.load(mechanism).getFitResults();
-        assertEquals(before + children * runs, fits.size(), "every stored fit is kept");
+        assertEquals(before + stored, fits.size(), "every fit reported stored is kept, no other");
         assertEquals(fits.size(), new HashSet<>(fits.stream().map(FitResult::getId).toList()).size(), "with its own id");
     }
 

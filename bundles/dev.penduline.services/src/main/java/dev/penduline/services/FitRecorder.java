@@ -75,6 +75,25 @@ public final class FitRecorder {
     }
 
     /**
+     * Appends the fit to the mechanism file it was computed from and saves it atomically, unless
+     * the file changed since it was read: then nothing is written and the other writer's change
+     * is kept (see {@link MechanismStore#update(MechanismSnapshot, MechanismStore.Change, Consumer, String)}).
+     *
+     * @param read       the mechanism file as read for the fit
+     * @param outcome    the fit
+     * @param computedAt when it was computed
+     * @param notes      receives notes of the save for the user
+     * @return the stored result's identifier
+     * @throws InputException naming the file when it changed since it was read, or cannot be
+     *                        locked or saved
+     */
+    public static String store(MechanismSnapshot read, FrictionIdentification.Outcome outcome, Instant computedAt,
+            Consumer<String> notes) throws InputException {
+        return MechanismStore.update(read, m -> addTo(m, outcome, computedAt), notes,
+                "fit again to store a fit of the new content");
+    }
+
+    /**
      * Adds the fit to a mechanism in memory, as {@link #store} adds it to the file's content: the
      * workbench runs this inside one undoable command on an open document.
      *

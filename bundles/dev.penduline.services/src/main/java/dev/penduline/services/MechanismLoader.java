@@ -7,6 +7,8 @@ import java.util.List;
 import java.util.Locale;
 import java.util.Optional;
 
+import org.eclipse.emf.common.util.Diagnostic;
+
 import dev.penduline.model.Mechanism;
 import dev.penduline.model.adapt.MechanismAdapter;
 import dev.penduline.model.persistence.MechanismFileException;
@@ -116,12 +118,14 @@ public final class MechanismLoader {
      * @throws InputException when it fails validation or is physically inconsistent
      */
     public MechanismSource loadMechanism(Mechanism mechanism, String where) throws InputException {
-        List<String> errors = MechanismValidation.errors(mechanism);
+        // validated once: the rules run the inertia engine's checks
+        Diagnostic validation = MechanismValidation.validate(mechanism);
+        List<String> errors = MechanismValidation.messages(validation, Diagnostic.ERROR);
         if (!errors.isEmpty()) {
             throw new InputException(where + ": " + errors.size() + " problem(s) to fix:\n  "
                     + String.join("\n  ", errors));
         }
-        List<String> warnings = new ArrayList<>(MechanismValidation.problems(mechanism));
+        List<String> warnings = new ArrayList<>(MechanismValidation.messages(validation, Diagnostic.WARNING));
         warnings.removeAll(errors);
         PivotInertia frame;
         List<Part> parts;
@@ -184,13 +188,18 @@ public final class MechanismLoader {
      */
     public MechanismSource summarise(String label, List<Part> parts,
             List<String> warnings) throws InputException {
-        List<String> problems = engine.problems(parts);
-        InertiaSummary summary;
+        // one pass of the engine gives both its problems and the summary
+        PivotInertia.Assessment assessed;
         try {
-            summary = engine.compute(parts);
+            assessed = engine.assess(parts);
         } catch (IllegalArgumentException e) {
             throw new InputException(label + ": " + e.getMessage(), e);
         }
+        if (assessed.fatal().isPresent()) {
+            throw new InputException(label + ": " + assessed.fatal().get());
+        }
+        List<String> problems = assessed.problems();
+        InertiaSummary summary = assessed.summary().orElseThrow();
         MechanismProperties properties;
         try {
             properties = summary.toMechanismProperties();

@@ -128,4 +128,30 @@ public final class MechanismStore {
             return result;
         }
     }
+
+    /**
+     * Changes a mechanism file read once before ({@link MechanismSnapshot#read}), on the mechanism
+     * read: under the file's lock, just before replacing it, the file's content is compared with
+     * the content read, and the change is refused when another writer changed the file
+     * meanwhile, so that writer's change is never lost under one made on the older content.
+     *
+     * @param read   the file as read
+     * @param change the change, made on {@link MechanismSnapshot#mechanism()}
+     * @param notes  receives notes for the user
+     * @param advice what the user can do when the file changed (ends the refusal's message)
+     * @param <T>    what the change gives back
+     * @return what the change gave back
+     * @throws InputException naming the file when it changed since it was read, or cannot be
+     *                        locked, changed or saved; then nothing was written
+     */
+    public static <T> T update(MechanismSnapshot read, Change<T> change, Consumer<String> notes, String advice)
+            throws InputException {
+        try (SaveLock lock = lock(read.file())) {
+            read.requireUnchanged(advice);
+            T result = change.apply(read.mechanism());
+            save(read.mechanism(), read.file()).forEach(notes);
+            read.saved();
+            return result;
+        }
+    }
 }

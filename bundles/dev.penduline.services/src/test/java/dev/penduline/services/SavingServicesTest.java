@@ -8,7 +8,9 @@ import static org.junit.jupiter.api.Assertions.assertTrue;
 import java.nio.file.Files;
 import java.nio.file.Path;
 import java.nio.file.StandardCopyOption;
+import java.time.Instant;
 import java.util.ArrayList;
+import java.util.EnumSet;
 import java.util.HashSet;
 import java.util.List;
 import java.util.Optional;
@@ -25,6 +27,12 @@ import dev.penduline.model.FitResult;
 import dev.penduline.model.Mechanism;
 import dev.penduline.model.TestSession;
 import dev.penduline.model.naming.NamedElements;
+import dev.penduline.physics.identify.FitControl;
+import dev.penduline.physics.identify.FitSettings;
+import dev.penduline.physics.identify.FrictionTerm;
+import dev.penduline.physics.motion.FrictionTorques;
+import dev.penduline.physics.units.Unit;
+import dev.penduline.records.swing.SwingImportOptions;
 
 /**
  * The services' side of saving: what an output may replace ({@link OutputFiles}) and changes to a
@@ -131,6 +139,44 @@ class SavingServicesTest {
         assertEquals(threads * each, m.getFitResults().size(), "no fit lost");
         assertEquals(threads * each, new HashSet<>(m.getFitResults().stream().map(FitResult::getName).toList()).size());
         assertEquals(threads * each, m.getSessions().size(), "no session lost");
+    }
+
+    @Test
+    void aFitStoredIntoAFileThatChangedSinceItWasReadIsRefusedAndTheOtherChangeKept() throws Exception {
+        Path mechanismFile = project();
+        // an invented fit (lumped pendulum, viscous and Coulomb friction; its values do not matter here)
+        MechanismSource lumped = MechanismLoader.lumped(2, 0.4, 0.5, 9.81);
+        Path record = dir.resolve("invented.csv");
+        DemoRecords.write(lumped, new FrictionTorques(0.01, 0.03, 0, 0), new DemoRecords.Settings(Unit.DEGREE.toSi(25),
+                Unit.DEGREE.toSi(0.5), Unit.DEGREE.toSi(0.05), 0, 0.5, 6, 100, 7), record);
+        FitSettings d = FitSettings.defaults();
+        FrictionIdentification.Outcome outcome = FrictionIdentification.identify(lumped,
+                List.of(FrictionIdentification.prepare(record, SwingImportOptions.defaults(), lumped)),
+                Optional.of(EnumSet.of(FrictionTerm.VISCOUS, FrictionTerm.COULOMB)), true,
+                d.withResampling(0, d.seed(), d.parallel()), FitControl.none());
+
+        MechanismSnapshot read = MechanismSnapshot.read(mechanismFile);
+        // another writer changes the file while the fit runs
+        MechanismStore.update(mechanismFile, m -> session(m, "Added meanwhile", "records/second.csv"), n -> { });
+        byte[] theirs = Files.readAllBytes(mechanismFile);
+        InputException e = assertThrows(InputException.class,
+                () -> FitRecorder.store(read, outcome, Instant.parse("2026-12-04T00:00:00Z"), n -> { }));
+        assertTrue(e.getMessage().startsWith(mechanismFile + ": changed since it was read"), e.getMessage());
+        assertTrue(e.getMessage().contains("nothing was written") && e.getMessage().contains("fit again"), e.getMessage());
+        assertArrayEquals(theirs, Files.readAllBytes(mechanismFile), "the other writer's content survives");
+        try (var listing = Files.list(dir)) {
+            assertEquals(List.of(), listing.map(p -> p.getFileName().toString()).filter(n -> n.endsWith(".saving")).toList(),
+                    "no temporary file left");
+        }
+
+        // read again (the new content): stored, and a second change of that snapshot goes on from what it saved
+        MechanismSnapshot again = MechanismSnapshot.read(mechanismFile);
+        String id = FitRecorder.store(again, outcome, Instant.parse("2026-12-04T00:00:00Z"), n -> { });
+        MechanismStore.update(again, m -> session(m, "After the fit", "records/third.csv"), n -> { }, "try again");
+        Mechanism m = MechanismLoader.readMechanism(mechanismFile);
+        assertEquals(List.of("First", "Added meanwhile", "After the fit"), m.getSessions().stream().map(TestSession::getName)
+                .toList());
+        assertEquals(List.of(id), m.getFitResults().stream().map(FitResult::getId).toList());
     }
 
     @Test

@@ -96,8 +96,10 @@ public final class FitCommand implements Command {
             throw new UsageException("at most one mechanism file; got " + a.positional());
         }
         String file = a.positional().isEmpty() ? null : a.positional().get(0);
-        MechanismSource mechanism = MechanismOptions.resolve(a, file, defaults);
         boolean mechanismFile = file != null && file.endsWith(".penduline");
+        // a mechanism file is read once: its mechanism, its sessions and the content the fit is stored into
+        MechanismOptions.ReadOnce read = mechanismFile ? MechanismOptions.readOnce(a, file, defaults) : null;
+        MechanismSource mechanism = read != null ? read.mechanism() : MechanismOptions.resolve(a, file, defaults);
         Optional<Set<FrictionTerm>> terms = terms(a.value("terms"));
         FitSettings settings = defaults.applyTo(FitSettings.defaults());
         if (a.has("resamples") || a.has("seed")) {
@@ -121,7 +123,8 @@ public final class FitCommand implements Command {
                     sessions.add(FrictionIdentification.prepare(Path.of(s), RecordOptions.from(a), mechanism));
                 }
             } else if (mechanismFile) {
-                sessions.addAll(FrictionIdentification.sessionsOf(Path.of(file), mechanism, a.flag(ACCEPT_CHANGED)));
+                sessions.addAll(FrictionIdentification.sessionsOf(read.file().file(), read.file().mechanism().getSessions(),
+                        mechanism, a.flag(ACCEPT_CHANGED)));
                 for (SessionInput s : sessions) {
                     if (s.change() != null) {
                         // said before any result: the fit is of content the session was not added with
@@ -136,7 +139,7 @@ public final class FitCommand implements Command {
             outcome = FrictionIdentification.identify(mechanism, sessions, terms, a.flag("fix-inertia"), settings,
                     FitControl.none());
             if (mechanismFile && !a.has("session") && !a.flag("no-save") && outcome.fit().converged()) {
-                stored = FitRecorder.store(Path.of(file), outcome, Instant.now(), note -> err.println("note: " + note));
+                stored = FitRecorder.store(read.file(), outcome, Instant.now(), note -> err.println("note: " + note));
             }
         } catch (InputException e) {
             throw new UsageException(e.getMessage());

@@ -11,6 +11,7 @@ import dev.penduline.cli.UsageException;
 import dev.penduline.services.Defaults;
 import dev.penduline.services.InputException;
 import dev.penduline.services.MechanismLoader;
+import dev.penduline.services.MechanismSnapshot;
 import dev.penduline.services.MechanismSource;
 
 /**
@@ -97,13 +98,45 @@ final class MechanismOptions {
                 throw new UsageException("which mechanism? Give a mechanism file (.penduline), a parts list (.csv), "
                         + "or --mass, --centroid-distance and --pivot-inertia");
             }
-            MechanismLoader loader = new MechanismLoader().withDefaultGravity(defaults.gravity());
-            if (a.has("gravity")) {
-                loader = loader.withGravity(a.number("gravity", Double.NaN));
-            }
-            return loader.load(Path.of(file));
+            return loader(a, defaults).load(Path.of(file));
         } catch (InputException e) {
             throw new UsageException(e.getMessage());
         }
+    }
+
+    /** A mechanism file read once, and the mechanism resolved from it. */
+    record ReadOnce(MechanismSnapshot file, MechanismSource mechanism) {
+    }
+
+    /**
+     * Resolves the mechanism of a mechanism file as {@link #resolve(Arguments, String, Defaults)}
+     * does, reading the file once and keeping what was read, for a command that stores into
+     * the file later ({@link MechanismSnapshot}).
+     *
+     * @param a        the arguments
+     * @param file     the mechanism file
+     * @param defaults the defaults (a mechanism file keeps its own gravity)
+     * @return the file as read and its mechanism
+     * @throws UsageException when lumped properties are given too, or the file or mechanism is bad
+     */
+    static ReadOnce readOnce(Arguments a, String file, Defaults defaults) throws UsageException {
+        if (lumpedGiven(a)) {
+            throw new UsageException("give either a mechanism file or --mass/--centroid-distance/--pivot-inertia, not both");
+        }
+        MechanismLoader loader = loader(a, defaults);
+        try {
+            MechanismSnapshot read = MechanismSnapshot.read(Path.of(file));
+            return new ReadOnce(read, loader.loadMechanism(read.mechanism(), read.file().toString()));
+        } catch (InputException e) {
+            throw new UsageException(e.getMessage());
+        }
+    }
+
+    private static MechanismLoader loader(Arguments a, Defaults defaults) throws UsageException {
+        MechanismLoader loader = new MechanismLoader().withDefaultGravity(defaults.gravity());
+        if (a.has("gravity")) {
+            loader = loader.withGravity(a.number("gravity", Double.NaN));
+        }
+        return loader;
     }
 }

@@ -37,9 +37,7 @@ public final class MechanismValidation {
      * @return one line per problem, each naming its element; empty when the mechanism is valid
      */
     public static List<String> problems(Mechanism mechanism) {
-        final List<String> out = new ArrayList<>();
-        collect(validate(mechanism), out, Diagnostic.WARNING);
-        return out;
+        return messages(validate(mechanism), Diagnostic.WARNING);
     }
 
     /**
@@ -49,8 +47,21 @@ public final class MechanismValidation {
      * @return one line per error
      */
     public static List<String> errors(Mechanism mechanism) {
+        return messages(validate(mechanism), Diagnostic.ERROR);
+    }
+
+    /**
+     * The messages of a diagnostic tree at or above a severity, in the order of the model: a
+     * caller that wants both the errors and the warnings validates once and asks twice.
+     *
+     * @param diagnostic      what {@link #validate} gave
+     * @param minimumSeverity {@link Diagnostic#ERROR} for the errors only, {@link Diagnostic#WARNING}
+     *                        for every problem
+     * @return one line per problem
+     */
+    public static List<String> messages(Diagnostic diagnostic, int minimumSeverity) {
         final List<String> out = new ArrayList<>();
-        collect(validate(mechanism), out, Diagnostic.ERROR);
+        collect(diagnostic, out, minimumSeverity);
         return out;
     }
 

@@ -150,6 +150,30 @@ class AtomicFileWriteTest {
     }
 
     @Test
+    void aContentThatFailsHalfWayLeavesTheOldFileAndNoTemporaryFile() throws Exception {
+        Path file = dir.resolve("hatch.penduline");
+        Files.writeString(file, "the old content\n");
+        byte[] half = new byte[150_000]; // more than the writer's buffer, so part of it reached the temporary file
+        IOException e = assertThrows(IOException.class, () -> AtomicFileWrite.write(file, out -> {
+            out.write(half);
+            throw new IOException("the model could not be written");
+        }));
+        assertTrue(e.getMessage().contains("the model could not be written"), e.getMessage());
+        assertTrue(e.getMessage().contains("previous file, if any, is unchanged"), e.getMessage());
+        assertEquals("the old content\n", Files.readString(file));
+        assertEquals(List.of("hatch.penduline"), names(), "no temporary file is left");
+
+        // a bug in the writer of the content: it leaves as itself, the old file and the folder as they were
+        IllegalStateException bug = assertThrows(IllegalStateException.class, () -> AtomicFileWrite.write(file, out -> {
+            out.write(half);
+            throw new IllegalStateException("a bug");
+        }));
+        assertEquals("a bug", bug.getMessage());
+        assertEquals("the old content\n", Files.readString(file));
+        assertEquals(List.of("hatch.penduline"), names(), "no temporary file is left");
+    }
+
+    @Test
     void aReadOnlyFolderIsReportedAndTheOldFileKept() throws Exception {
         // What a read-only folder answers; simulated, since root may write into any folder.
         assertFailsKeepingTheOldFile(new AtomicFileWrite.Disk() {

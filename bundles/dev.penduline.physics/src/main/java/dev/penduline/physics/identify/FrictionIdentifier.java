@@ -1,9 +1,11 @@
 package dev.penduline.physics.identify;
 
 import java.util.ArrayList;
+import java.util.Arrays;
 import java.util.List;
 import java.util.Objects;
 import java.util.Set;
+import java.util.stream.IntStream;
 
 import org.hipparchus.analysis.UnivariateFunction;
 import org.hipparchus.exception.MathIllegalStateException;
@@ -164,20 +166,25 @@ public final class FrictionIdentifier {
         if (o.status() != FitStatus.CONVERGED || o.residuals() == null) {
             return point;
         }
-        final List<EncoderRounding> roundings = new ArrayList<>();
-        boolean any = false;
-        int row = 0;
-        for (StageSamples d : point.data()) {
+        // each session's σ by maximum likelihood, the sessions side by side when parallel
+        final List<StageSamples> sessions = point.data();
+        final int[] firstRow = new int[sessions.size()];
+        for (int s = 1; s < firstRow.length; s++) {
+            firstRow[s] = firstRow[s - 1] + sessions.get(s - 1).size();
+        }
+        IntStream indices = IntStream.range(0, sessions.size());
+        if (settings.parallel()) {
+            indices = indices.parallel();
+        }
+        final List<EncoderRounding> roundings = Arrays.asList(indices.mapToObj(s -> {
+            final StageSamples d = sessions.get(s);
             final double[] model = new double[d.size()];
             for (int i = 0; i < model.length; i++) {
-                model[i] = d.angles()[i] - o.residuals()[row + i];
+                model[i] = d.angles()[i] - o.residuals()[firstRow[s] + i];
             }
-            row += d.size();
-            final EncoderRounding rounding = EncoderRounding.of(d.angles(), model);
-            any |= rounding != null;
-            roundings.add(rounding);
-        }
-        if (!any) {
+            return EncoderRounding.of(d.angles(), model);
+        }).toArray(EncoderRounding[]::new));
+        if (roundings.stream().allMatch(Objects::isNull)) {
             return point;
         }
         final double k = problem.mechanism().gravityStiffness();

@@ -3,6 +3,7 @@ package dev.penduline.physics.inertia;
 import java.util.ArrayList;
 import java.util.List;
 import java.util.Locale;
+import java.util.Optional;
 
 import dev.penduline.physics.MechanismProperties;
 
@@ -90,6 +91,35 @@ public record PivotInertia(PivotAxis axis, Vector3 gravityDirection, double grav
         if (fatal != null) {
             throw new IllegalArgumentException(fatal);
         }
+        return summary(parts, t);
+    }
+
+    /**
+     * What {@link #problems} lists and what {@link #compute} gives, from one pass over the parts
+     * (their totals summed once), for a caller that wants both.
+     *
+     * @param parts the parts list (cut-outs included)
+     * @return the problems, the fatal one among them, and the summary when there is no fatal one
+     * @throws IllegalArgumentException as {@link #compute} does for other reasons than a fatal problem
+     */
+    public Assessment assess(List<Part> parts) {
+        final Totals t = totals(parts);
+        final String fatal = fatalProblem(parts, t);
+        return new Assessment(problems(parts, fatal), Optional.ofNullable(fatal),
+                fatal == null ? Optional.of(summary(parts, t)) : Optional.empty());
+    }
+
+    /**
+     * The outcome of {@link #assess}.
+     *
+     * @param problems as {@link #problems} lists them
+     * @param fatal    the problem for which {@link #compute} refuses the parts, if any
+     * @param summary  what {@link #compute} gives, empty when a problem is fatal
+     */
+    public record Assessment(List<String> problems, Optional<String> fatal, Optional<InertiaSummary> summary) {
+    }
+
+    private InertiaSummary summary(List<Part> parts, Totals t) {
         final Vector3 n = axis.direction();
         final Vector3 offset = axis.perpendicularOffset(t.centroid);
         final double lc = offset.norm();
@@ -112,6 +142,10 @@ public record PivotInertia(PivotAxis axis, Vector3 gravityDirection, double grav
      * @return the problems, each naming the part concerned where there is one; empty when fine
      */
     public List<String> problems(List<Part> parts) {
+        return problems(parts, fatalProblem(parts, totals(parts)));
+    }
+
+    private List<String> problems(List<Part> parts, String fatal) {
         final List<String> out = new ArrayList<>();
         for (Part p : parts) {
             if (p.shape() instanceof GivenTensor g) {
@@ -120,7 +154,6 @@ public record PivotInertia(PivotAxis axis, Vector3 gravityDirection, double grav
                 }
             }
         }
-        final String fatal = fatalProblem(parts, totals(parts));
         if (fatal != null) {
             out.add(fatal);
         }

@@ -48,6 +48,25 @@ class SanityChecksTest {
     }
 
     @Test
+    void oneAssessmentGivesTheProblemsAndTheSummaryOfTheTwoCalls() {
+        // the groove case above: fatal, so no summary, and the problems as problems() lists them
+        final Part solid = Part.of("weight", new PointMass(), 2, new Vector3(0, -1, 0));
+        final Part ring = Part.of("groove", new ThinRing(1, Axis.Z), 1, new Vector3(0, -1, 0)).withCutout(true);
+        final PivotInertia.Assessment bad = PivotInertia.DEFAULT.assess(List.of(solid, ring));
+        assertEquals(PivotInertia.DEFAULT.problems(List.of(solid, ring)), bad.problems());
+        assertEquals(List.of(bad.fatal().orElseThrow()), bad.problems());
+        assertEquals(assertThrows(IllegalArgumentException.class, () -> PivotInertia.DEFAULT.compute(List.of(solid, ring)))
+                .getMessage(), bad.fatal().get());
+        assertTrue(bad.summary().isEmpty());
+        // a point mass m at distance L: J0 = m·L² (classic result), 2 kg at 1 m gives 2 kg·m²
+        final PivotInertia.Assessment good = PivotInertia.DEFAULT.assess(List.of(solid));
+        assertEquals(List.of(), good.problems());
+        assertTrue(good.fatal().isEmpty());
+        assertEquals(2.0, good.summary().orElseThrow().pivotInertia(), 1e-12);
+        assertEquals(PivotInertia.DEFAULT.compute(List.of(solid)), good.summary().get());
+    }
+
+    @Test
     void problemsListNamesAnInadmissibleTensor() {
         final Part bad = Part.ofTensor("bracket", 1, new Vector3(0, -0.2, 0), InertiaTensor.diagonal(0.001, 0.001, 0.003));
         final List<String> problems = PivotInertia.DEFAULT.problems(List.of(bad));

@@ -1,27 +1,9 @@
 package dev.penduline.ui.internal.chart;
-
 import java.nio.file.Path;
 import java.util.function.Function;
 
-import jakarta.annotation.PostConstruct;
-import jakarta.annotation.PreDestroy;
-import jakarta.inject.Inject;
-import jakarta.inject.Named;
-
 import org.eclipse.core.resources.IFile;
-import org.eclipse.core.resources.IResource;
-import org.eclipse.core.resources.IResourceChangeEvent;
-import org.eclipse.core.resources.IResourceChangeListener;
-import org.eclipse.core.resources.ResourcesPlugin;
 import org.eclipse.core.runtime.ILog;
-import org.eclipse.core.runtime.IProgressMonitor;
-import org.eclipse.core.runtime.IStatus;
-import org.eclipse.core.runtime.Status;
-import org.eclipse.core.runtime.SubMonitor;
-import org.eclipse.core.runtime.jobs.Job;
-import org.eclipse.e4.core.di.annotations.Optional;
-import org.eclipse.e4.ui.di.UISynchronize;
-import org.eclipse.e4.ui.services.IServiceConstants;
 import org.eclipse.emf.ecore.util.EcoreUtil;
 import org.eclipse.jface.layout.GridDataFactory;
 import org.eclipse.jface.layout.GridLayoutFactory;
@@ -35,8 +17,8 @@ import org.eclipse.swtchart.Chart;
 import dev.penduline.model.Mechanism;
 import dev.penduline.model.TestSession;
 import dev.penduline.services.InputException;
+import dev.penduline.ui.internal.FollowingPart;
 import dev.penduline.ui.internal.MechanismSelection;
-import dev.penduline.ui.internal.document.LiveModel;
 
 /**
  * The Swing Chart view: for the mechanism selected in Project Files, lists its test sessions;
@@ -45,44 +27,25 @@ import dev.penduline.ui.internal.document.LiveModel;
  * below. Without a session it plots the free swing the inertia predicts. Reading, analysing and
  * simulating run in jobs; the widgets are touched on the UI thread only.
  */
-public final class SwingChartPart {
+public final class SwingChartPart extends FollowingPart {
 
-    private final UISynchronize sync;
     private Combo sessions;
     private SwingChart chart;
     private Text summary;
-    private Object pending;
-    private IFile shownFile;
-    private long shownStamp;
-    private long generation;
-    private Job running;
     private ChartSubject subject;
     private SwingChartContent content;
-    private IResourceChangeListener watcher;
-    private LiveModel live;
     private int keepSession = -1;
 
     /** A copy of an editor's live model to chart, and the session the user had chosen. */
     private record Live(Mechanism mechanism, Path file, int session) {
     }
 
-    /**
-     * Created by the workbench.
-     *
-     * @param sync runs the results on the UI thread
-     */
-    @Inject
-    public SwingChartPart(UISynchronize sync) {
-        this.sync = sync;
+    /** What one reading opened (null when it failed) and what it drew from it. */
+    private record Loaded(ChartSubject opened, SwingChartContent content) {
     }
 
-    /**
-     * Builds the view.
-     *
-     * @param parent the part's composite
-     */
-    @PostConstruct
-    public void create(Composite parent) {
+    @Override
+    protected void build(Composite parent) {
         GridLayoutFactory.swtDefaults().numColumns(2).margins(8, 6).applyTo(parent);
         Composite top = new Composite(parent, SWT.NONE);
         GridLayoutFactory.fillDefaults().numColumns(2).applyTo(top);
@@ -105,73 +68,32 @@ public final class SwingChartPart {
         summary.setBackground(parent.getBackground());
         summary.setText("Select a mechanism file in Project Files to see its swing records.");
         GridDataFactory.fillDefaults().grab(false, true).hint(330, SWT.DEFAULT).applyTo(summary);
-        live = new LiveModel(sync::asyncExec, () -> {
-            if (shownFile != null && !summary.isDisposed()) {
-                shownStamp = IResource.NULL_STAMP;
-                show(shownFile);
-            }
-        });
-        watcher = this::reloadWhenChanged;
-        ResourcesPlugin.getWorkspace().addResourceChangeListener(watcher, IResourceChangeEvent.POST_CHANGE);
-        if (pending != null) {
-            follow(pending);
-        }
-    }
-
-    /** A session added to the shown file (by the command line, say) shows once the workspace sees it. */
-    private void reloadWhenChanged(IResourceChangeEvent event) {
-        IFile file = shownFile;
-        if (file == null || live.document().isPresent() || event.getDelta() == null
-                || event.getDelta().findMember(file.getFullPath()) == null) {
-            return;
-        }
-        sync.asyncExec(() -> {
-            if (!summary.isDisposed() && file.equals(shownFile) && file.exists()) {
-                show(file);
-            }
-        });
     }
 
     /**
-     * Follows the workbench selection; anything but a mechanism file or parts list is ignored.
-     *
-     * @param selection the active selection (may be null)
-     */
-    @Inject
-    public void follow(@Optional @Named(IServiceConstants.ACTIVE_SELECTION) Object selection) {
-        if (summary == null) {
-            pending = selection;
-            return;
-        }
-        if (summary.isDisposed()) {
-            return;
-        }
-        MechanismSelection.fileOf(selection).ifPresent(this::show);
-    }
-
-    /**
-     * Shows a mechanism file or parts list: its first session, or the predicted swing.
+     * Shows a mechanism file or parts list: its first session, or the predicted swing. A session
+     * added to the shown file (by the command line, say) shows once the workspace sees it.
      *
      * @param file the file
      */
+    @Override
     public void show(IFile file) {
-        var open = live.follow(file);
+        var open = openDocument(file);
         if (open.isPresent()) {
             // the editor's model, copied here on the UI thread; the job computes from the copy
-            int chosen = file.equals(shownFile) ? sessions.getSelectionIndex() : -1;
-            shownFile = file;
-            shownStamp = IResource.NULL_STAMP;
+            int chosen = file.equals(shownFile()) ? sessions.getSelectionIndex() : -1;
+            shown(file);
+            forget();
             keepSession = chosen;
             load("Simulating the swing of " + file.getName(), file.getName(), null,
                     new Live(EcoreUtil.copy(open.get().mechanism()), MechanismSelection.pathOf(file), chosen));
             return;
         }
         keepSession = -1;
-        if (file.equals(shownFile) && file.getModificationStamp() == shownStamp) {
+        if (showsUnchanged(file)) {
             return;
         }
-        shownFile = file;
-        shownStamp = file.getModificationStamp();
+        shown(file);
         load("Reading the swing records of " + file.getName(), file.getName(), null,
                 MechanismSelection.pathOf(file));
     }
@@ -185,52 +107,25 @@ public final class SwingChartPart {
      * @param input    the subject, or the path to open
      */
     private void load(String what, String fileName, Function<ChartSubject, SwingChartContent> step, Object input) {
-        long ticket = ++generation;
-        if (running != null) {
-            running.cancel();
-        }
         summary.setText(what + " ...");
-        Job job = new Job(what) {
-            @Override
-            protected IStatus run(IProgressMonitor monitor) {
-                SubMonitor progress = SubMonitor.convert(monitor, what, 2);
-                ChartSubject opened;
-                SwingChartContent result;
-                try {
-                    opened = input instanceof ChartSubject s ? s : input instanceof Live l ? ChartSubject.of(l.mechanism(), l.file())
-                            : ChartSubject.open((Path) input);
-                    progress.worked(1);
-                    int keep = input instanceof Live l ? l.session() : -1;
-                    result = step != null ? step.apply(opened) : keep > 0 && keep < opened.sessions().size()
-                            ? opened.session(keep) : opened.first();
-                } catch (InputException e) {
-                    opened = null;
-                    result = SwingChartContent.failed(fileName, e.getMessage());
-                } catch (RuntimeException e) {
-                    ILog.of(SwingChartPart.class).error(what + " failed", e);
-                    opened = null;
-                    result = SwingChartContent.failed(fileName, fileName + ": could not be shown (" + e.getMessage()
-                            + "); the error log has the details");
-                }
-                progress.worked(1);
-                if (progress.isCanceled()) {
-                    return Status.CANCEL_STATUS;
-                }
-                ChartSubject s = opened;
-                SwingChartContent c = result;
-                sync.asyncExec(() -> apply(ticket, s, c, step == null));
-                return Status.OK_STATUS;
+        read(what, false, () -> {
+            try {
+                ChartSubject opened = input instanceof ChartSubject s ? s : input instanceof Live l
+                        ? ChartSubject.of(l.mechanism(), l.file()) : ChartSubject.open((Path) input);
+                int keep = input instanceof Live l ? l.session() : -1;
+                return new Loaded(opened, step != null ? step.apply(opened) : keep > 0 && keep < opened.sessions().size()
+                        ? opened.session(keep) : opened.first());
+            } catch (InputException e) {
+                return new Loaded(null, SwingChartContent.failed(fileName, e.getMessage()));
+            } catch (RuntimeException e) {
+                ILog.of(SwingChartPart.class).error(what + " failed", e);
+                return new Loaded(null, SwingChartContent.failed(fileName, fileName + ": could not be shown ("
+                        + e.getMessage() + "); the error log has the details"));
             }
-        };
-        running = job;
-        job.schedule();
+        }, loaded -> apply(loaded.opened(), loaded.content(), step == null));
     }
 
-    private void apply(long ticket, ChartSubject opened, SwingChartContent result, boolean fresh) {
-        if (ticket != generation || summary.isDisposed()) {
-            return;
-        }
-        running = null;
+    private void apply(ChartSubject opened, SwingChartContent result, boolean fresh) {
         if (fresh) {
             subject = opened;
             fillSessions(opened);
@@ -293,19 +188,5 @@ public final class SwingChartPart {
      */
     public Chart chart() {
         return chart.control();
-    }
-
-    /** Stops a running job and the workspace listener. */
-    @PreDestroy
-    public void dispose() {
-        if (live != null) {
-            live.dispose();
-        }
-        if (running != null) {
-            running.cancel();
-        }
-        if (watcher != null) {
-            ResourcesPlugin.getWorkspace().removeResourceChangeListener(watcher);
-        }
     }
 }

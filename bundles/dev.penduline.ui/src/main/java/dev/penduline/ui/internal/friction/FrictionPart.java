@@ -1,23 +1,7 @@
 package dev.penduline.ui.internal.friction;
-
 import java.nio.file.Path;
 
-import jakarta.annotation.PostConstruct;
-import jakarta.annotation.PreDestroy;
-import jakarta.inject.Inject;
-import jakarta.inject.Named;
-
 import org.eclipse.core.resources.IFile;
-import org.eclipse.core.resources.IResourceChangeEvent;
-import org.eclipse.core.resources.IResourceChangeListener;
-import org.eclipse.core.resources.ResourcesPlugin;
-import org.eclipse.core.runtime.IProgressMonitor;
-import org.eclipse.core.runtime.IStatus;
-import org.eclipse.core.runtime.Status;
-import org.eclipse.core.runtime.jobs.Job;
-import org.eclipse.e4.core.di.annotations.Optional;
-import org.eclipse.e4.ui.di.UISynchronize;
-import org.eclipse.e4.ui.services.IServiceConstants;
 import org.eclipse.jface.wizard.WizardDialog;
 import org.eclipse.jface.layout.GridDataFactory;
 import org.eclipse.jface.layout.GridLayoutFactory;
@@ -31,8 +15,8 @@ import org.eclipse.swt.widgets.Table;
 import dev.penduline.services.Cautions;
 import dev.penduline.services.InputException;
 import dev.penduline.services.StoredFitText;
+import dev.penduline.ui.internal.FollowingPart;
 import dev.penduline.ui.internal.MechanismSelection;
-import dev.penduline.ui.internal.document.LiveModel;
 import dev.penduline.ui.internal.document.MechanismDocuments;
 import dev.penduline.ui.internal.friction.FrictionHeader.Tone;
 
@@ -44,45 +28,22 @@ import dev.penduline.ui.internal.friction.FrictionHeader.Tone;
  * which runs the services of {@code penduline fit} and stores the result; the view then shows it. Widgets are only
  * touched on the UI thread; errors show as the services' messages, never as stack traces.
  */
-public final class FrictionPart {
+public final class FrictionPart extends FollowingPart {
 
     private static final String HINT = "Select a mechanism file (.penduline) in Project Files.";
     private static final String DURATION = "Fit Friction… sets up a fit of the test sessions; several long records"
             + " can take tens of seconds.";
 
-    private final UISynchronize sync;
     private FrictionHeader header;
     private StoredFitPanel panel;
-    private IFile pending;
-    private IFile shownFile;
-    private long shownStamp;
-    private long generation;
-    private Job loading;
     private WizardDialog wizard;
     private FrictionSheet sheet;
     private StoredFitText shownFit;
     private String preferredId;
     private boolean keepOutcome;
-    private IResourceChangeListener watcher;
-    private LiveModel live;
 
-    /**
-     * Created by the workbench.
-     *
-     * @param sync runs the results on the UI thread
-     */
-    @Inject
-    public FrictionPart(UISynchronize sync) {
-        this.sync = sync;
-    }
-
-    /**
-     * Builds the view.
-     *
-     * @param parent the part's composite
-     */
-    @PostConstruct
-    public void create(Composite parent) {
+    @Override
+    protected void build(Composite parent) {
         GridLayoutFactory.swtDefaults().margins(8, 6).spacing(6, 4).applyTo(parent);
         header = new FrictionHeader(parent, this::choose, this::fit);
         header.say(HINT, Tone.HINT);
@@ -91,35 +52,19 @@ public final class FrictionPart {
         caution.setText(Cautions.TEXT);
         caution.setFont(JFaceResources.getFontRegistry().getItalic(JFaceResources.DEFAULT_FONT));
         GridDataFactory.fillDefaults().grab(true, false).hint(300, SWT.DEFAULT).applyTo(caution);
-        live = new LiveModel(sync::asyncExec, () -> {
-            if (shownFile != null && !header.isDisposed()) {
-                shownStamp = IFile.NULL_STAMP;
-                keepOutcome = true;
-                show(shownFile);
-            }
-        });
-        watcher = this::reloadWhenChanged;
-        ResourcesPlugin.getWorkspace().addResourceChangeListener(watcher, IResourceChangeEvent.POST_CHANGE);
-        if (pending != null) {
-            show(pending);
-        }
     }
 
-    /**
-     * Follows the workbench selection; anything but a mechanism file is ignored, so the view
-     * keeps its mechanism while the user works elsewhere.
-     *
-     * @param selection the active selection (may be null)
-     */
-    @Inject
-    public void follow(@Optional @Named(IServiceConstants.ACTIVE_SELECTION) Object selection) {
-        MechanismSelection.fileOf(selection).filter(MechanismSelection::isMechanismFile).ifPresent(file -> {
-            if (header == null) {
-                pending = file;
-            } else if (!header.isDisposed()) {
-                show(file);
-            }
-        });
+    /** Only mechanism files: a parts list has no stored fits. */
+    @Override
+    protected boolean accepts(IFile file) {
+        return MechanismSelection.isMechanismFile(file);
+    }
+
+    /** An edit in the editor keeps the last outcome's line (the editor's own fit, say). */
+    @Override
+    protected void modelChanged(IFile file) {
+        keepOutcome = true;
+        show(file);
     }
 
     /**
@@ -127,11 +72,12 @@ public final class FrictionPart {
      *
      * @param file the mechanism file
      */
+    @Override
     public void show(IFile file) {
-        if (file.equals(shownFile) && file.getModificationStamp() == shownStamp && loading == null) {
+        if (showsUnchanged(file) && !reading()) {
             return;
         }
-        if (!file.equals(shownFile)) {
+        if (!file.equals(shownFile())) {
             preferredId = null;
         }
         // A new file, or one changed since the last outcome (a session added, a fit stored by
@@ -140,46 +86,24 @@ public final class FrictionPart {
             header.say(DURATION, Tone.HINT);
         }
         keepOutcome = false;
-        shownFile = file;
-        shownStamp = file.getModificationStamp();
+        shown(file);
         header.fitEnabled(true);
         header.file(file.getName(), file.getFullPath().toString());
-        long ticket = ++generation;
-        if (loading != null) {
-            loading.cancel();
-        }
         Path path = MechanismSelection.pathOf(file);
-        var open = live.follow(file);
+        var open = openDocument(file);
         if (open.isPresent()) {
             // the editor's model, read on the UI thread: nothing to wait for
-            shownStamp = IFile.NULL_STAMP;
-            loading = null;
-            apply(ticket, FrictionSheet.of(open.get().mechanism(), file.getName(), path.toString()));
+            stopReading();
+            forget();
+            apply(FrictionSheet.of(open.get().mechanism(), file.getName(), path.toString()));
             return;
         }
-        Job job = new Job("Reading the stored fits of " + file.getName()) {
-            @Override
-            protected IStatus run(IProgressMonitor monitor) {
-                FrictionSheet result = FrictionSheet.read(path);
-                if (monitor.isCanceled()) {
-                    return Status.CANCEL_STATUS;
-                }
-                sync.asyncExec(() -> apply(ticket, result));
-                return Status.OK_STATUS;
-            }
-        };
-        job.setSystem(true);
-        loading = job;
-        job.schedule();
+        read("Reading the stored fits of " + file.getName(), true, () -> FrictionSheet.read(path), this::apply);
     }
 
-    private void apply(long ticket, FrictionSheet result) {
-        if (ticket != generation || header.isDisposed()) {
-            return;
-        }
-        loading = null;
+    private void apply(FrictionSheet result) {
         sheet = result;
-        header.file(result.title(), shownFile.getFullPath().toString());
+        header.file(result.title(), shownFile().getFullPath().toString());
         String keep = preferredId != null ? preferredId : shownFit == null ? null : shownFit.id();
         StoredFitText chosen = keep == null ? null : result.fit(keep).orElse(null);
         if (chosen == null && !result.fits().isEmpty()) {
@@ -208,10 +132,10 @@ public final class FrictionPart {
      * @return whether the wizard opened (false while one is open or before a file is shown)
      */
     public boolean fit() {
-        if (shownFile == null || header.isDisposed() || (wizard != null && wizard.getShell() != null)) {
+        if (shownFile() == null || header.isDisposed() || (wizard != null && wizard.getShell() != null)) {
             return false;
         }
-        IFile file = shownFile;
+        IFile file = shownFile();
         FitWizard w;
         try {
             w = new FitWizard(file, id -> stored(file, id));
@@ -232,25 +156,12 @@ public final class FrictionPart {
         }
         // short: the line shares its row with the list and the button
         header.say(MechanismDocuments.of(file).isPresent() ? "Fit stored in the editor (unsaved)." : "Fit stored.", Tone.NEWS);
-        if (file.equals(shownFile)) {
+        if (file.equals(shownFile())) {
             preferredId = id;
-            shownStamp = IFile.NULL_STAMP;
+            forget();
             keepOutcome = true;
             show(file);
         }
-    }
-
-    private void reloadWhenChanged(IResourceChangeEvent event) {
-        IFile file = shownFile;
-        if (file == null || live.document().isPresent() || event.getDelta() == null
-                || event.getDelta().findMember(file.getFullPath()) == null) {
-            return;
-        }
-        sync.asyncExec(() -> {
-            if (!header.isDisposed() && file.equals(shownFile) && file.exists()) {
-                show(file);
-            }
-        });
     }
 
     /**
@@ -314,19 +225,5 @@ public final class FrictionPart {
      */
     public Button fitButton() {
         return header.fitButton();
-    }
-
-    /** Stops the jobs and the workspace listener. */
-    @PreDestroy
-    public void dispose() {
-        if (live != null) {
-            live.dispose();
-        }
-        if (loading != null) {
-            loading.cancel();
-        }
-        if (watcher != null) {
-            ResourcesPlugin.getWorkspace().removeResourceChangeListener(watcher);
-        }
     }
 }

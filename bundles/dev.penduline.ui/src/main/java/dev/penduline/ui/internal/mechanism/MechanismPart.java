@@ -3,25 +3,8 @@ package dev.penduline.ui.internal.mechanism;
 import java.nio.file.Path;
 import java.util.List;
 
-import jakarta.annotation.PostConstruct;
-import jakarta.annotation.PreDestroy;
-import jakarta.inject.Inject;
-import jakarta.inject.Named;
-
 import org.eclipse.core.resources.IFile;
-import org.eclipse.core.resources.IResource;
-import org.eclipse.core.resources.IResourceChangeEvent;
-import org.eclipse.core.resources.IResourceChangeListener;
-import org.eclipse.core.resources.ResourcesPlugin;
 import org.eclipse.core.runtime.ILog;
-import org.eclipse.core.runtime.IProgressMonitor;
-import org.eclipse.core.runtime.IStatus;
-import org.eclipse.core.runtime.Status;
-import org.eclipse.core.runtime.SubMonitor;
-import org.eclipse.core.runtime.jobs.Job;
-import org.eclipse.e4.core.di.annotations.Optional;
-import org.eclipse.e4.ui.di.UISynchronize;
-import org.eclipse.e4.ui.services.IServiceConstants;
 import org.eclipse.jface.layout.GridDataFactory;
 import org.eclipse.jface.layout.GridLayoutFactory;
 import org.eclipse.jface.resource.JFaceResources;
@@ -31,8 +14,8 @@ import org.eclipse.swt.widgets.Composite;
 import org.eclipse.swt.widgets.Label;
 
 import dev.penduline.services.Cautions;
+import dev.penduline.ui.internal.FollowingPart;
 import dev.penduline.ui.internal.MechanismSelection;
-import dev.penduline.ui.internal.document.LiveModel;
 import dev.penduline.ui.internal.document.MechanismDocument;
 
 /**
@@ -42,42 +25,19 @@ import dev.penduline.ui.internal.document.MechanismDocument;
  * widgets are only touched on the UI thread. A bad file shows the services' message (file,
  * line, field), never a stack trace.
  */
-public final class MechanismPart {
+public final class MechanismPart extends FollowingPart {
 
     private static final String HINT = "Select a mechanism file (.penduline) or a parts list (.csv) in Project Files.";
 
-    private final UISynchronize sync;
     private Label title;
     private Label source;
     private Label message;
     private MechanismTables tables;
     private Label warnings;
-    private IFile pending;
-    private IFile shownFile;
-    private long shownStamp;
-    private long generation;
-    private Job running;
     private MechanismSheet sheet;
-    private IResourceChangeListener watcher;
-    private LiveModel live;
 
-    /**
-     * Created by the workbench.
-     *
-     * @param sync runs the results on the UI thread
-     */
-    @Inject
-    public MechanismPart(UISynchronize sync) {
-        this.sync = sync;
-    }
-
-    /**
-     * Builds the view.
-     *
-     * @param parent the part's composite
-     */
-    @PostConstruct
-    public void create(Composite parent) {
+    @Override
+    protected void build(Composite parent) {
         GridLayoutFactory.swtDefaults().margins(8, 6).spacing(6, 4).applyTo(parent);
         Composite header = new Composite(parent, SWT.NONE);
         GridLayoutFactory.fillDefaults().numColumns(2).spacing(12, 0).applyTo(header);
@@ -99,16 +59,6 @@ public final class MechanismPart {
         caution.setText(Cautions.TEXT);
         caution.setFont(JFaceResources.getFontRegistry().getItalic(JFaceResources.DEFAULT_FONT));
         GridDataFactory.fillDefaults().grab(true, false).hint(300, SWT.DEFAULT).applyTo(caution);
-        live = new LiveModel(sync::asyncExec, () -> {
-            if (shownFile != null && !title.isDisposed()) {
-                show(shownFile, true);
-            }
-        });
-        watcher = this::reloadWhenChanged;
-        ResourcesPlugin.getWorkspace().addResourceChangeListener(watcher, IResourceChangeEvent.POST_CHANGE);
-        if (pending != null) {
-            show(pending);
-        }
     }
 
     /** Shows a line above the tables (the hint, progress, or an error in red); null hides it. */
@@ -124,96 +74,49 @@ public final class MechanismPart {
     }
 
     /**
-     * Follows the workbench selection; anything but a mechanism file or parts list is ignored,
-     * so the view keeps its mechanism while the user works elsewhere.
-     *
-     * @param selection the active selection (may be null)
-     */
-    @Inject
-    public void follow(@Optional @Named(IServiceConstants.ACTIVE_SELECTION) Object selection) {
-        MechanismSelection.fileOf(selection).ifPresent(file -> {
-            if (title == null) {
-                pending = file;
-            } else if (!title.isDisposed()) {
-                show(file);
-            }
-        });
-    }
-
-    /**
      * Shows a file: its live model at once when an editor has it open, else loads it in a job
      * unless it is already shown unchanged.
      *
      * @param file the mechanism file or parts list
      */
+    @Override
     public void show(IFile file) {
-        show(file, false);
-    }
-
-    private void show(IFile file, boolean again) {
-        var open = live.follow(file);
+        var open = openDocument(file);
         if (open.isPresent()) {
             showLive(file, open.get());
             return;
         }
-        if (!again && file.equals(shownFile) && file.getModificationStamp() == shownStamp && running == null) {
+        if (showsUnchanged(file) && !reading()) {
             return;
         }
-        shownFile = file;
-        shownStamp = file.getModificationStamp();
-        long ticket = ++generation;
-        if (running != null) {
-            running.cancel();
-        }
+        shown(file);
         title.setText(file.getName());
         source.setText(file.getFullPath().toString());
         say("Computing the inertia of " + file.getName() + " ...", false);
         title.getParent().getParent().layout(true, true);
         Path path = MechanismSelection.pathOf(file);
-        Job job = new Job("Computing the inertia of " + file.getName()) {
-            @Override
-            protected IStatus run(IProgressMonitor monitor) {
-                SubMonitor progress = SubMonitor.convert(monitor, getName(), 1);
-                MechanismSheet result;
-                try {
-                    result = MechanismSheet.read(path);
-                } catch (RuntimeException e) {
-                    ILog.of(MechanismPart.class).error("inertia of " + path + " failed", e);
-                    result = MechanismSheet.failed(file.getName(), path.toString(),
-                            path + ": could not be computed (" + e.getMessage() + "); the error log has the details");
-                }
-                progress.worked(1);
-                if (progress.isCanceled()) {
-                    return Status.CANCEL_STATUS;
-                }
-                MechanismSheet done = result;
-                sync.asyncExec(() -> apply(ticket, done));
-                return Status.OK_STATUS;
+        read("Computing the inertia of " + file.getName(), false, () -> {
+            try {
+                return MechanismSheet.read(path);
+            } catch (RuntimeException e) {
+                ILog.of(MechanismPart.class).error("inertia of " + path + " failed", e);
+                return MechanismSheet.failed(file.getName(), path.toString(),
+                        path + ": could not be computed (" + e.getMessage() + "); the error log has the details");
             }
-        };
-        running = job;
-        job.schedule();
+        }, this::apply);
     }
 
     /** The editor's model, computed on the UI thread: the services take milliseconds for a parts list. */
     private void showLive(IFile file, MechanismDocument document) {
-        if (running != null) {
-            running.cancel();
-            running = null;
-        }
-        shownFile = file;
+        stopReading();
+        shown(file);
         // whatever the stamp, the file is read again once the editor closes
-        shownStamp = IResource.NULL_STAMP;
+        forget();
         source.setText(file.getFullPath() + " (open in the editor)");
-        long ticket = ++generation;
-        apply(ticket, MechanismSheet.live(document.mechanism(), file.getName(), MechanismSelection.pathOf(file)));
+        apply(MechanismSheet.live(document.mechanism(), file.getName(), MechanismSelection.pathOf(file)));
     }
 
-    private void apply(long ticket, MechanismSheet result) {
-        if (ticket != generation || title.isDisposed()) {
-            return;
-        }
-        running = null;
+    private void apply(MechanismSheet result) {
         sheet = result;
         title.setText(result.title());
         say(result.error().orElse(null), true);
@@ -224,19 +127,6 @@ public final class MechanismPart {
         title.getParent().getParent().layout(true, true);
     }
 
-    private void reloadWhenChanged(IResourceChangeEvent event) {
-        IFile file = shownFile;
-        if (file == null || live.document().isPresent() || event.getDelta() == null
-                || event.getDelta().findMember(file.getFullPath()) == null) {
-            return;
-        }
-        sync.asyncExec(() -> {
-            if (!title.isDisposed() && file.equals(shownFile) && file.exists()) {
-                show(file);
-            }
-        });
-    }
-
     /**
      * What the view shows now, for tests and for other parts.
      *
@@ -244,19 +134,5 @@ public final class MechanismPart {
      */
     public MechanismSheet sheet() {
         return sheet;
-    }
-
-    /** Stops the job and the workspace listener. */
-    @PreDestroy
-    public void dispose() {
-        if (live != null) {
-            live.dispose();
-        }
-        if (running != null) {
-            running.cancel();
-        }
-        if (watcher != null) {
-            ResourcesPlugin.getWorkspace().removeResourceChangeListener(watcher);
-        }
     }
 }

@@ -10,19 +10,12 @@ import java.util.Map;
 import java.util.Optional;
 import java.util.stream.Collectors;
 
-import jakarta.annotation.PostConstruct;
-import jakarta.annotation.PreDestroy;
-import jakarta.inject.Inject;
-import jakarta.inject.Named;
-
 import org.eclipse.core.resources.IFile;
 import org.eclipse.core.runtime.IProgressMonitor;
 import org.eclipse.core.runtime.IStatus;
 import org.eclipse.core.runtime.Status;
 import org.eclipse.core.runtime.jobs.ISchedulingRule;
 import org.eclipse.core.runtime.jobs.Job;
-import org.eclipse.e4.ui.di.UISynchronize;
-import org.eclipse.e4.ui.services.IServiceConstants;
 import org.eclipse.emf.ecore.util.EcoreUtil;
 import org.eclipse.jface.layout.GridDataFactory;
 import org.eclipse.jface.layout.GridLayoutFactory;
@@ -68,9 +61,9 @@ import dev.penduline.services.SessionRecords;
 import dev.penduline.services.StoredFit;
 import dev.penduline.services.present.Figures;
 import dev.penduline.services.present.PlotThinning;
+import dev.penduline.ui.internal.FollowingPart;
 import dev.penduline.ui.internal.MechanismSelection;
 import dev.penduline.ui.internal.chart.ChartTools;
-import dev.penduline.ui.internal.document.LiveModel;
 import dev.penduline.ui.internal.document.MechanismDocument;
 import dev.penduline.ui.internal.document.MechanismDocuments;
 import dev.penduline.ui.internal.editor.MechanismEdits;
@@ -84,7 +77,7 @@ import dev.penduline.ui.internal.editor.MechanismEdits;
  * prediction figures written by the same formatter as the command line. Store as Hypothesis
  * adds the chosen values to the mechanism's friction hypotheses as one undoable command.
  */
-public final class WhatIfPart {
+public final class WhatIfPart extends FollowingPart {
 
     /** The settle band's half-width (°): the one {@code penduline predict} uses unless told otherwise. */
     public static final double BAND_DEG = 1;
@@ -110,9 +103,7 @@ public final class WhatIfPart {
         }
     };
 
-    private final UISynchronize sync;
     private final Map<String, Label> figures = new LinkedHashMap<>();
-    private Object pending;
     private ScrolledComposite scroll;
     private Label title;
     private Combo sessions;
@@ -128,8 +119,6 @@ public final class WhatIfPart {
     private Chart swing;
     private Chart phase;
     private Chart energy;
-    private LiveModel live;
-    private IFile shownFile;
     private String shownFit;
     private Mechanism model;
     private MechanismSource mechanism;
@@ -138,23 +127,8 @@ public final class WhatIfPart {
     private volatile long generation;
     private long shownGeneration;
 
-    /**
-     * Created by the workbench.
-     *
-     * @param sync runs results on the UI thread
-     */
-    @Inject
-    public WhatIfPart(UISynchronize sync) {
-        this.sync = sync;
-    }
-
-    /**
-     * Builds the view.
-     *
-     * @param parent the part's composite
-     */
-    @PostConstruct
-    public void create(Composite parent) {
+    @Override
+    protected void build(Composite parent) {
         GridLayoutFactory.swtDefaults().numColumns(2).margins(6, 4).applyTo(parent);
         // the controls and figures scroll when the view is shorter than they are
         scroll = new ScrolledComposite(parent, SWT.V_SCROLL);
@@ -203,14 +177,18 @@ public final class WhatIfPart {
         phase = chart(charts, "Phase portrait", "angle (°)", "angular velocity (°/s)");
         energy = chart(charts, "Energy ledger", "time (s)", "energy (J)");
         enable(false);
-        live = new LiveModel(sync::asyncExec, () -> {
-            if (shownFile != null && !title.isDisposed()) {
-                show(shownFile);
-            }
-        });
-        if (pending != null) {
-            follow(pending);
-        }
+    }
+
+    /** Only mechanism files: a parts list has no friction to try. */
+    @Override
+    protected boolean accepts(IFile file) {
+        return MechanismSelection.isMechanismFile(file);
+    }
+
+    /** The view reads the file when it is selected, and again only when the editor's model changes. */
+    @Override
+    protected boolean followsDisk() {
+        return false;
     }
 
     private static Chart chart(Composite parent, String name, String x, String y) {
@@ -225,40 +203,24 @@ public final class WhatIfPart {
     }
 
     /**
-     * Follows the workbench selection; anything but a mechanism file is ignored.
-     *
-     * @param selection the active selection (may be null)
-     */
-    @Inject
-    public void follow(@org.eclipse.e4.core.di.annotations.Optional @Named(IServiceConstants.ACTIVE_SELECTION)
-            Object selection) {
-        if (title == null) {
-            pending = selection;
-            return;
-        }
-        if (!title.isDisposed()) {
-            MechanismSelection.fileOf(selection).filter(MechanismSelection::isMechanismFile).ifPresent(this::show);
-        }
-    }
-
-    /**
      * Shows a mechanism file (its editor's live model when it is open): the sliders start from its
      * latest stored fit unless the same file and fit are shown already.
      *
      * @param file the mechanism file
      */
+    @Override
     public void show(IFile file) {
         Path path = MechanismSelection.pathOf(file);
-        Optional<MechanismDocument> open = live.follow(file);
+        Optional<MechanismDocument> open = openDocument(file);
         try {
             Mechanism m = open.isPresent() ? EcoreUtil.copy(open.get().mechanism()) : MechanismLoader.readMechanism(path);
             MechanismSource source = new MechanismLoader().loadMechanism(m, path.toString());
             Optional<StoredFit> latest = StoredFit.latest(m);
-            boolean same = file.equals(shownFile) && java.util.Objects.equals(shownFit, latest.map(StoredFit::id).orElse(""));
-            if (!file.equals(shownFile)) {
+            boolean same = file.equals(shownFile()) && java.util.Objects.equals(shownFit, latest.map(StoredFit::id).orElse(""));
+            if (!file.equals(shownFile())) {
                 overlays.clear();
             }
-            shownFile = file;
+            shown(file);
             shownFit = latest.map(StoredFit::id).orElse("");
             model = m;
             mechanism = source;
@@ -346,7 +308,7 @@ public final class WhatIfPart {
         TestSession session = model.getSessions().get(index);
         double[] shift = releaseOf(index).orElse(new double[] {Double.NaN, 0, 0});
         try {
-            SwingRecord record = SessionRecords.readSession(MechanismSelection.pathOf(shownFile), session).record();
+            SwingRecord record = SessionRecords.readSession(MechanismSelection.pathOf(shownFile()), session).record();
             double[] t = record.times();
             double[] a = record.angles();
             double t0 = Double.isNaN(shift[0]) ? t[0] : shift[0];
@@ -418,7 +380,7 @@ public final class WhatIfPart {
         if (mechanism == null || title.isDisposed()) {
             return;
         }
-        String key = shownFile.getFullPath() + "#" + sessions.getSelectionIndex();
+        String key = shownFile().getFullPath() + "#" + sessions.getSelectionIndex();
         double[] cached = overlays.get(key);
         double[][] record;
         if (cached == null) {
@@ -439,7 +401,7 @@ public final class WhatIfPart {
                     return Status.CANCEL_STATUS;
                 }
                 Result r = compute(trial);
-                sync.asyncExec(() -> apply(r));
+                onUiThread(() -> apply(r));
                 return Status.OK_STATUS;
             }
         };
@@ -611,7 +573,7 @@ public final class WhatIfPart {
      * document when the file is open, else on the file read, then saved.
      */
     private void storeHypothesis() {
-        if (shownFile == null || model == null) {
+        if (shownFile() == null || model == null) {
             return;
         }
         FrictionTorques f = friction();
@@ -622,8 +584,8 @@ public final class WhatIfPart {
         values.put(FrictionKind.DRAG, f.drag());
         String from = fit == null ? "no stored fit" : "stored fit " + fit.id();
         try {
-            Optional<MechanismDocument> open = MechanismDocuments.of(shownFile);
-            MechanismDocument document = open.isPresent() ? open.get() : MechanismDocument.read(shownFile);
+            Optional<MechanismDocument> open = MechanismDocuments.of(shownFile());
+            MechanismDocument document = open.isPresent() ? open.get() : MechanismDocument.read(shownFile());
             Mechanism m = document.mechanism();
             String name = StableIds.unique("swing trial", m.getFrictionHypotheses().stream().map(FrictionHypothesis::getName)
                     .collect(Collectors.toSet()));
@@ -649,7 +611,7 @@ public final class WhatIfPart {
                 document.save(false, notes::add);
             }
             status.setText("Stored hypothesis '" + name + "'" + (open.isPresent() ? " in the open editor (unsaved; Edit › "
-                    + "Undo takes it back)" : " in " + shownFile.getName()) + ".");
+                    + "Undo takes it back)" : " in " + shownFile().getName()) + ".");
         } catch (InputException e) {
             status.setText("Not stored: " + e.getMessage());
         }
@@ -723,13 +685,5 @@ public final class WhatIfPart {
     /** @return the three charts: swing, phase portrait, energy ledger */
     public Chart[] charts() {
         return new Chart[] {swing, phase, energy};
-    }
-
-    /** Stops following the live model. */
-    @PreDestroy
-    public void dispose() {
-        if (live != null) {
-            live.dispose();
-        }
     }
 }
