@@ -62,7 +62,7 @@ public enum AngleUnit implements Enumerator
    * @generated
    * @ordered
    */
-  COUNT(2, "COUNT", "count");
+  COUNT(2, "COUNT", "counts");
 
   /**
    * The '<em><b>RADIAN</b></em>' literal value.
@@ -100,7 +100,7 @@ public enum AngleUnit implements Enumerator
    * Encoder counts; converted with the session's counts per revolution.
    * <!-- end-model-doc -->
    * @see #COUNT
-   * @model literal="count"
+   * @model literal="counts"
    * @generated
    * @ordered
    */

@@ -65,17 +65,17 @@ public enum FrictionKind implements Enumerator
   STICTION(2, "STICTION", "stiction"),
 
   /**
-   * The '<em><b>QUADRATIC DRAG</b></em>' literal object.
+   * The '<em><b>DRAG</b></em>' literal object.
    * <!-- begin-user-doc -->
    * <!-- end-user-doc -->
    * <!-- begin-model-doc -->
    * Quadratic (air) drag c·ω·|ω|; c in N·m·s²/rad².
    * <!-- end-model-doc -->
-   * @see #QUADRATIC_DRAG_VALUE
+   * @see #DRAG_VALUE
    * @generated
    * @ordered
    */
-  QUADRATIC_DRAG(3, "QUADRATIC_DRAG", "quadratic-drag");
+  DRAG(3, "DRAG", "drag");
 
   /**
    * The '<em><b>VISCOUS</b></em>' literal value.
@@ -120,18 +120,18 @@ public enum FrictionKind implements Enumerator
   public static final int STICTION_VALUE = 2;
 
   /**
-   * The '<em><b>QUADRATIC DRAG</b></em>' literal value.
+   * The '<em><b>DRAG</b></em>' literal value.
    * <!-- begin-user-doc -->
    * <!-- end-user-doc -->
    * <!-- begin-model-doc -->
    * Quadratic (air) drag c·ω·|ω|; c in N·m·s²/rad².
    * <!-- end-model-doc -->
-   * @see #QUADRATIC_DRAG
-   * @model literal="quadratic-drag"
+   * @see #DRAG
+   * @model literal="drag"
    * @generated
    * @ordered
    */
-  public static final int QUADRATIC_DRAG_VALUE = 3;
+  public static final int DRAG_VALUE = 3;
 
   /**
    * An array of all the '<em><b>Friction Kind</b></em>' enumerators.
@@ -145,7 +145,7 @@ public enum FrictionKind implements Enumerator
       VISCOUS,
       COULOMB,
       STICTION,
-      QUADRATIC_DRAG,
+      DRAG,
     };
 
   /**
@@ -213,7 +213,7 @@ public enum FrictionKind implements Enumerator
       case VISCOUS_VALUE: return VISCOUS;
       case COULOMB_VALUE: return COULOMB;
       case STICTION_VALUE: return STICTION;
-      case QUADRATIC_DRAG_VALUE: return QUADRATIC_DRAG;
+      case DRAG_VALUE: return DRAG;
     }
     return null;
   }

@@ -39,7 +39,7 @@ public interface FrictionTerm extends EObject
    * <!-- begin-user-doc -->
    * <!-- end-user-doc -->
    * <!-- begin-model-doc -->
-   * Stable identifier, derived from the name when the element is created (lower case, words joined by '-', a numeric suffix when taken); unique among its siblings. Other elements and the user refer to it; it never changes on rename. For terms: the kind's literal by default (viscous, coulomb, stiction, quadratic-drag).
+   * Stable identifier, derived from the name when the element is created (lower case, words joined by '-', a numeric suffix when taken); unique among its siblings. Other elements and the user refer to it; it never changes on rename. For terms: the kind's literal by default (viscous, coulomb, stiction, drag).
    * <!-- end-model-doc -->
    * @return the value of the '<em>Id</em>' attribute.
    * @see #setId(String)

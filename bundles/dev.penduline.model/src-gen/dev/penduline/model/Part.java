@@ -112,7 +112,7 @@ public interface Part extends EObject
    * <!-- begin-user-doc -->
    * <!-- end-user-doc -->
    * <!-- begin-model-doc -->
-   * The shape the part's inertia is computed from. Unsettable so that it is written even when it is the first literal (point-mass); unset reads as point-mass.
+   * The shape the part's inertia is computed from. Unsettable so that it is written even when it is the first literal (point); unset reads as point.
    * <!-- end-model-doc -->
    * @return the value of the '<em>Shape</em>' attribute.
    * @see dev.penduline.model.ShapeKind

@@ -36,7 +36,7 @@ public enum ShapeKind implements Enumerator
    * @generated
    * @ordered
    */
-  POINT_MASS(0, "POINT_MASS", "point-mass"),
+  POINT_MASS(0, "POINT_MASS", "point"),
 
   /**
    * The '<em><b>SLENDER ROD</b></em>' literal object.
@@ -49,7 +49,7 @@ public enum ShapeKind implements Enumerator
    * @generated
    * @ordered
    */
-  SLENDER_ROD(1, "SLENDER_ROD", "slender-rod"),
+  SLENDER_ROD(1, "SLENDER_ROD", "rod"),
 
   /**
    * The '<em><b>BOX</b></em>' literal object.
@@ -114,7 +114,7 @@ public enum ShapeKind implements Enumerator
    * @generated
    * @ordered
    */
-  THIN_RING(6, "THIN_RING", "thin-ring"),
+  THIN_RING(6, "THIN_RING", "ring"),
 
   /**
    * The '<em><b>MASS PROPERTIES</b></em>' literal object.
@@ -127,7 +127,7 @@ public enum ShapeKind implements Enumerator
    * @generated
    * @ordered
    */
-  MASS_PROPERTIES(7, "MASS_PROPERTIES", "mass-properties");
+  MASS_PROPERTIES(7, "MASS_PROPERTIES", "tensor");
 
   /**
    * The '<em><b>POINT MASS</b></em>' literal value.
@@ -137,7 +137,7 @@ public enum ShapeKind implements Enumerator
    * All mass at the centroid; no dimensions.
    * <!-- end-model-doc -->
    * @see #POINT_MASS
-   * @model literal="point-mass"
+   * @model literal="point"
    * @generated
    * @ordered
    */
@@ -151,7 +151,7 @@ public enum ShapeKind implements Enumerator
    * Thin rod of the given length along the shape axis: Jcg = m L²/12 across it.
    * <!-- end-model-doc -->
    * @see #SLENDER_ROD
-   * @model literal="slender-rod"
+   * @model literal="rod"
    * @generated
    * @ordered
    */
@@ -221,7 +221,7 @@ public enum ShapeKind implements Enumerator
    * Thin ring (hoop) of the given radius, lying in the plane normal to the shape axis.
    * <!-- end-model-doc -->
    * @see #THIN_RING
-   * @model literal="thin-ring"
+   * @model literal="ring"
    * @generated
    * @ordered
    */
@@ -235,7 +235,7 @@ public enum ShapeKind implements Enumerator
    * Mass properties from CAD: mass, centroid and a full inertia tensor (ixx … iyz).
    * <!-- end-model-doc -->
    * @see #MASS_PROPERTIES
-   * @model literal="mass-properties"
+   * @model literal="tensor"
    * @generated
    * @ordered
    */

@@ -1927,7 +1927,7 @@ public class PendulinePackageImpl extends EPackageImpl implements PendulinePacka
     addEEnumLiteral(frictionKindEEnum, FrictionKind.VISCOUS);
     addEEnumLiteral(frictionKindEEnum, FrictionKind.COULOMB);
     addEEnumLiteral(frictionKindEEnum, FrictionKind.STICTION);
-    addEEnumLiteral(frictionKindEEnum, FrictionKind.QUADRATIC_DRAG);
+    addEEnumLiteral(frictionKindEEnum, FrictionKind.DRAG);
 
     initEEnum(timeUnitEEnum, TimeUnit.class, "TimeUnit");
     addEEnumLiteral(timeUnitEEnum, TimeUnit.SECOND);

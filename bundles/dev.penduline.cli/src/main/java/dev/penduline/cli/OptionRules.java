@@ -2,6 +2,7 @@ package dev.penduline.cli;
 
 import java.util.Map;
 
+import dev.penduline.physics.identify.FrictionTerm;
 import dev.penduline.services.ValueRange;
 
 /**
@@ -69,10 +70,10 @@ public final class OptionRules {
             Map.entry("release-angle-deg", symmetricOpen(180, "°",
                     "angles are measured from the hanging equilibrium; 180° is the upright")),
             Map.entry("omega0-deg-s", closed(-1e5, 1e5, "°/s", "")),
-            Map.entry("viscous", closed(0, 1e9, "N·m·s/rad", FRICTION_HINT)),
-            Map.entry("coulomb", closed(0, 1e9, "N·m", FRICTION_HINT)),
-            Map.entry("stiction", closed(0, 1e9, "N·m", FRICTION_HINT)),
-            Map.entry("drag", closed(0, 1e9, "N·m·s²/rad²", FRICTION_HINT)),
+            Map.entry(FrictionTerm.VISCOUS.word(), closed(0, 1e9, FrictionTerm.VISCOUS.unit(), FRICTION_HINT)),
+            Map.entry(FrictionTerm.COULOMB.word(), closed(0, 1e9, FrictionTerm.COULOMB.unit(), FRICTION_HINT)),
+            Map.entry(FrictionTerm.STICTION.word(), closed(0, 1e9, FrictionTerm.STICTION.unit(), FRICTION_HINT)),
+            Map.entry(FrictionTerm.DRAG.word(), closed(0, 1e9, FrictionTerm.DRAG.unit(), FRICTION_HINT)),
             Map.entry("band-deg", new Rule(0, true, 90, false, false, "°", "the half-width of the settle band about the hanging"
                     + " equilibrium")),
             Map.entry("at-deg", symmetricOpen(180, "°", "angles are measured from the hanging equilibrium; 180° is the upright")),

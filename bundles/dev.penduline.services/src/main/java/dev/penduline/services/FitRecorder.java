@@ -135,7 +135,7 @@ public final class FitRecorder {
             r.getSessionIds().add(s.sessionId() != null ? s.sessionId() : s.file());
         }
         for (FrictionTerm t : fit.terms()) {
-            r.getTermIds().add(t.name().toLowerCase(Locale.ROOT));
+            r.getTermIds().add(t.word());
         }
         for (ParameterEstimate p : fit.parameters()) {
             Estimate e = f.createEstimate();
@@ -175,7 +175,7 @@ public final class FitRecorder {
             for (CandidateScore score : cmp.candidates()) {
                 TermSetScore t = f.createTermSetScore();
                 for (FrictionTerm term : score.terms()) {
-                    t.getTermIds().add(term.name().toLowerCase(Locale.ROOT));
+                    t.getTermIds().add(term.word());
                 }
                 t.setAic(score.aic());
                 t.setBic(score.bic());
@@ -186,10 +186,10 @@ public final class FitRecorder {
         if (fit.energy() != null) {
             // the verdict, not merely the largest share: "mixed" when no loss leads clearly
             r.setDominantLoss(fit.verdict().kind() == FrictionVerdict.Kind.DOMINANT
-                    ? fit.verdict().dominant().name().toLowerCase(Locale.ROOT) : "mixed");
-            share(r, "viscous", fit.energy().viscous());
-            share(r, "coulomb", fit.energy().coulomb());
-            share(r, "drag", fit.energy().drag());
+                    ? fit.verdict().dominant().word() : "mixed");
+            share(r, FrictionTerm.VISCOUS.word(), fit.energy().viscous());
+            share(r, FrictionTerm.COULOMB.word(), fit.energy().coulomb());
+            share(r, FrictionTerm.DRAG.word(), fit.energy().drag());
         }
         FitSettings s = fit.settings();
         setting(r, "terms", outcome.automatic() ? "auto" : "given");

@@ -62,15 +62,29 @@ public final class FitWording {
         FrictionVerdict v = fit.verdict();
         EnergyShares e = fit.energy();
         return switch (v.kind()) {
-            case DOMINANT -> String.format(Locale.ROOT, "%s dominates, dissipating %s of the energy lost over the"
-                    + " records (a lead of %.0f points over the next loss; %.0f needed)", lossName(v.dominant()),
-                    percent(e.share(v.dominant()), e.sigma(v.dominant())), 100 * v.lead(), 100 * v.margin());
-            case MIXED -> "mixed: no loss leads the next by " + String.format(Locale.ROOT, "%.0f", 100 * v.margin())
+            case DOMINANT -> dominance(lossName(v.dominant()), percent(e.share(v.dominant()), e.sigma(v.dominant())))
+                    + String.format(Locale.ROOT, " (a lead of %.0f points over the next loss; %.0f needed)",
+                    100 * v.lead(), 100 * v.margin());
+            case MIXED -> MIXED_LEAD + String.format(Locale.ROOT, "%.0f", 100 * v.margin())
                     + " percentage points clear of the uncertainty; in order: " + v.leading().stream()
                     .map(t -> lossName(t) + " " + percent(e.share(t), e.sigma(t))).collect(Collectors.joining(", "));
             case WITHHELD -> fit.status() == FitStatus.MISFIT ? "withheld: the model does not describe the records"
                     : "withheld: the fit did not converge";
         };
+    }
+
+    /** How a mixed verdict begins, before the margin. */
+    static final String MIXED_LEAD = "mixed: no loss leads the next by ";
+
+    /**
+     * The words of a dominant loss.
+     *
+     * @param loss  the loss's name ({@link #lossName})
+     * @param share its share of the energy lost, as text with its unit
+     * @return "... dominates, dissipating ... of the energy lost over the records"
+     */
+    static String dominance(String loss, String share) {
+        return loss + " dominates, dissipating " + share + " of the energy lost over the records";
     }
 
     /**
@@ -144,7 +158,7 @@ public final class FitWording {
      * @return "viscous", "coulomb", "stiction" or "drag"
      */
     public static String word(FrictionTerm t) {
-        return t.name().toLowerCase(Locale.ROOT);
+        return t.word();
     }
 
     /**

@@ -33,10 +33,12 @@ import dev.penduline.physics.inertia.PointMass;
 import dev.penduline.physics.inertia.SlenderRod;
 import dev.penduline.physics.inertia.Sphere;
 import dev.penduline.physics.inertia.ThinRing;
+import dev.penduline.physics.units.Unit;
 import dev.penduline.records.PlainText;
 import dev.penduline.records.RecordFormatException;
 import dev.penduline.records.parts.PartsList;
 import dev.penduline.records.parts.PartsListReader;
+import dev.penduline.services.present.Figures;
 
 /**
  * Turns a parts list (a BOM or CAD export read by the parts-list reader) into a mechanism file,
@@ -169,15 +171,31 @@ public final class PartsImport {
                 add(m, p);
             }
             double after = calculatedInertia(m);
-            String why = String.format(Locale.ROOT, "parts replaced from %s at %s (calculated J0 %.6g -> %.6g"
-                    + " kg·m²): this fit was made with the parts before", Path.of(parts.source()).getFileName(), stamp,
-                    before, after);
-            return markFitsStale(m, why);
+            return markFitsStale(m, staleBecause("parts replaced from " + Path.of(parts.source()).getFileName(), stamp,
+                    "", before, after));
         }, said::add);
         said.add(String.format(Locale.ROOT, "replaced the parts of %s with the %d of %s; kept its sessions and"
                 + " fits%s", target, parts.parts().size(), partsList, marked == 0 ? "" : ", and marked the " + marked
                 + " stored fit(s) stale"));
         return said;
+    }
+
+    /**
+     * Why the stored fits became stale, in the words of their {@link #STALE} setting: what changed
+     * and when, and the calculated J0 before and after (six significant digits, so that a small
+     * change shows).
+     *
+     * @param change what changed, e.g. "parts replaced from new.csv"
+     * @param stamp  when, an ISO-8601 instant
+     * @param detail more about the change (the edit's label), or empty
+     * @param before the calculated J0 before (kg·m²)
+     * @param after  the calculated J0 after (kg·m²)
+     * @return the reason
+     */
+    public static String staleBecause(String change, String stamp, String detail, double before, double after) {
+        return change + " at " + stamp + " (" + (detail.isEmpty() ? "" : detail + "; ") + "calculated J0 "
+                + Figures.significant(before, 6) + " -> " + Figures.significant(after, 6) + " " + Unit.KG_M2.symbol()
+                + "): this fit was made with the parts before";
     }
 
     /** The setting key that marks a stored fit made with parts that have changed since. */

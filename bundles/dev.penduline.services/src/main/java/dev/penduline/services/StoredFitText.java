@@ -230,11 +230,10 @@ public record StoredFitText(String id, String computedAt, String status, String 
             return "Verdict: " + NOT_STORED;
         }
         if ("mixed".equals(dominant)) {
-            return "Verdict: mixed: no loss leads the next by a clear margin (see the shares)";
+            return "Verdict: " + FitWording.MIXED_LEAD + "a clear margin (see the shares)";
         }
-        double share = shareOf(r, "stiction".equals(dominant) ? "coulomb" : dominant);
-        return "Verdict: " + lossName(dominant) + " dominates, dissipating "
-                + Figures.fixed(100 * share, 0) + " % of the energy lost over the records";
+        double share = shareOf(r, FrictionTerm.STICTION.word().equals(dominant) ? FrictionTerm.COULOMB.word() : dominant);
+        return "Verdict: " + FitWording.dominance(lossName(dominant), Figures.percent(share, 0));
     }
 
     private static String shares(FitResult r, Map<String, String> settings) {

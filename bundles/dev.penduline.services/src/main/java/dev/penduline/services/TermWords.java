@@ -1,6 +1,5 @@
 package dev.penduline.services;
 
-import java.util.Locale;
 import java.util.Optional;
 
 import dev.penduline.physics.identify.FrictionTerm;
@@ -36,7 +35,7 @@ public final class TermWords {
      * @return its name in the trade's words
      */
     public static String quantity(String symbol) {
-        return term(symbol).map(t -> word(t.name().toLowerCase(Locale.ROOT))).orElse(symbol);
+        return term(symbol).map(t -> word(t.word())).orElse(symbol);
     }
 
     /**

@@ -14,6 +14,8 @@ import dev.penduline.physics.swing.SwingAnalysis;
 import dev.penduline.physics.swing.SwingCycle;
 import dev.penduline.physics.units.Unit;
 import dev.penduline.records.swing.SwingRecord;
+import dev.penduline.services.AnalysisWording;
+import dev.penduline.services.Cautions;
 import dev.penduline.services.MechanismSource;
 import dev.penduline.services.present.Figures;
 
@@ -36,8 +38,7 @@ final class AnalysisReport {
         out.printf(Locale.ROOT, "  %d samples at %s Hz; SHA-256 %s%n", record.size(),
                 Figures.significant(AnalyzeCommand.sampleRate(record.times())), record.sha256().substring(0, 16) + "…");
         out.println();
-        out.printf(Locale.ROOT, "%s: %s (Coulomb %.0f %%, viscous %.0f %%, drag %.0f %% of the mean decrement)%n",
-                LossVerdict.HEADING, v.reading(), 100 * v.coulombShare(), 100 * v.viscousShare(), 100 * v.dragShare());
+        out.println(AnalysisWording.firstLook(v));
         for (String e : v.evidence()) {
             out.println("  - " + e);
         }
@@ -77,7 +78,7 @@ final class AnalysisReport {
         out.println();
         out.println("These are first estimates from the decay envelope; 'penduline fit' identifies the terms from the "
                 + "whole trajectory.");
-        out.println(Caution.TEXT);
+        out.println(Cautions.TEXT);
     }
 
     private void printStop(PrintWriter out) {

@@ -12,6 +12,7 @@ import dev.penduline.physics.identify.Goodness;
 import dev.penduline.physics.identify.SessionEstimate;
 import dev.penduline.physics.identify.StictionBand;
 import dev.penduline.physics.units.Unit;
+import dev.penduline.services.Cautions;
 import dev.penduline.services.FitWording;
 import dev.penduline.services.FrictionIdentification.Outcome;
 import dev.penduline.services.present.Figures;
@@ -88,7 +89,7 @@ final class FitReportText {
         if (stored != null) {
             out.println("Stored in " + file + " as fit '" + stored + "'.");
         }
-        out.println(Caution.TEXT);
+        out.println(Cautions.TEXT);
     }
 
     private static void printGoodness(PrintWriter out, FrictionFit fit) {

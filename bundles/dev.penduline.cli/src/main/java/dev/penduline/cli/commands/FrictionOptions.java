@@ -5,12 +5,14 @@ import java.nio.file.Path;
 import java.util.List;
 import java.util.Locale;
 import java.util.Optional;
+import java.util.stream.Stream;
 
 import dev.penduline.cli.Arguments;
 import dev.penduline.cli.UsageException;
 import dev.penduline.cli.json.JsonWriter;
 import dev.penduline.model.Mechanism;
 import dev.penduline.model.persistence.MechanismFormat;
+import dev.penduline.physics.identify.FrictionTerm;
 import dev.penduline.physics.motion.FrictionTorques;
 import dev.penduline.services.Defaults;
 import dev.penduline.services.InputException;
@@ -27,7 +29,8 @@ import dev.penduline.services.StoredFit;
 final class FrictionOptions {
 
     /** The friction options that take a value. */
-    static final List<String> VALUE_OPTIONS = List.of("viscous", "coulomb", "stiction", "drag", "fit");
+    static final List<String> VALUE_OPTIONS = Stream.concat(Stream.of(FrictionTerm.values()).map(FrictionTerm::word),
+            Stream.of("fit")).toList();
 
     /** Usage lines of the options. */
     static final String USAGE = """
@@ -40,7 +43,7 @@ final class FrictionOptions {
                                     any of these four replaces the stored fit
             """;
 
-    private static final List<String> TORQUES = List.of("viscous", "coulomb", "stiction", "drag");
+    private static final List<String> TORQUES = Stream.of(FrictionTerm.values()).map(FrictionTerm::word).toList();
 
     private FrictionOptions() {
     }
@@ -87,8 +90,9 @@ final class FrictionOptions {
         }
         if (given || a.flag("no-fit")) {
             try {
-                return FrictionSource.given(new FrictionTorques(a.number("viscous", 0), a.number("coulomb", 0),
-                        a.number("stiction", 0), a.number("drag", 0)), given ? "friction options (no uncertainty)"
+                return FrictionSource.given(new FrictionTorques(a.number(FrictionTerm.VISCOUS.word(), 0),
+                        a.number(FrictionTerm.COULOMB.word(), 0), a.number(FrictionTerm.STICTION.word(), 0),
+                        a.number(FrictionTerm.DRAG.word(), 0)), given ? "friction options (no uncertainty)"
                                 : "no friction (--no-fit)");
             } catch (IllegalArgumentException e) {
                 throw new UsageException(e.getMessage());

@@ -17,6 +17,7 @@ import dev.penduline.physics.inertia.InertiaSummary;
 import dev.penduline.physics.inertia.PartContribution;
 import dev.penduline.physics.inertia.ToleranceSpread;
 import dev.penduline.physics.units.Unit;
+import dev.penduline.services.Cautions;
 import dev.penduline.services.Defaults;
 import dev.penduline.services.InputException;
 import dev.penduline.services.MechanismForecast;
@@ -195,7 +196,7 @@ public final class InertiaCommand implements Command {
             writeSpread(spread, out);
         }
         out.println();
-        out.println(Caution.TEXT);
+        out.println(Cautions.TEXT);
     }
 
     private static void writeSpread(ToleranceSpread.Result r, PrintWriter out) {

@@ -19,6 +19,7 @@ import dev.penduline.physics.motion.SwingEnergy;
 import dev.penduline.physics.motion.SwingRun;
 import dev.penduline.physics.motion.TurningPoint;
 import dev.penduline.physics.units.Unit;
+import dev.penduline.services.Cautions;
 import dev.penduline.services.Defaults;
 import dev.penduline.services.InputException;
 import dev.penduline.services.MechanismForecast;
@@ -228,6 +229,6 @@ public final class SimulateCommand implements Command {
             out.println("  note: the friction sign was smoothed (not the exact dry-friction model)");
         }
         out.println();
-        out.println(Caution.TEXT);
+        out.println(Cautions.TEXT);
     }
 }

@@ -189,7 +189,7 @@ public final class MechanismAdapter {
     }
 
     /**
-     * The tensor of a mass-properties part as written in the file (kg·m²), about the point its
+     * The tensor of a tensor part as written in the file (kg·m²), about the point its
      * {@code tensorReference} names.
      *
      * @param p the part
@@ -202,7 +202,7 @@ public final class MechanismAdapter {
     /**
      * The shape of a part with a standard shape.
      *
-     * @param p the part (not a mass-properties part)
+     * @param p the part (not a tensor part)
      * @return the engine's shape
      */
     public static PartShape shape(dev.penduline.model.Part p) {
@@ -216,7 +216,7 @@ public final class MechanismAdapter {
             case SPHERE -> new Sphere(p.getRadius());
             case THIN_RING -> new ThinRing(p.getRadius(), axis);
             case MASS_PROPERTIES -> throw new IllegalArgumentException(
-                    "a mass-properties part has no standard shape; its tensor is given");
+                    "a tensor part has no standard shape; its tensor is given");
         };
     }
 
@@ -240,7 +240,7 @@ public final class MechanismAdapter {
     private static Part massPropertiesPart(dev.penduline.model.Part p, String name, Vector3D centroid,
             Rotation orientation) {
         if (!p.isSetMass()) {
-            throw new IllegalArgumentException("a mass-properties part needs its mass (a density is not enough)");
+            throw new IllegalArgumentException("a tensor part needs its mass (a density is not enough)");
         }
         final InertiaTensor tensor = givenTensor(p);
         if (p.getTensorReference() == TensorReference.CENTROID) {

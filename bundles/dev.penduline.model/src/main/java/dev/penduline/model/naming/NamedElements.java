@@ -72,7 +72,7 @@ public final class NamedElements {
 
     /**
      * Adds a free friction term, identified by its kind's literal ({@code viscous}, {@code coulomb},
-     * {@code stiction}, {@code quadratic-drag}).
+     * {@code stiction}, {@code drag}).
      *
      * @param hypothesis the hypothesis
      * @param kind       the kind of term

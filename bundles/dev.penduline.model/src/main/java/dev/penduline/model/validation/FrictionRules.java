@@ -7,6 +7,7 @@ import dev.penduline.model.FrictionHypothesis;
 import dev.penduline.model.FrictionKind;
 import dev.penduline.model.FrictionTerm;
 import dev.penduline.model.PendulinePackage.Literals;
+import dev.penduline.model.adapt.FrictionKinds;
 
 /** The rules of friction hypotheses and their terms. */
 final class FrictionRules {
@@ -81,11 +82,7 @@ final class FrictionRules {
     }
 
     static String unit(FrictionKind kind) {
-        return switch (kind) {
-            case VISCOUS -> "N·m·s/rad";
-            case COULOMB, STICTION -> "N·m";
-            case QUADRATIC_DRAG -> "N·m·s²/rad²";
-        };
+        return FrictionKinds.term(kind).unit();
     }
 
     private static String label(FrictionHypothesis h) {

@@ -40,7 +40,7 @@ class StableIdsTest {
         assertEquals("rib", first.getId());
         final FrictionHypothesis h = NamedElements.addHypothesis(m, "Coulomb only");
         assertEquals("coulomb", NamedElements.addTerm(h, FrictionKind.COULOMB).getId());
-        assertEquals("quadratic-drag", NamedElements.addTerm(h, FrictionKind.QUADRATIC_DRAG).getId());
+        assertEquals("drag", NamedElements.addTerm(h, FrictionKind.DRAG).getId());
         assertEquals("coulomb-only", h.getId());
     }
 }

@@ -61,7 +61,7 @@ class MechanismValidationTest {
                 "mechanism 'Broken hatch': gravity must be positive (got -9.8 m/s²)",
                 "part 'rib': mass must be positive (got -0.2 kg); for a hole, give the removed material's positive"
                         + " mass and mark it as a cut-out",
-                "part 'bar': length must be positive for a slender rod (got 0.0 m)",
+                "part 'bar': length must be positive for a rod (got 0.0 m)",
                 "part 'washer': quantity must be at least 1 (got 0)",
                 "hypothesis 'dry': stiction 0.02 N·m is below the Coulomb friction 0.05 N·m; static friction is at"
                         + " least the sliding one (Ts ≥ Tc)",

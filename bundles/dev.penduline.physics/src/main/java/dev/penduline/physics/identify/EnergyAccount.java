@@ -27,9 +27,9 @@ final class EnergyAccount {
         double drag = 0;
         for (int s = 0; s < sessions.size(); s++) {
             final double[] t = sessions.get(s).timesView();
-            final double span = t[t.length - 1] - full[ParameterLayout.index(s, 1)];
+            final double span = t[t.length - 1] - full[ParameterLayout.index(s, ParameterKind.RELEASE_TIME)];
             if (span > 0) {
-                final SwingEnergy e = simulator.simulate(full[ParameterLayout.index(s, 0)], 0,
+                final SwingEnergy e = simulator.simulate(full[ParameterLayout.index(s, ParameterKind.RELEASE_ANGLE)], 0,
                         new double[] {0, span}).energy();
                 viscous += e.viscous();
                 coulomb += e.coulomb();

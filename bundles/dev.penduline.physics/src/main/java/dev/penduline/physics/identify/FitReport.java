@@ -52,7 +52,7 @@ final class FitReport {
         final List<ParameterEstimate> physical = new ArrayList<>();
         for (FrictionTerm term : terms) {
             if (term == FrictionTerm.STICTION) {
-                physical.add(new ParameterEstimate("Ts", term.unit(), friction.staticTorque(), Double.NaN, Double.NaN,
+                physical.add(new ParameterEstimate(term.symbol(), term.unit(), friction.staticTorque(), Double.NaN, Double.NaN,
                         true, false));
             } else {
                 physical.add(estimate(layout, indexOf(term), full, u, resampled));
@@ -76,9 +76,9 @@ final class FitReport {
                 }
             }
             sessions.add(new SessionEstimate(problem.sessions().get(s).name(),
-                    estimate(layout, ParameterLayout.index(s, 0), full, u, resampled),
-                    estimate(layout, ParameterLayout.index(s, 1), full, u, resampled),
-                    estimate(layout, ParameterLayout.index(s, 2), full, u, resampled),
+                    estimate(layout, ParameterLayout.index(s, ParameterKind.RELEASE_ANGLE), full, u, resampled),
+                    estimate(layout, ParameterLayout.index(s, ParameterKind.RELEASE_TIME), full, u, resampled),
+                    estimate(layout, ParameterLayout.index(s, ParameterKind.OFFSET), full, u, resampled),
                     o.residuals() == null ? Double.NaN : Math.sqrt(sum / size), size));
             row += size;
         }
@@ -187,13 +187,14 @@ final class FitReport {
         }
         for (ParameterEstimate p : physical) {
             if (p.onBound()) {
-                warnings.add(new FitWarning(FitWarning.Kind.ON_BOUND, p.name().equals("J0")
+                warnings.add(new FitWarning(FitWarning.Kind.ON_BOUND, p.name().equals(ParameterKind.INERTIA.symbol())
                         ? "J0 sits on its bound m·Lc² = " + format(p.value()) + " kg·m²: mass or centroid distance are"
                                 + " inconsistent with the records"
                         : p.name() + " sits on its bound 0: the records show no such loss; drop the term (its"
                                 + " standard error is not meaningful)"));
             }
-            if (!p.onBound() && !p.name().equals("J0") && !p.name().equals("Ts") && !(p.value() > 2 * p.sigma())) {
+            if (!p.onBound() && !p.name().equals(ParameterKind.INERTIA.symbol())
+                    && !p.name().equals(FrictionTerm.STICTION.symbol()) && !(p.value() > 2 * p.sigma())) {
                 warnings.add(new FitWarning(FitWarning.Kind.NOT_CLEAR_OF_ZERO, p.name() + " = " + format(p.value())
                         + " " + p.unit() + " is within two standard errors (" + format(p.sigma()) + ") of zero: the"
                         + " records do not show this loss clearly; consider dropping the term"));

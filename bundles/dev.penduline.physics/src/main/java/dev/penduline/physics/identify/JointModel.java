@@ -61,7 +61,7 @@ final class JointModel implements MultivariateJacobianFunction {
             tau[s] = new double[size];
             final List<ParameterKind> kinds = new ArrayList<>();
             final List<Integer> cols = new ArrayList<>();
-            final int theta = ParameterLayout.index(s, 0);
+            final int theta = ParameterLayout.index(s, ParameterKind.RELEASE_ANGLE);
             if (layout.isFree(theta)) {
                 kinds.add(ParameterKind.RELEASE_ANGLE);
                 cols.add(layout.column(theta));
@@ -113,7 +113,7 @@ final class JointModel implements MultivariateJacobianFunction {
         for (int s = 0; s < data.size(); s++) {
             final int[] columns = new int[ParameterLayout.PER_SESSION];
             int count = 0;
-            for (int k = 0; k < ParameterLayout.PER_SESSION; k++) {
+            for (ParameterKind k : ParameterLayout.NUISANCE) {
                 final int c = layout.column(ParameterLayout.index(s, k));
                 if (c >= 0) {
                     columns[count++] = c;
@@ -195,9 +195,9 @@ final class JointModel implements MultivariateJacobianFunction {
         final double j = full[ParameterLayout.index(ParameterKind.INERTIA)];
         int row = 0;
         for (int s = 0; s < data.size(); s++) {
-            final double theta0 = full[ParameterLayout.index(s, 0)];
-            final double release = full[ParameterLayout.index(s, 1)];
-            final double offset = full[ParameterLayout.index(s, 2)];
+            final double theta0 = full[ParameterLayout.index(s, ParameterKind.RELEASE_ANGLE)];
+            final double release = full[ParameterLayout.index(s, ParameterKind.RELEASE_TIME)];
+            final double offset = full[ParameterLayout.index(s, ParameterKind.OFFSET)];
             final double[] t = data.get(s).times();
             final double[] ts = tau[s];
             for (int i = 0; i < t.length; i++) {
@@ -207,10 +207,10 @@ final class JointModel implements MultivariateJacobianFunction {
             swing.configure(stiffness, j, b, tc, stiction, c, tolerance, cancel);
             swing.run(theta0, ts, 0, t.length);
             final int[] cols = sessionColumns.get(s);
-            final int releaseColumn = layout.column(ParameterLayout.index(s, 1));
-            final int offsetColumn = layout.column(ParameterLayout.index(s, 2));
-            final double releaseScale = layout.scale(ParameterLayout.index(s, 1));
-            final double offsetScale = layout.scale(ParameterLayout.index(s, 2));
+            final int releaseColumn = layout.column(ParameterLayout.index(s, ParameterKind.RELEASE_TIME));
+            final int offsetColumn = layout.column(ParameterLayout.index(s, ParameterKind.OFFSET));
+            final double releaseScale = layout.scale(ParameterLayout.index(s, ParameterKind.RELEASE_TIME));
+            final double offsetScale = layout.scale(ParameterLayout.index(s, ParameterKind.OFFSET));
             final double[] colScale = new double[cols.length];
             for (int k = 0; k < cols.length; k++) {
                 colScale[k] = layout.scale(layout.fullIndex(cols[k]));

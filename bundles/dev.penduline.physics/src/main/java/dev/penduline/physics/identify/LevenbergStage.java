@@ -63,7 +63,7 @@ final class LevenbergStage {
         };
         double amplitude = 0;
         for (int s = 0; s < layout.sessions(); s++) {
-            amplitude = Math.max(amplitude, Math.abs(base[ParameterLayout.index(s, 0)]));
+            amplitude = Math.max(amplitude, Math.abs(base[ParameterLayout.index(s, ParameterKind.RELEASE_ANGLE)]));
         }
         // Hipparchus' problem hands out fresh counters, so the stage counts for itself: the
         // checker is asked once per successful iteration, the model once per evaluation

@@ -25,6 +25,14 @@ final class ParameterLayout {
     static final int PHYSICAL = 4;
     static final int PER_SESSION = 3;
 
+    /** The physical parameters in the order of the full vector. */
+    static final List<ParameterKind> PHYSICAL_KINDS = List.of(ParameterKind.VISCOUS, ParameterKind.COULOMB,
+            ParameterKind.DRAG, ParameterKind.INERTIA);
+
+    /** The nuisance parameters in the order of a session's set. */
+    static final List<ParameterKind> NUISANCE = List.of(ParameterKind.RELEASE_ANGLE, ParameterKind.RELEASE_TIME,
+            ParameterKind.OFFSET);
+
     private final ParameterKind[] kinds;
     private final String[] names;
     private final double[] scales;
@@ -37,18 +45,14 @@ final class ParameterLayout {
         final int size = PHYSICAL + PER_SESSION * sessionNames.size();
         this.kinds = new ParameterKind[size];
         this.names = new String[size];
-        final ParameterKind[] physical = {ParameterKind.VISCOUS, ParameterKind.COULOMB, ParameterKind.DRAG,
-            ParameterKind.INERTIA};
-        for (int i = 0; i < PHYSICAL; i++) {
-            kinds[i] = physical[i];
-            names[i] = physical[i].symbol();
+        for (ParameterKind k : PHYSICAL_KINDS) {
+            kinds[index(k)] = k;
+            names[index(k)] = k.symbol();
         }
-        final ParameterKind[] nuisance = {ParameterKind.RELEASE_ANGLE, ParameterKind.RELEASE_TIME,
-            ParameterKind.OFFSET};
         for (int s = 0; s < sessionNames.size(); s++) {
-            for (int k = 0; k < PER_SESSION; k++) {
-                kinds[index(s, k)] = nuisance[k];
-                names[index(s, k)] = nuisance[k].symbol() + "[" + sessionNames.get(s) + "]";
+            for (ParameterKind k : NUISANCE) {
+                kinds[index(s, k)] = k;
+                names[index(s, k)] = k.symbol() + "[" + sessionNames.get(s) + "]";
             }
         }
         this.scales = scales.clone();
@@ -73,20 +77,20 @@ final class ParameterLayout {
         return idx;
     }
 
-    /** Index in the full vector of nuisance parameter k (0 θ0, 1 t_r, 2 offset) of session s. */
-    static int index(int session, int k) {
-        return PHYSICAL + PER_SESSION * session + k;
+    /** Index in the full vector of a nuisance parameter (θ0, t_r, offset) of session s. */
+    static int index(int session, ParameterKind kind) {
+        if (kind.physical()) {
+            throw new IllegalArgumentException(kind + " is shared by the sessions");
+        }
+        return PHYSICAL + PER_SESSION * session + kind.index();
     }
 
     /** Index in the full vector of a physical parameter. */
     static int index(ParameterKind kind) {
-        return switch (kind) {
-            case VISCOUS -> 0;
-            case COULOMB -> 1;
-            case DRAG -> 2;
-            case INERTIA -> 3;
-            default -> throw new IllegalArgumentException(kind + " is per session");
-        };
+        if (!kind.physical()) {
+            throw new IllegalArgumentException(kind + " is per session");
+        }
+        return kind.index();
     }
 
     /** A copy with another set of free parameters. */

@@ -432,15 +432,15 @@ final class StagedFit {
             for (int s = 0; s < count; s++) {
                 final SessionGuess g = sessions.get(s).guess();
                 names.add(sessions.get(s).name());
-                initial[ParameterLayout.index(s, 0)] = g.releaseAngle();
-                initial[ParameterLayout.index(s, 1)] = g.releaseTime();
-                initial[ParameterLayout.index(s, 2)] = g.offset();
-                scales[ParameterLayout.index(s, 0)] = Math.abs(g.releaseAngle());
-                scales[ParameterLayout.index(s, 1)] = 1 / wn;
-                scales[ParameterLayout.index(s, 2)] = Math.abs(g.releaseAngle());
-                shifts[ParameterLayout.index(s, 1)] = g.releaseTime();
-                shifts[ParameterLayout.index(s, 2)] = g.offset();
-                for (int q = 0; q < ParameterLayout.PER_SESSION; q++) {
+                initial[ParameterLayout.index(s, ParameterKind.RELEASE_ANGLE)] = g.releaseAngle();
+                initial[ParameterLayout.index(s, ParameterKind.RELEASE_TIME)] = g.releaseTime();
+                initial[ParameterLayout.index(s, ParameterKind.OFFSET)] = g.offset();
+                scales[ParameterLayout.index(s, ParameterKind.RELEASE_ANGLE)] = Math.abs(g.releaseAngle());
+                scales[ParameterLayout.index(s, ParameterKind.RELEASE_TIME)] = 1 / wn;
+                scales[ParameterLayout.index(s, ParameterKind.OFFSET)] = Math.abs(g.releaseAngle());
+                shifts[ParameterLayout.index(s, ParameterKind.RELEASE_TIME)] = g.releaseTime();
+                shifts[ParameterLayout.index(s, ParameterKind.OFFSET)] = g.offset();
+                for (ParameterKind q : ParameterLayout.NUISANCE) {
                     lockFree[ParameterLayout.index(s, q)] = true;
                     fullFree[ParameterLayout.index(s, q)] = true;
                 }

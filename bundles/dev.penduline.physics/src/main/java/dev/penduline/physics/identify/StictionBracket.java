@@ -38,8 +38,8 @@ final class StictionBracket {
         double upper = Double.POSITIVE_INFINITY;
         for (int s = 0; s < data.size(); s++) {
             final double[] band = session(simulator, mechanism.gravityStiffness(), tc,
-                    full[ParameterLayout.index(s, 0)], full[ParameterLayout.index(s, 1)],
-                    full[ParameterLayout.index(s, 2)], data.get(s));
+                    full[ParameterLayout.index(s, ParameterKind.RELEASE_ANGLE)], full[ParameterLayout.index(s, ParameterKind.RELEASE_TIME)],
+                    full[ParameterLayout.index(s, ParameterKind.OFFSET)], data.get(s));
             lower = Math.max(lower, band[0]);
             upper = Math.min(upper, band[1]);
         }

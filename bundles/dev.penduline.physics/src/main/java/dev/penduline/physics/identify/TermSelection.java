@@ -100,10 +100,10 @@ final class TermSelection {
     /** Every friction term clear of zero by two standard errors; stiction above Coulomb. */
     private static boolean supported(FrictionFit f) {
         for (ParameterEstimate p : f.parameters()) {
-            if (p.name().equals("J0")) {
+            if (p.name().equals(ParameterKind.INERTIA.symbol())) {
                 continue;
             }
-            if (p.name().equals("Ts")) {
+            if (p.name().equals(FrictionTerm.STICTION.symbol())) {
                 final double tc = f.friction().coulomb();
                 if (f.stiction() == null || !(f.stiction().lower() > tc * (1 + 1e-6))) {
                     return false;

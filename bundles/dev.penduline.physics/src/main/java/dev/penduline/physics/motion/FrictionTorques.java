@@ -1,5 +1,7 @@
 package dev.penduline.physics.motion;
 
+import dev.penduline.physics.units.Unit;
+
 /**
  * The friction and damping torques that oppose a swing, in SI units.
  *
@@ -27,10 +29,10 @@ public record FrictionTorques(double viscous, double coulomb, double stiction, d
      * @throws IllegalArgumentException naming the offending parameter and value
      */
     public FrictionTorques {
-        requireNonNegative("viscous", viscous, "N·m·s/rad");
-        requireNonNegative("coulomb", coulomb, "N·m");
-        requireNonNegative("stiction", stiction, "N·m");
-        requireNonNegative("drag", drag, "N·m·s²/rad²");
+        requireNonNegative("viscous", viscous, Unit.N_M_S_PER_RAD.symbol());
+        requireNonNegative("coulomb", coulomb, Unit.NEWTON_METRE.symbol());
+        requireNonNegative("stiction", stiction, Unit.NEWTON_METRE.symbol());
+        requireNonNegative("drag", drag, Unit.N_M_S2_PER_RAD2.symbol());
         if (stiction != 0 && stiction < coulomb) {
             throw new IllegalArgumentException("stiction " + stiction
                     + " N·m is below coulomb " + coulomb

@@ -16,6 +16,10 @@ public enum Quantity {
     ANGULAR_VELOCITY("rad/s"),
     /** Torque, SI unit N·m. */
     TORQUE("N·m"),
+    /** Viscous friction coefficient: torque per angular velocity. */
+    VISCOUS_COEFFICIENT("N·m·s/rad"),
+    /** Quadratic drag coefficient: torque per square of the angular velocity. */
+    DRAG_COEFFICIENT("N·m·s²/rad²"),
     /** Mass density, SI unit kg/m³. */
     DENSITY("kg/m³");
 

@@ -85,6 +85,11 @@ public record Unit(String symbol, String suffix, Quantity quantity, double siPer
     /** Newton millimetre. */
     public static final Unit NEWTON_MILLIMETRE = new Unit("N·mm", "n_mm", Quantity.TORQUE, 1e-3);
 
+    /** Newton metre second per radian, the unit of a viscous coefficient. */
+    public static final Unit N_M_S_PER_RAD = new Unit("N·m·s/rad", "n_m_s_rad", Quantity.VISCOUS_COEFFICIENT, 1);
+    /** Newton metre second squared per radian squared, the unit of a drag coefficient. */
+    public static final Unit N_M_S2_PER_RAD2 = new Unit("N·m·s²/rad²", "n_m_s2_rad2", Quantity.DRAG_COEFFICIENT, 1);
+
     /** Kilogram per cubic metre. */
     public static final Unit KG_PER_M3 = new Unit("kg/m³", "kg_m3", Quantity.DENSITY, 1);
     /** Gram per cubic centimetre, 1000 kg/m³. */
@@ -93,7 +98,7 @@ public record Unit(String symbol, String suffix, Quantity quantity, double siPer
     private static final List<Unit> ALL = List.of(METRE, MILLIMETRE, CENTIMETRE, INCH_UNIT, FOOT_UNIT,
             KILOGRAM, GRAM, POUND_MASS, KG_M2, G_MM2, G_CM2, KG_MM2, LB_IN2, LB_FT2,
             RADIAN, DEGREE, ENCODER_COUNT, SECOND, MILLISECOND, MICROSECOND, RAD_PER_S, DEG_PER_S,
-            NEWTON_METRE, NEWTON_MILLIMETRE, KG_PER_M3, G_PER_CM3);
+            NEWTON_METRE, NEWTON_MILLIMETRE, N_M_S_PER_RAD, N_M_S2_PER_RAD2, KG_PER_M3, G_PER_CM3);
 
     /**
      * Checks the fields.

@@ -164,6 +164,11 @@ class PartsListReaderTest {
                 + " sphere, ring, tensor", failure(h + "a,cube,1,,0,0,0,,,,,,\n").getMessage());
         // the shape is echoed as typed (a fuzz finding: it was shown lowercased, unlike the input)
         assertTrue(failure(h + "a,Cube,1,,0,0,0,,,,,,\n").getMessage().contains("'Cube' is not a shape"));
+        // the words mechanism files used for shapes before they took the parts list's words are refused, with the list
+        for (String former : new String[] {"point-mass", "slender-rod", "thin-ring", "mass-properties"}) {
+            assertEquals("parts.csv:2: column 'shape': '" + former + "' is not a shape: use one of point, rod, box,"
+                    + " cylinder, sphere, ring, tensor", failure(h + "a," + former + ",1,,0,0,0,,,,,,\n").getMessage());
+        }
         assertEquals(1, read(h + "a,POINT,1,,0,-1,0,,,,,,\n").parts().size(), "shapes are not case-sensitive");
         assertEquals("parts.csv:2: column 'axis': empty, but it is needed by a rod (x, y or z)",
                 failure(h + "a,rod,1,,0,0,0,0.5,,,,,\n").getMessage());

@@ -100,7 +100,7 @@ final class EditorAndUndoCapability implements Capability {
         driver.page().activate(editor);
         assertTrue(editor.isDirty(), "an edit makes the editor dirty");
         assertTrue(driver.page().getDirtyEditors().length == 1, "the workbench knows the dirty editor");
-        assertTrue(label("parts", l -> l.startsWith("From these parts: J0 = 3.00500")).isPresent(), "the page's own totals");
+        assertTrue(label("parts", l -> l.startsWith("From these parts: J0 = 3.005 kg·m²")).isPresent(), "the page's own totals");
         assertTrue(tableText("fits", "state").startsWith("stale: parts edited in the workbench"), tableText("fits", "state"));
         pageControl("parts");
         driver.shot(driver.shell(), "editor-01-length-typed-in-mm.png");
@@ -144,7 +144,7 @@ final class EditorAndUndoCapability implements Capability {
         int before = parts.getItemCount();
         press("parts", "Add");
         assertEquals(before + 1, parts.getItemCount(), "Add adds a row");
-        assertEquals("point-mass", parts.getItem(before).getText(column(parts, "shape")), "a new part is a point mass");
+        assertEquals("point", parts.getItem(before).getText(column(parts, "shape")), "a new part is a point mass");
         parts.setSelection(before);
         press("parts", "Duplicate");
         assertEquals(before + 2, parts.getItemCount(), "Duplicate adds a copy");

@@ -9,6 +9,7 @@ import dev.penduline.physics.swing.LossVerdict;
 import dev.penduline.physics.swing.PeriodCheck;
 import dev.penduline.physics.swing.SwingAnalysis;
 import dev.penduline.physics.units.Unit;
+import dev.penduline.services.AnalysisWording;
 import dev.penduline.services.present.Figures;
 
 /**
@@ -24,9 +25,7 @@ final class AnalysisSummary {
     static List<String> lines(SwingAnalysis a, boolean withMechanism) {
         List<String> out = new ArrayList<>();
         LossVerdict v = a.verdict();
-        out.add(String.format(Locale.ROOT, "%s: %s (Coulomb %s, viscous %s, drag %s of the mean decrement)",
-                LossVerdict.HEADING, v.reading(), Figures.percent(v.coulombShare()), Figures.percent(v.viscousShare()),
-                Figures.percent(v.dragShare())));
+        out.add(AnalysisWording.firstLook(v));
         out.add("Release at " + Figures.measured(a.release().time(), a.release().uncertainty()) + " s, "
                 + deg(a.initialAngle())
                 + "° from the hanging equilibrium; " + a.cycles().size() + " cycle(s), "

@@ -2,7 +2,6 @@ package dev.penduline.ui.internal.editor;
 
 import java.util.ArrayList;
 import java.util.List;
-import java.util.Locale;
 
 import org.eclipse.swt.widgets.Composite;
 import org.eclipse.ui.forms.widgets.FormToolkit;
@@ -11,6 +10,7 @@ import dev.penduline.model.FitResult;
 import dev.penduline.model.TestSession;
 import dev.penduline.services.PartsImport;
 import dev.penduline.services.StoredFitText;
+import dev.penduline.services.present.Figures;
 
 /**
  * The fits stored in the mechanism, read-only: when each was made, of which sessions, with which
@@ -49,7 +49,7 @@ final class FitsPage extends EditorPage {
     }
 
     private static String number(double v) {
-        return String.format(Locale.ROOT, "%.6g", v);
+        return Figures.significant(v);
     }
 
     private String sessionsOf(FitResult f) {

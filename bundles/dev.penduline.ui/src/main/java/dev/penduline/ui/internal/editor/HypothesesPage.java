@@ -13,6 +13,7 @@ import dev.penduline.model.FrictionKind;
 import dev.penduline.model.FrictionTerm;
 import dev.penduline.model.Mechanism;
 import dev.penduline.model.PendulinePackage.Literals;
+import dev.penduline.model.adapt.FrictionKinds;
 import dev.penduline.model.naming.NamedElements;
 import dev.penduline.model.naming.StableIds;
 
@@ -38,11 +39,7 @@ final class HypothesesPage extends EditorPage {
      * @return its unit
      */
     static String unitOf(FrictionKind kind) {
-        return switch (kind) {
-            case VISCOUS -> "N·m·s/rad";
-            case COULOMB, STICTION -> "N·m";
-            case QUADRATIC_DRAG -> "N·m·s²/rad²";
-        };
+        return FrictionKinds.term(kind).unit();
     }
 
     @Override

@@ -2,7 +2,6 @@ package dev.penduline.ui.internal.editor;
 
 import java.time.Instant;
 import java.time.temporal.ChronoUnit;
-import java.util.Locale;
 
 import org.eclipse.emf.common.command.Command;
 import org.eclipse.emf.edit.command.ChangeCommand;
@@ -75,9 +74,8 @@ public final class MechanismEdits {
                 double[] after = moments(mechanism);
                 if (!same(before, after)) {
                     String stamp = Instant.now().truncatedTo(ChronoUnit.SECONDS).toString();
-                    PartsImport.markFitsStale(mechanism, String.format(Locale.ROOT, "parts edited in the workbench"
-                            + " at %s (%s; calculated J0 %.6g -> %.6g kg·m²): this fit was made with the parts before",
-                            stamp, label, before[0], after[0]), true);
+                    PartsImport.markFitsStale(mechanism, PartsImport.staleBecause("parts edited in the workbench", stamp,
+                            label, before[0], after[0]), true);
                 }
             }
         };

@@ -5,7 +5,6 @@ import java.util.ArrayList;
 import java.util.Arrays;
 import java.util.HashSet;
 import java.util.List;
-import java.util.Locale;
 import java.util.Set;
 import java.util.stream.Collectors;
 
@@ -27,6 +26,7 @@ import dev.penduline.model.naming.StableIds;
 import dev.penduline.physics.MechanismProperties;
 import dev.penduline.services.InputException;
 import dev.penduline.services.PartsImport;
+import dev.penduline.services.present.Figures;
 
 /**
  * The parts of the mechanism as a table edited in place: a value may be typed in any unit of
@@ -104,8 +104,9 @@ final class PartsPage extends EditorPage {
     static String totalsOf(Mechanism m) {
         try {
             MechanismProperties p = MechanismAdapter.properties(m);
-            return String.format(Locale.ROOT, "From these parts: J0 = %.6g kg·m² about the pivot, mass %.6g kg, centroid %.6g m"
-                    + " from the axis.", p.pivotInertia(), p.mass(), p.centroidDistance());
+            return "From these parts: J0 = " + Figures.significant(p.pivotInertia()) + " kg·m² about the pivot, mass "
+                    + Figures.significant(p.mass()) + " kg, centroid " + Figures.significant(p.centroidDistance())
+                    + " m from the axis.";
         } catch (IllegalArgumentException e) {
             return "The parts cannot be computed yet: " + e.getMessage();
         }

@@ -30,7 +30,6 @@ import dev.penduline.ui.internal.friction.FrictionHeader.Tone;
  */
 public final class FrictionPart extends FollowingPart {
 
-    static final String CAUTION = Cautions.TEXT;
     private static final String HINT = "Select a mechanism file (.penduline) in Project Files.";
     private static final String DURATION = "Fit Friction… sets up a fit of the test sessions; several long records"
             + " can take tens of seconds.";
@@ -50,7 +49,7 @@ public final class FrictionPart extends FollowingPart {
         header.say(HINT, Tone.HINT);
         panel = new StoredFitPanel(parent);
         Label caution = new Label(parent, SWT.WRAP);
-        caution.setText(CAUTION);
+        caution.setText(Cautions.TEXT);
         caution.setFont(JFaceResources.getFontRegistry().getItalic(JFaceResources.DEFAULT_FONT));
         GridDataFactory.fillDefaults().grab(true, false).hint(300, SWT.DEFAULT).applyTo(caution);
     }

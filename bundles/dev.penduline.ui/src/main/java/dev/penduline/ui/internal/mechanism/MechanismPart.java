@@ -27,7 +27,6 @@ import dev.penduline.ui.internal.document.MechanismDocument;
  */
 public final class MechanismPart extends FollowingPart {
 
-    static final String CAUTION = Cautions.TEXT;
     private static final String HINT = "Select a mechanism file (.penduline) or a parts list (.csv) in Project Files.";
 
     private Label title;
@@ -57,7 +56,7 @@ public final class MechanismPart extends FollowingPart {
         GridDataFactory.fillDefaults().grab(true, false).hint(300, SWT.DEFAULT).applyTo(warnings);
         exclude(warnings, true);
         Label caution = new Label(parent, SWT.WRAP);
-        caution.setText(CAUTION);
+        caution.setText(Cautions.TEXT);
         caution.setFont(JFaceResources.getFontRegistry().getItalic(JFaceResources.DEFAULT_FONT));
         GridDataFactory.fillDefaults().grab(true, false).hint(300, SWT.DEFAULT).applyTo(caution);
     }

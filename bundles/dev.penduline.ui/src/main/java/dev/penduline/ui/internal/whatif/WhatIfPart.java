@@ -148,10 +148,10 @@ public final class WhatIfPart extends FollowingPart {
         angle = new TrialSlider(left, "Release angle", "°", this::retry);
         speed = new TrialSlider(left, "Initial speed", "°/s", this::retry);
         atAngle = new TrialSlider(left, "Speed asked at", "°", this::retry);
-        viscous = new TrialSlider(left, "Viscous b", "N·m·s/rad", this::retry);
-        coulomb = new TrialSlider(left, "Coulomb Tc", "N·m", this::retry);
-        stiction = new TrialSlider(left, "Stiction Ts", "N·m", this::retry);
-        drag = new TrialSlider(left, "Quadratic drag c", "N·m·s²/rad²", this::retry);
+        viscous = new TrialSlider(left, "Viscous b", Unit.N_M_S_PER_RAD.symbol(), this::retry);
+        coulomb = new TrialSlider(left, "Coulomb Tc", Unit.NEWTON_METRE.symbol(), this::retry);
+        stiction = new TrialSlider(left, "Stiction Ts", Unit.NEWTON_METRE.symbol(), this::retry);
+        drag = new TrialSlider(left, "Drag c", Unit.N_M_S2_PER_RAD2.symbol(), this::retry);
         Composite shown = new Composite(left, SWT.NONE);
         GridLayoutFactory.fillDefaults().numColumns(2).margins(0, 6).applyTo(shown);
         GridDataFactory.fillDefaults().span(5, 1).grab(true, false).applyTo(shown);
@@ -581,7 +581,7 @@ public final class WhatIfPart extends FollowingPart {
         values.put(FrictionKind.VISCOUS, f.viscous());
         values.put(FrictionKind.COULOMB, f.coulomb());
         values.put(FrictionKind.STICTION, f.stiction());
-        values.put(FrictionKind.QUADRATIC_DRAG, f.drag());
+        values.put(FrictionKind.DRAG, f.drag());
         String from = fit == null ? "no stored fit" : "stored fit " + fit.id();
         try {
             Optional<MechanismDocument> open = MechanismDocuments.of(shownFile());
