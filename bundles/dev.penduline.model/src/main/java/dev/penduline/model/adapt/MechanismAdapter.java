@@ -182,7 +182,7 @@ public final class MechanismAdapter {
         }
         for (double angle : new double[] {p.getRotationX(), p.getRotationY(), p.getRotationZ()}) {
             if (!Double.isFinite(angle)) {
-                throw new IllegalArgumentException("rotation angle must be finite, got " + angle);
+                throw new InvalidValueException("rotation angle must be finite, got " + angle);
             }
         }
         return new Rotation(RotationOrder.ZYX, RotationConvention.VECTOR_OPERATOR,
