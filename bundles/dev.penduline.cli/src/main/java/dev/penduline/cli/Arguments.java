@@ -7,6 +7,8 @@ import java.util.List;
 import java.util.Map;
 import java.util.Set;
 
+import dev.penduline.physics.InputMessage;
+
 /**
  * The options of one command: {@code --name VALUE}, {@code --name=VALUE}, repeatable options,
  * flags and positional arguments. Unknown options and missing values are usage errors that name
@@ -52,13 +54,13 @@ public final class Arguments {
                 String value = inline;
                 if (value == null) {
                     if (i + 1 >= args.size()) {
-                        throw new UsageException("option --" + name + " needs a value");
+                        throw new UsageException(InputMessage.OPTION_NEEDS_VALUE, name);
                     }
                     value = args.get(++i);
                 }
                 a.values.computeIfAbsent(name, k -> new ArrayList<>()).add(value);
             } else {
-                throw new UsageException("unknown option --" + name + suggestion(name, valueOptions, flagOptions));
+                throw new UsageException(InputMessage.UNKNOWN_OPTION, name, suggestion(name, valueOptions, flagOptions));
             }
         }
         return a;
@@ -141,8 +143,8 @@ public final class Arguments {
             d = Double.NaN;
         }
         if (!Double.isFinite(d)) {
-            throw new UsageException("option --" + name + ": '" + OptionRules.shown(v) + "' is not a number: give "
-                    + OptionRules.of(name).describe());
+            throw new UsageException(InputMessage.OPTION_NOT_A_NUMBER, name, OptionRules.shown(v),
+                    OptionRules.of(name).describe());
         }
         return OptionRules.check(name, v, d);
     }
@@ -171,7 +173,7 @@ public final class Arguments {
      */
     public double requiredNumber(String name) throws UsageException {
         if (!has(name)) {
-            throw new UsageException("option --" + name + " is required");
+            throw new UsageException(InputMessage.OPTION_REQUIRED, name);
         }
         return number(name, Double.NaN);
     }

@@ -3,6 +3,7 @@ package dev.penduline.cli;
 import java.util.Map;
 
 import dev.penduline.physics.identify.FrictionTerm;
+import dev.penduline.physics.InputMessage;
 import dev.penduline.services.ValueRange;
 
 /**
@@ -139,9 +140,8 @@ public final class OptionRules {
     public static double check(String option, String raw, double value) throws UsageException {
         Rule r = of(option);
         if (!r.accepts(value)) {
-            throw new UsageException("option --" + option + ": '" + shown(raw) + "' " + r.range().refusal(value) + ": give "
-                    + r.describe()
-                    + (r.hint().isEmpty() ? "" : " (" + r.hint() + ")"));
+            throw new UsageException(InputMessage.OPTION_OUT_OF_RANGE, option, shown(raw), r.range().refusal(value),
+                    r.describe(), r.hint().isEmpty() ? "" : " (" + r.hint() + ")");
         }
         return value;
     }

@@ -19,6 +19,7 @@ import dev.penduline.cli.commands.SimulateCommand;
 import dev.penduline.cli.commands.SurveyCommand;
 import dev.penduline.cli.internal.FaultReport;
 import dev.penduline.cli.internal.PrintableWriter;
+import dev.penduline.physics.InvalidValueException;
 import dev.penduline.services.Defaults;
 import dev.penduline.services.InputException;
 import dev.penduline.services.present.Figures;
@@ -119,16 +120,23 @@ public final class PendulineCommandLine {
                 }
                 try {
                     return command.run(new ArrayList<>(List.of(args).subList(1, args.length)), defaults, out, err);
-                } catch (UsageException e) {
+                } catch (UsageException | InvalidValueException e) {
+                    // a user error, also one the physics found in a value no layer above it translated
                     out.flush();
                     err.println(PROGRAM + " " + command.name() + ": " + e.getMessage());
                     return ExitCode.USAGE_OR_INPUT;
-                } catch (RuntimeException | StackOverflowError | OutOfMemoryError e) {
-                    // the last line of defence: any failure no check foresaw is a diagnosis and a log, never a trace
+                } catch (OutOfMemoryError e) {
+                    // an input too large for the memory budget: a diagnosis and a log, no trace
                     out.flush();
                     err.println(PROGRAM + " " + command.name() + ": " + FaultReport.diagnose(command.name(),
                             Arrays.copyOfRange(args, 1, args.length), Version.current(), e));
                     return ExitCode.COMPUTATION_FAILED;
+                } catch (RuntimeException | StackOverflowError e) {
+                    // a defect of Penduline, never reported as bad input: what happened, the trace, and a request to report it
+                    out.flush();
+                    err.println(PROGRAM + " " + command.name() + ": " + FaultReport.internalError(command.name(),
+                            Arrays.copyOfRange(args, 1, args.length), Version.current(), e));
+                    return ExitCode.INTERNAL_ERROR;
                 }
             }
         }
@@ -174,7 +182,8 @@ public final class PendulineCommandLine {
         out.println("                     (the workbench's preferences); options given on the line still win.");
         out.println("                     Without it that file is never read.");
         out.println();
-        out.println("Exit codes: 0 ok, 1 a computation failed, 2 a usage or input error, 3 some of a survey's records failed.");
+        out.println("Exit codes: 0 ok, 1 a computation failed, 2 a usage or input error, 3 some of a survey's records failed,");
+        out.println("            4 an internal error (a defect of Penduline: please report it).");
     }
 
     private String commandNames() {

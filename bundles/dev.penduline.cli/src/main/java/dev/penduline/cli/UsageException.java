@@ -1,7 +1,13 @@
 package dev.penduline.cli;
 
-/** A mistake on the command line or in an input file: reported as one line, exit code 2. */
-public class UsageException extends Exception {
+import dev.penduline.physics.InputMessage;
+import dev.penduline.physics.UserInputException;
+
+/**
+ * A mistake on the command line or in an input file: reported as one message, exit code 2, never
+ * a stack trace. It is the command line's {@link UserInputException}.
+ */
+public class UsageException extends UserInputException {
 
     private static final long serialVersionUID = 1L;
 
@@ -11,6 +17,16 @@ public class UsageException extends Exception {
      * @param message what is wrong and, where it helps, what to do instead
      */
     public UsageException(String message) {
-        super(message);
+        super(message, null);
+    }
+
+    /**
+     * Creates the exception from one of the message keys.
+     *
+     * @param message the key of the message's text
+     * @param args    the values its format string takes
+     */
+    public UsageException(InputMessage message, Object... args) {
+        super(message, args);
     }
 }

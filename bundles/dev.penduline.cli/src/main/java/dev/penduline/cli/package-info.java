@@ -8,7 +8,8 @@
  *
  * <p>Exit codes ({@link dev.penduline.cli.ExitCode}): 0 the command did its job, 1 a computation
  * failed (for example a fit did not converge), 2 a usage or input error (unknown command, bad
- * option, unreadable or malformed file). Errors the user can cause are one message naming the
- * file, line and field; never a stack trace.
+ * option, unreadable or malformed file), 3 some of a survey's units failed, 4 an internal error (a
+ * defect of Penduline: its stack trace and a request to report it). Errors the user can cause are
+ * one message naming the file, line and field; never a stack trace.
  */
 package dev.penduline.cli;

@@ -38,22 +38,22 @@ public record MechanismProperties(double mass, double centroidDistance, double p
         requireFinite("gravity", gravity);
         requireFinite("axisTilt", axisTilt);
         if (mass <= 0) {
-            throw new IllegalArgumentException("mass must be positive, got " + mass + " kg");
+            throw new InvalidValueException("mass must be positive, got " + mass + " kg");
         }
         if (centroidDistance < 0) {
-            throw new IllegalArgumentException(
+            throw new InvalidValueException(
                     "centroidDistance must not be negative, got " + centroidDistance + " m");
         }
         if (gravity <= 0) {
-            throw new IllegalArgumentException("gravity must be positive, got " + gravity + " m/s²");
+            throw new InvalidValueException("gravity must be positive, got " + gravity + " m/s²");
         }
         if (Math.abs(axisTilt) >= Math.PI / 2) {
-            throw new IllegalArgumentException(
+            throw new InvalidValueException(
                     "axisTilt must be less than 90° in magnitude, got " + Math.toDegrees(axisTilt) + "°");
         }
         final double pointMassInertia = mass * centroidDistance * centroidDistance;
         if (pivotInertia < pointMassInertia * (1 - INERTIA_SLACK)) {
-            throw new IllegalArgumentException("pivotInertia " + pivotInertia
+            throw new InvalidValueException("pivotInertia " + pivotInertia
                     + " kg·m² is below m·Lc² = " + pointMassInertia
                     + " kg·m²: the inputs are inconsistent (no body has less inertia about an axis"
                     + " than its mass concentrated at its centroid)");
@@ -150,7 +150,7 @@ public record MechanismProperties(double mass, double centroidDistance, double p
 
     private static void requireFinite(String name, double value) {
         if (!Double.isFinite(value)) {
-            throw new IllegalArgumentException(name + " must be a finite number, got " + value);
+            throw new InvalidValueException(name + " must be a finite number, got " + value);
         }
     }
 }

@@ -3,6 +3,8 @@ package dev.penduline.records;
 import java.io.IOException;
 import java.io.Reader;
 
+import dev.penduline.physics.InputMessage;
+
 /**
  * Reads lines of text like {@link java.io.BufferedReader#readLine()} (ended by LF, CR or CR LF),
  * but refuses a line longer than a cap as soon as the cap is passed, naming the file and the
@@ -72,9 +74,8 @@ public final class BoundedLines {
                 position++;
             }
             if (line.length() + position - start > maxChars) {
-                throw new RecordFormatException(file, number + 1, null, "the line is longer than "
-                        + maxChars + " characters, the limit for a line (README, \"Limits\"); it was not read further."
-                        + " Is this a binary file, or a file whose line breaks were lost?");
+                throw new RecordFormatException(file, number + 1, null, InputMessage.LINE_TOO_LONG.format(
+                        maxChars));
             }
             line.append(buffer, start, position - start);
             if (position < limit) {

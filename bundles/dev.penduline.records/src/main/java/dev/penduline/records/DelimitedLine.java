@@ -3,6 +3,8 @@ package dev.penduline.records;
 import java.util.ArrayList;
 import java.util.List;
 
+import dev.penduline.physics.InputMessage;
+
 /**
  * Splits one line of delimited text (comma, semicolon, tab, ...), shared by every reader of
  * Penduline's text records.
@@ -53,8 +55,8 @@ public final class DelimitedLine {
                 }
             } else if (c == '"') {
                 if (!field.toString().isBlank() || wasQuoted) {
-                    throw new RecordFormatException(file, lineNumber, null, "a quote in the middle of field "
-                            + (fields.size() + 1) + ": quote the whole field and double any quote inside it");
+                    throw new RecordFormatException(file, lineNumber, null, InputMessage.QUOTE_INSIDE_FIELD.format(
+                            fields.size() + 1));
                 }
                 field.setLength(0);
                 quoted = true;
@@ -65,16 +67,15 @@ public final class DelimitedLine {
                 wasQuoted = false;
             } else if (wasQuoted) {
                 if (!Character.isWhitespace(c)) {
-                    throw new RecordFormatException(file, lineNumber, null, "text after the closing quote of field "
-                            + (fields.size() + 1));
+                    throw new RecordFormatException(file, lineNumber, null, InputMessage.TEXT_AFTER_QUOTE.format(
+                            fields.size() + 1));
                 }
             } else {
                 field.append(c);
             }
         }
         if (quoted) {
-            throw new RecordFormatException(file, lineNumber, null, "field " + (fields.size() + 1)
-                    + " opens a quote that is not closed on this line");
+            throw new RecordFormatException(file, lineNumber, null, InputMessage.UNCLOSED_QUOTE.format(fields.size() + 1));
         }
         fields.add(wasQuoted ? field.toString() : field.toString().strip());
         return fields;

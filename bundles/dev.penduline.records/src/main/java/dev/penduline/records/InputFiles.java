@@ -5,6 +5,8 @@ import java.nio.file.Files;
 import java.nio.file.Path;
 import java.nio.file.attribute.BasicFileAttributes;
 
+import dev.penduline.physics.InputMessage;
+
 /**
  * The check every file Penduline reads passes before it is opened: it must be a regular file.
  * A named pipe would block the reader until something writes to it (forever, as a rule), a device
@@ -39,8 +41,7 @@ public final class InputFiles {
     public static void requireRegularFile(Path file, String what) throws IOException, RecordFormatException {
         final String kind = notRegular(file);
         if (kind != null) {
-            throw new RecordFormatException(file.toString(), 0, null, "not a regular file: " + kind + "; give the path of "
-                    + what);
+            throw new RecordFormatException(file.toString(), 0, null, InputMessage.NOT_A_REGULAR_FILE.format(kind, what));
         }
     }
 

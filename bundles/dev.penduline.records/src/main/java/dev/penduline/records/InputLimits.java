@@ -5,6 +5,8 @@ import java.nio.file.Files;
 import java.nio.file.Path;
 import java.util.Locale;
 
+import dev.penduline.physics.InputMessage;
+
 /**
  * The sizes Penduline's readers accept, checked before and while reading so that an input too
  * large for the memory budget is refused at once, with the limit, the size seen and what to do,
@@ -50,9 +52,8 @@ public final class InputLimits {
         }
         final long size = Files.size(file);
         if (size > limit) {
-            throw new RecordFormatException(file.toString(), 0, null, "the file is " + bytes(size) + ", more than the "
-                    + bytes(limit) + " a " + what + " may have (README, \"Limits\"); is it the right file? Split a longer "
-                    + "record into several, or record at a lower rate");
+            throw new RecordFormatException(file.toString(), 0, null, InputMessage.FILE_TOO_LARGE.format(bytes(size),
+                    bytes(limit), what));
         }
     }
 

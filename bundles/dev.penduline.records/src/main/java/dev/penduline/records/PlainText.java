@@ -3,6 +3,8 @@ package dev.penduline.records;
 import java.util.Locale;
 import java.util.Optional;
 
+import dev.penduline.physics.UserInputException;
+
 /**
  * Rules for text a user gives as a name or a note. A mechanism file is XML 1.0, which cannot hold
  * most control characters at all, not even escaped; a name with one would also garble every
@@ -66,20 +68,7 @@ public final class PlainText {
      * @return the text with those characters escaped (the same string when there are none)
      */
     public static String visible(String text) {
-        StringBuilder b = null;
-        for (int i = 0; i < text.length(); i++) {
-            char c = text.charAt(i);
-            boolean escape = isControl(c) || isLoneSurrogate(text, i);
-            if (escape && b == null) {
-                b = new StringBuilder(text.length() + 8).append(text, 0, i);
-            }
-            if (escape) {
-                b.append(String.format(Locale.ROOT, "\\u%04x", (int) c));
-            } else if (b != null) {
-                b.append(c);
-            }
-        }
-        return b == null ? text : b.toString();
+        return UserInputException.visible(text);
     }
 
     /**

@@ -1,22 +1,17 @@
 package dev.penduline.records;
 
+import dev.penduline.physics.UserInputException;
+
 /**
  * A file the user gave cannot be read as the record it should be; the message names the file,
  * the 1-based line and the column (by its header name) so the user can go and fix it, for
- * example {@code parts.csv:4: column 'mass_kg': 'abc' is not a number}.
+ * example {@code parts.csv:4: column 'mass_kg': 'abc' is not a number}. The place and the
+ * message's form are those of every user error ({@link UserInputException}); the texts are
+ * {@link dev.penduline.physics.InputMessage}'s.
  */
-public class RecordFormatException extends Exception {
+public class RecordFormatException extends UserInputException {
 
     private static final long serialVersionUID = 1L;
-
-    /** The file as the user named it. */
-    private final String fileName;
-    /** The 1-based line, 0 for the whole file. */
-    private final int lineNumber;
-    /** The column's header name, null for the whole line. */
-    private final String columnName;
-    /** What is wrong, without the location. */
-    private final String problem;
 
     /**
      * Creates the exception.
@@ -29,12 +24,7 @@ public class RecordFormatException extends Exception {
      *                   (echoed from the file) are escaped
      */
     public RecordFormatException(String fileName, int lineNumber, String columnName, String problem) {
-        super(format(fileName, lineNumber, columnName == null ? null : PlainText.visible(columnName),
-                PlainText.visible(problem)));
-        this.fileName = fileName;
-        this.lineNumber = lineNumber;
-        this.columnName = columnName == null ? null : PlainText.visible(columnName);
-        this.problem = PlainText.visible(problem);
+        super(fileName == null ? "<input>" : fileName, lineNumber, 0, columnName, problem, null, null);
     }
 
     /**
@@ -43,7 +33,7 @@ public class RecordFormatException extends Exception {
      * @return the file name as the user gave it
      */
     public String getFileName() {
-        return fileName;
+        return fileName();
     }
 
     /**
@@ -52,7 +42,7 @@ public class RecordFormatException extends Exception {
      * @return the line, 0 when the problem concerns the whole file
      */
     public int getLineNumber() {
-        return lineNumber;
+        return line();
     }
 
     /**
@@ -61,7 +51,7 @@ public class RecordFormatException extends Exception {
      * @return the column's header name (control characters escaped), or null when the whole line is concerned
      */
     public String getColumnName() {
-        return columnName;
+        return field();
     }
 
     /**
@@ -70,18 +60,6 @@ public class RecordFormatException extends Exception {
      * @return the problem, with control characters escaped
      */
     public String getProblem() {
-        return problem;
-    }
-
-    private static String format(String file, int line, String column, String problem) {
-        final StringBuilder b = new StringBuilder(file == null ? "<input>" : PlainText.visible(file));
-        if (line > 0) {
-            b.append(':').append(line);
-        }
-        b.append(": ");
-        if (column != null) {
-            b.append("column '").append(column).append("': ");
-        }
-        return b.append(problem).toString();
+        return problem();
     }
 }

@@ -7,6 +7,8 @@ import java.nio.charset.CharsetDecoder;
 import java.nio.charset.CodingErrorAction;
 import java.nio.charset.StandardCharsets;
 
+import dev.penduline.physics.InputMessage;
+
 /**
  * Decoding of the text files Penduline reads (UTF-8), so that a file in another encoding is
  * refused with its line instead of a decoder's exception or silently garbled text.
@@ -57,19 +59,18 @@ public final class Utf8Text {
     public static void check(String line, int lineNumber, boolean used, String file) throws RecordFormatException {
         if (lineNumber == 1 && looksLikeUtf16(line)) {
             throw new RecordFormatException(file, lineNumber, null,
-                    "not UTF-8 text (looks like UTF-16): save the file as UTF-8");
+                    InputMessage.LOOKS_LIKE_UTF16.format());
         }
         if (lineNumber == 1 && line.indexOf('\0') >= 0) {
             throw new RecordFormatException(file, lineNumber, null,
-                    "not UTF-8 text (looks like binary data): is it the right file?");
+                    InputMessage.LOOKS_LIKE_BINARY.format());
         }
         if (!used) {
             return;
         }
         for (int i = line.indexOf(NOT_UTF8); i >= 0; i = line.indexOf(NOT_UTF8, i + 1)) {
             if (PlainText.isLoneSurrogate(line, i)) {
-                throw new RecordFormatException(file, lineNumber, null, "not UTF-8 text at character " + (i + 1)
-                        + " (another encoding, e.g. Latin-1 or Windows-1252?): save the file as UTF-8");
+                throw new RecordFormatException(file, lineNumber, null, InputMessage.NOT_UTF8_AT.format(i + 1));
             }
         }
     }

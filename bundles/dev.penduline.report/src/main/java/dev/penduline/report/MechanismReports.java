@@ -48,6 +48,7 @@ import dev.penduline.services.StoredFit;
 import dev.penduline.services.StoredFitText;
 import dev.penduline.services.SwingSessionAnalysis;
 import dev.penduline.services.present.Figures;
+import dev.penduline.physics.InvalidValueException;
 
 /**
  * Builds the report of a mechanism file: the mechanism from its parts, each test session with
@@ -208,7 +209,7 @@ public final class MechanismReports {
         ToleranceSpread.Result r;
         try {
             r = ToleranceSpread.of(source.frame(), source.parts(), request.toleranceDraws(), request.toleranceSeed());
-        } catch (IllegalArgumentException e) {
+        } catch (InvalidValueException e) {
             throw new InputException(source.label() + ": " + e.getMessage(), e);
         }
         List<List<Cell>> rows = new ArrayList<>();

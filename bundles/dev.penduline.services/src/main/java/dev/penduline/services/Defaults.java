@@ -22,6 +22,7 @@ import dev.penduline.model.persistence.AtomicFileWrite;
 import dev.penduline.physics.MechanismProperties;
 import dev.penduline.physics.identify.FitSettings;
 import dev.penduline.records.PlainText;
+import dev.penduline.physics.InvalidValueException;
 
 /**
  * The defaults a user sets once, shared by the workbench and the command line: local gravity,
@@ -141,7 +142,7 @@ public record Defaults(double gravity, double verdictMargin, double settleBand, 
                 v = Double.NaN;
             }
             if (!Double.isFinite(v)) {
-                throw new IllegalArgumentException(key + ": '" + shown(t) + "' is not a number: give " + describe());
+                throw new InvalidValueException(key + ": '" + shown(t) + "' is not a number: give " + describe());
             }
             check(v, t);
             return v;
@@ -175,7 +176,7 @@ public record Defaults(double gravity, double verdictMargin, double settleBand, 
 
         private void check(double v, String typed) {
             if (!range.accepts(v)) {
-                throw new IllegalArgumentException(key + ": '" + shown(typed) + "' " + range.refusal(v) + ": give " + describe());
+                throw new InvalidValueException(key + ": '" + shown(typed) + "' " + range.refusal(v) + ": give " + describe());
             }
         }
 
@@ -337,7 +338,7 @@ public record Defaults(double gravity, double verdictMargin, double settleBand, 
             }
             try {
                 v.put(key.get(), key.get().parse(line.substring(sep + 1)));
-            } catch (IllegalArgumentException e) {
+            } catch (InvalidValueException e) {
                 throw new InputException(where + e.getMessage(), e);
             }
         }

@@ -11,6 +11,7 @@ import dev.penduline.physics.motion.SwingRun;
 import dev.penduline.physics.motion.SwingSimulator;
 import dev.penduline.physics.units.Unit;
 import dev.penduline.records.InputLimits;
+import dev.penduline.physics.InvalidValueException;
 
 /**
  * Invented swing records made with our own simulator, with what real records have: a still
@@ -31,17 +32,17 @@ public final class DemoRecords {
          */
         public Settings {
             if (!(duration > 0) || !(sampleRate > 0) || !(stillTime >= 0) || !(noise >= 0)) {
-                throw new IllegalArgumentException("duration and rate must be positive, still time and noise not "
+                throw new InvalidValueException("duration and rate must be positive, still time and noise not "
                         + "negative");
             }
             double samples = Math.floor(duration * sampleRate) + 1;
             if (samples > InputLimits.MAX_RECORD_SAMPLES) {
-                throw new IllegalArgumentException(String.format(Locale.ROOT, "--duration %.6g s at --rate %.6g Hz makes %.4g "
+                throw new InvalidValueException(String.format(Locale.ROOT, "--duration %.6g s at --rate %.6g Hz makes %.4g "
                         + "samples, more than the %d a record may have (README, \"Limits\"); shorten the duration or lower "
                         + "the rate", duration, sampleRate, samples, InputLimits.MAX_RECORD_SAMPLES));
             }
             if (!(countsPerRevolution >= 0)) {
-                throw new IllegalArgumentException("counts per revolution must be positive (or 0 for an angle in "
+                throw new InvalidValueException("counts per revolution must be positive (or 0 for an angle in "
                         + "degrees)");
             }
         }
@@ -98,7 +99,7 @@ public final class DemoRecords {
         SwingRun run;
         try {
             run = new SwingSimulator(aboutEquilibrium, friction).simulate(s.theta0(), 0, motionTimes);
-        } catch (IllegalArgumentException e) {
+        } catch (InvalidValueException e) {
             throw new InputException(e.getMessage(), e);
         }
         double[] motion = run.angles();

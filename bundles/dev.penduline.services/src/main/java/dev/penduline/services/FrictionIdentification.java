@@ -26,6 +26,7 @@ import dev.penduline.physics.swing.PeriodCheck;
 import dev.penduline.physics.swing.SwingAnalysis;
 import dev.penduline.records.swing.SwingImportOptions;
 import dev.penduline.records.swing.SwingRecord;
+import dev.penduline.physics.InvalidValueException;
 
 /**
  * Identifies the friction of a mechanism from one or more release records: the use case behind
@@ -234,7 +235,7 @@ public final class FrictionIdentification {
             if (terms.isPresent()) {
                 problem = problem.withTerms(EnumSet.copyOf(terms.get()));
             }
-        } catch (IllegalArgumentException e) {
+        } catch (InvalidValueException e) {
             throw new InputException(e.getMessage(), e);
         }
         FrictionIdentifier identifier = new FrictionIdentifier(settings);

@@ -18,6 +18,7 @@ import dev.penduline.physics.inertia.ToleranceSpread;
 import dev.penduline.physics.motion.FrictionTorques;
 import dev.penduline.physics.motion.SwingRun;
 import dev.penduline.physics.motion.SwingSimulator;
+import dev.penduline.physics.InvalidValueException;
 
 /**
  * What a mechanism will do after a release, with the friction of a stored fit (or given
@@ -138,7 +139,7 @@ public final class MechanismForecast {
         SwingForecast nominal;
         try {
             nominal = new Forecaster(new SwingSimulator(base, source.friction())).forecast(request);
-        } catch (IllegalArgumentException e) {
+        } catch (InvalidValueException e) {
             throw new InputException(e.getMessage(), e);
         }
         List<String> notes = new ArrayList<>();
@@ -156,7 +157,7 @@ public final class MechanismForecast {
             ToleranceSpread.Result r;
             try {
                 r = ToleranceSpread.of(mechanism.frame(), mechanism.parts(), Math.max(2, draws), seed);
-            } catch (IllegalArgumentException e) {
+            } catch (InvalidValueException e) {
                 throw new InputException(mechanism.label() + ": " + e.getMessage(), e);
             }
             parts = r.draws();
@@ -165,7 +166,12 @@ public final class MechanismForecast {
                         + " drawn again from the rest");
             }
         }
-        double[][] sets = fitSpread ? ParameterDraws.draw(fit.values(), fit.sigmas(), fit.correlation(), draws, seed) : null;
+        double[][] sets;
+        try {
+            sets = fitSpread ? ParameterDraws.draw(fit.values(), fit.sigmas(), fit.correlation(), draws, seed) : null;
+        } catch (InvalidValueException e) {
+            throw new InputException(mechanism.label() + ": stored fit " + fit.id() + ": " + e.getMessage() + "; fit again", e);
+        }
         List<SwingForecast> drawn = new ArrayList<>(draws);
         int clamped = 0;
         Random stiction = new Random(seed ^ 0x5DEECE66DL);

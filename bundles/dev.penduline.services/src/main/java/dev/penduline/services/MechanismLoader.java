@@ -22,6 +22,7 @@ import dev.penduline.physics.inertia.PivotInertia;
 import dev.penduline.records.RecordFormatException;
 import dev.penduline.records.parts.PartsList;
 import dev.penduline.records.parts.PartsListReader;
+import dev.penduline.physics.InvalidValueException;
 
 /**
  * Loads a mechanism from a mechanism file, a parts-list CSV or lumped properties, and computes its inertia
@@ -135,7 +136,7 @@ public final class MechanismLoader {
                 frame = frame.withGravity(engine.gravity());
             }
             parts = MechanismAdapter.parts(mechanism);
-        } catch (IllegalArgumentException e) {
+        } catch (InvalidValueException e) {
             throw new InputException(where + ": " + e.getMessage(), e);
         }
         String label = mechanism.getName() == null || mechanism.getName().isBlank() ? where
@@ -192,7 +193,7 @@ public final class MechanismLoader {
         PivotInertia.Assessment assessed;
         try {
             assessed = engine.assess(parts);
-        } catch (IllegalArgumentException e) {
+        } catch (InvalidValueException e) {
             throw new InputException(label + ": " + e.getMessage(), e);
         }
         if (assessed.fatal().isPresent()) {
@@ -203,7 +204,7 @@ public final class MechanismLoader {
         MechanismProperties properties;
         try {
             properties = summary.toMechanismProperties();
-        } catch (IllegalArgumentException e) {
+        } catch (InvalidValueException e) {
             throw new InputException(label + ": " + e.getMessage(), e);
         }
         List<String> all = new ArrayList<>(warnings);
@@ -227,7 +228,7 @@ public final class MechanismLoader {
         try {
             MechanismProperties p = new MechanismProperties(mass, centroidDistance, pivotInertia, 0, gravity, 0);
             return new MechanismSource("lumped properties", p, Optional.empty(), List.of());
-        } catch (IllegalArgumentException e) {
+        } catch (InvalidValueException e) {
             throw new InputException("mechanism options: " + e.getMessage(), e);
         }
     }

@@ -23,6 +23,7 @@ import dev.penduline.physics.units.Unit;
 import dev.penduline.records.PlainText;
 import dev.penduline.records.RecordFormatException;
 import dev.penduline.records.parts.PartsListReader;
+import dev.penduline.physics.InvalidValueException;
 
 /**
  * What-if changes of a mechanism's parts, without editing its file: {@code PART.FIELD=VALUE}
@@ -129,7 +130,7 @@ public final class PartChanges {
             }
             try {
                 out.set(index, changed(out.get(index), s));
-            } catch (IllegalArgumentException e) {
+            } catch (InvalidValueException e) {
                 throw new InputException("what-if '" + shown(s.text()) + "': " + e.getMessage(), e);
             }
         }
@@ -172,7 +173,7 @@ public final class PartChanges {
             default -> null;
         };
         if (out == null) {
-            throw new IllegalArgumentException("a " + shape.kind() + " has no " + field);
+            throw new InvalidValueException("a " + shape.kind() + " has no " + field);
         }
         return out;
     }

@@ -39,6 +39,7 @@ import dev.penduline.records.RecordFormatException;
 import dev.penduline.records.parts.PartsList;
 import dev.penduline.records.parts.PartsListReader;
 import dev.penduline.services.present.Figures;
+import dev.penduline.physics.InvalidValueException;
 
 /**
  * Turns a parts list (a BOM or CAD export read by the parts-list reader) into a mechanism file,
@@ -259,7 +260,7 @@ public final class PartsImport {
     public static double calculatedInertia(Mechanism m) {
         try {
             return MechanismAdapter.inertia(m).pivotInertia();
-        } catch (IllegalArgumentException e) {
+        } catch (InvalidValueException e) {
             return Double.NaN;
         }
     }
@@ -294,7 +295,7 @@ public final class PartsImport {
         q.setMassTolerance(tidy(p.tolerance().mass()));
         q.setDimensionTolerance(tidy(p.tolerance().dimension()));
         if (p.orientation().getAngle() != 0 && !(p.shape() instanceof GivenTensor)) {
-            throw new IllegalArgumentException("part '" + p.name()
+            throw new InvalidValueException("part '" + p.name()
                     + "': a rotated standard shape cannot come from a parts list");
         }
         switch (p.shape()) {

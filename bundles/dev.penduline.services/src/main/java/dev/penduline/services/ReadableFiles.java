@@ -41,8 +41,8 @@ final class ReadableFiles {
         if (e instanceof NoSuchFileException) {
             return new InputException(file + ": no such file", e);
         }
-        if (e instanceof RecordFormatException) {
-            return new InputException(e.getMessage(), e);
+        if (e instanceof RecordFormatException r) {
+            return new InputException(r);
         }
         return new InputException(file + ": cannot be read (" + e.getMessage() + ")", e);
     }

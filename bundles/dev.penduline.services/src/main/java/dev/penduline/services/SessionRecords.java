@@ -30,6 +30,7 @@ import dev.penduline.records.swing.SwingImportOptions;
 import dev.penduline.records.swing.SwingRecord;
 import dev.penduline.records.swing.SwingRecordMapping;
 import dev.penduline.records.swing.SwingRecordReader;
+import dev.penduline.physics.InvalidValueException;
 
 /**
  * Swing-test records and the test sessions of a mechanism file: reading a raw record, adding it
@@ -58,7 +59,7 @@ public final class SessionRecords {
             return new SwingRecordReader().read(file, options);
         } catch (IOException | RecordFormatException e) {
             throw ReadableFiles.problem(file, e);
-        } catch (IllegalArgumentException e) {
+        } catch (InvalidValueException e) {
             throw new InputException(file + ": " + e.getMessage(), e);
         }
     }

@@ -8,6 +8,7 @@ import dev.penduline.physics.motion.FrictionTorques;
 import dev.penduline.physics.motion.SwingRun;
 import dev.penduline.physics.motion.SwingSimulator;
 import dev.penduline.records.InputLimits;
+import dev.penduline.physics.InvalidValueException;
 
 /**
  * Predicts a free swing of a mechanism: the use case behind {@code penduline simulate} and the
@@ -48,7 +49,7 @@ public final class SwingPrediction {
                 p.pivotInertia(), 0, p.gravity(), p.axisTilt());
         try {
             return new SwingSimulator(aboutEquilibrium, friction).simulate(theta0, omega0, duration, sampleRate);
-        } catch (IllegalArgumentException e) {
+        } catch (InvalidValueException e) {
             throw new InputException(e.getMessage(), e);
         }
     }

@@ -6,6 +6,7 @@ import dev.penduline.physics.MechanismProperties;
 import dev.penduline.physics.swing.SwingAnalysis;
 import dev.penduline.physics.swing.SwingAnalyzer;
 import dev.penduline.records.swing.SwingRecord;
+import dev.penduline.physics.InvalidValueException;
 
 /**
  * Analyses one swing record: release, zero offset, turning points, cycles, decay envelopes,
@@ -37,7 +38,7 @@ public final class SwingSessionAnalysis {
         }
         try {
             return analyzer.analyse(record.times(), record.angles());
-        } catch (IllegalArgumentException | IllegalStateException e) {
+        } catch (InvalidValueException e) {
             throw new InputException(record.source() + ": cannot be analysed: " + e.getMessage(), e);
         }
     }

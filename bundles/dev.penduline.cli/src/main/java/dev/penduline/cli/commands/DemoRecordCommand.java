@@ -17,6 +17,7 @@ import dev.penduline.services.Defaults;
 import dev.penduline.services.DemoRecords;
 import dev.penduline.services.InputException;
 import dev.penduline.services.MechanismSource;
+import dev.penduline.physics.InvalidValueException;
 
 /** {@code penduline demo-record}: an invented swing record from the simulator, with a known truth. */
 public final class DemoRecordCommand implements Command {
@@ -120,7 +121,7 @@ public final class DemoRecordCommand implements Command {
             FrictionTorques friction = new FrictionTorques(viscous, coulomb, a.number("stiction", 0), a.number("drag", 0));
             DemoRecords.write(mechanism, friction, settings(a, seed), Path.of(a.value("out")), a.flag("force"),
                     note -> err.println("note: " + note));
-        } catch (IllegalArgumentException | InputException e) {
+        } catch (InvalidValueException | InputException e) {
             throw new UsageException(e.getMessage());
         }
         out.println("wrote " + a.value("out") + " (invented demo data)");

@@ -26,6 +26,7 @@ import dev.penduline.services.FrictionIdentification.Outcome;
 import dev.penduline.services.FrictionIdentification.SessionInput;
 import dev.penduline.services.InputException;
 import dev.penduline.services.MechanismSource;
+import dev.penduline.physics.InvalidValueException;
 
 /** {@code penduline fit}: identify the friction terms from release records, compare, decide. */
 public final class FitCommand implements Command {
@@ -143,7 +144,7 @@ public final class FitCommand implements Command {
             }
         } catch (InputException e) {
             throw new UsageException(e.getMessage());
-        } catch (IllegalArgumentException e) {
+        } catch (InvalidValueException e) {
             throw new UsageException(e.getMessage());
         }
         if (a.flag("json")) {

@@ -20,6 +20,7 @@ import dev.penduline.services.MechanismForecast.FrictionSource;
 import dev.penduline.services.MechanismLoader;
 import dev.penduline.services.MechanismSource;
 import dev.penduline.services.StoredFit;
+import dev.penduline.physics.InvalidValueException;
 
 /**
  * Where the friction of a swing comes from, as the commands that simulate or forecast one are
@@ -94,7 +95,7 @@ final class FrictionOptions {
                         a.number(FrictionTerm.COULOMB.word(), 0), a.number(FrictionTerm.STICTION.word(), 0),
                         a.number(FrictionTerm.DRAG.word(), 0)), given ? "friction options (no uncertainty)"
                                 : "no friction (--no-fit)");
-            } catch (IllegalArgumentException e) {
+            } catch (InvalidValueException e) {
                 throw new UsageException(e.getMessage());
             }
         }

@@ -25,6 +25,7 @@ import dev.penduline.services.MechanismLoader;
 import dev.penduline.services.MechanismSource;
 import dev.penduline.services.SessionRecords;
 import dev.penduline.services.present.Figures;
+import dev.penduline.physics.InvalidValueException;
 
 /** {@code penduline inertia FILE}: mass, centroid and inertia about the pivot, part by part. */
 public final class InertiaCommand implements Command {
@@ -102,7 +103,7 @@ public final class InertiaCommand implements Command {
             }
             try {
                 spread = ToleranceSpread.of(source.frame(), source.parts(), draws, a.whole("seed", MechanismForecast.DEFAULT_SEED));
-            } catch (IllegalArgumentException e) {
+            } catch (InvalidValueException e) {
                 throw new UsageException(source.label() + ": " + e.getMessage());
             }
         }

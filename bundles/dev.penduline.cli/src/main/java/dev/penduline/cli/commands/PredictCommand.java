@@ -33,6 +33,7 @@ import dev.penduline.services.MechanismSource;
 import dev.penduline.services.PartChanges;
 import dev.penduline.services.SpecDesign;
 import dev.penduline.services.present.Figures;
+import dev.penduline.physics.InvalidValueException;
 
 /** {@code penduline predict}: what a mechanism does after a release, with the friction of its stored fit. */
 public final class PredictCommand implements Command {
@@ -154,7 +155,7 @@ public final class PredictCommand implements Command {
             request = new ForecastRequest(Unit.DEGREE.toSi(a.requiredNumber("theta0-deg")),
                     Unit.DEG_PER_S.toSi(a.number("omega0-deg-s", 0)), Unit.DEGREE.toSi(a.number("band-deg", defaults.settleBand())),
                     a.has("at-deg") ? Unit.DEGREE.toSi(a.number("at-deg", 0)) : Double.NaN, a.number("radius-m", Double.NaN));
-        } catch (IllegalArgumentException e) {
+        } catch (InvalidValueException e) {
             throw new UsageException(e.getMessage());
         }
         if (a.has("radius-m") && !a.has("at-deg")) {

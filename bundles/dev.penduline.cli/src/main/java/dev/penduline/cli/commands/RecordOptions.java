@@ -10,6 +10,7 @@ import dev.penduline.cli.UsageException;
 import dev.penduline.physics.units.Unit;
 import dev.penduline.records.swing.ColumnChoice;
 import dev.penduline.records.swing.SwingImportOptions;
+import dev.penduline.physics.InvalidValueException;
 
 /** The options that say how to read a swing record; anything not given is detected. */
 final class RecordOptions {
@@ -104,7 +105,7 @@ final class RecordOptions {
                     default -> throw new UsageException("--decimal: '" + a.value("decimal") + "' is not point or comma");
                 });
             }
-        } catch (IllegalArgumentException e) {
+        } catch (InvalidValueException e) {
             throw new UsageException(e.getMessage());
         }
         return o;

@@ -12,9 +12,11 @@ import java.time.format.DateTimeFormatter;
 import java.util.Locale;
 
 /**
- * What the user sees when a command fails in a way no check foresaw: one short diagnosis, and the
- * Java details written to a log file whose path the diagnosis gives, never a stack trace on the
- * terminal.
+ * What the user sees when a command fails in a way no check foresaw. Running out of memory (an
+ * input too large for the heap) is one short diagnosis, with the Java details written to a log
+ * file whose path the diagnosis gives, and no stack trace on the terminal. A defect of Penduline
+ * (a {@link RuntimeException} or a stack overflow) is said to be one, with its stack trace and a
+ * request to report it ({@link #internalError}); its details go to the log too.
  *
  * <p>The log folder is {@code $PENDULINE_LOG_DIR} when set, else {@code $XDG_STATE_HOME/penduline/logs},
  * else {@code ~/.local/state/penduline/logs}.
@@ -67,6 +69,27 @@ public final class FaultReport {
         }
         return what + ".\n  This is a defect of Penduline or an input it should have refused with a clear message; "
                 + where;
+    }
+
+    /**
+     * What the user sees of a defect of Penduline (a {@link RuntimeException} no check turns into
+     * a user error, or a stack overflow): one line saying so, the stack trace, and a line asking to
+     * report it; the details are also written to a log whose path that line gives.
+     *
+     * @param command the command's name
+     * @param args    the arguments it was given
+     * @param version Penduline's version
+     * @param failure what was thrown
+     * @return the text for the user, several lines ending with the request to report it
+     */
+    public static String internalError(String command, String[] args, String version, Throwable failure) {
+        String where = writeLog(command, args, version, failure);
+        StringWriter trace = new StringWriter();
+        try (PrintWriter w = new PrintWriter(trace)) {
+            failure.printStackTrace(w);
+        }
+        return "internal error: a defect of Penduline, not of your input.\n" + trace.toString().stripTrailing()
+                + "\n  Please report it (penduline " + version + ", the command and the lines above); " + where;
     }
 
     private static String firstLine(String message) {

@@ -27,6 +27,7 @@ import dev.penduline.physics.inertia.PointMass;
 import dev.penduline.physics.inertia.SlenderRod;
 import dev.penduline.physics.inertia.Sphere;
 import dev.penduline.physics.inertia.ThinRing;
+import dev.penduline.physics.InvalidValueException;
 
 /**
  * Turns a mechanism file's model into the inertia engine's inputs: parts, pivot axis, gravity.
@@ -96,19 +97,19 @@ public final class MechanismAdapter {
     public static Vector3D gravityDirection(Mechanism mechanism) {
         final Vector3D n = axisDirection(mechanism);
         if (!(n.getNorm() > 0) || n.isNaN() || n.isInfinite()) {
-            throw new IllegalArgumentException("the pivot axis direction must be a non-zero vector, got " + n);
+            throw new InvalidValueException("the pivot axis direction must be a non-zero vector, got " + n);
         }
         final Vector3D unitN = n.normalize();
         final Vector3D d = new Vector3D(mechanism.getGravityDirectionX(), mechanism.getGravityDirectionY(),
                 mechanism.getGravityDirectionZ());
         final Vector3D perpendicular = d.subtract(unitN.scalarMultiply(d.dotProduct(unitN)));
         if (perpendicular.isNaN() || perpendicular.isInfinite() || perpendicular.getNorm() < 1e-12 * Math.max(1, d.getNorm())) {
-            throw new IllegalArgumentException("the downward direction " + d
+            throw new InvalidValueException("the downward direction " + d
                     + " is parallel to the pivot axis (or zero): gravity would exert no restoring torque");
         }
         final double tilt = mechanism.getAxisTilt();
         if (!(Math.abs(tilt) < Math.PI / 2)) {
-            throw new IllegalArgumentException("the axis tilt must be less than 90° in magnitude, got "
+            throw new InvalidValueException("the axis tilt must be less than 90° in magnitude, got "
                     + Math.toDegrees(tilt) + "°");
         }
         return perpendicular.normalize().scalarMultiply(Math.cos(tilt)).subtract(unitN.scalarMultiply(Math.sin(tilt)));
@@ -149,13 +150,13 @@ public final class MechanismAdapter {
             } else if (p.isSetDensity()) {
                 base = Part.ofDensity(name, shape(p), p.getDensity(), centroid).withOrientation(orientation);
             } else {
-                throw new IllegalArgumentException("give a mass or a density");
+                throw new InvalidValueException("give a mass or a density");
             }
             return base.withCutout(p.isCutout()).withQuantity(p.getQuantity())
                     .withTolerance(new PartTolerance(p.getMassTolerance(), p.getDimensionTolerance()));
-        } catch (IllegalArgumentException e) {
+        } catch (InvalidValueException e) {
             final String message = e.getMessage() == null ? e.toString() : e.getMessage();
-            throw new IllegalArgumentException(message.startsWith("part '") ? message
+            throw new InvalidValueException(message.startsWith("part '") ? message
                     : "part '" + name + "': " + message, e);
         }
     }
@@ -181,7 +182,7 @@ public final class MechanismAdapter {
         }
         for (double angle : new double[] {p.getRotationX(), p.getRotationY(), p.getRotationZ()}) {
             if (!Double.isFinite(angle)) {
-                throw new IllegalArgumentException("rotation angle must be finite, got " + angle);
+                throw new InvalidValueException("rotation angle must be finite, got " + angle);
             }
         }
         return new Rotation(RotationOrder.ZYX, RotationConvention.VECTOR_OPERATOR,
@@ -215,7 +216,7 @@ public final class MechanismAdapter {
             case HOLLOW_CYLINDER -> new Cylinder(p.getRadius(), p.getInnerRadius(), p.getLength(), axis);
             case SPHERE -> new Sphere(p.getRadius());
             case THIN_RING -> new ThinRing(p.getRadius(), axis);
-            case MASS_PROPERTIES -> throw new IllegalArgumentException(
+            case MASS_PROPERTIES -> throw new InvalidValueException(
                     "a tensor part has no standard shape; its tensor is given");
         };
     }
@@ -240,7 +241,7 @@ public final class MechanismAdapter {
     private static Part massPropertiesPart(dev.penduline.model.Part p, String name, Vector3D centroid,
             Rotation orientation) {
         if (!p.isSetMass()) {
-            throw new IllegalArgumentException("a tensor part needs its mass (a density is not enough)");
+            throw new InvalidValueException("a tensor part needs its mass (a density is not enough)");
         }
         final InertiaTensor tensor = givenTensor(p);
         if (p.getTensorReference() == TensorReference.CENTROID) {

@@ -2,21 +2,19 @@ package dev.penduline.model.persistence;
 
 import java.nio.file.Path;
 
-import dev.penduline.model.persistence.internal.LoadProblem;
+import dev.penduline.physics.UserInputException;
 
 /**
  * A mechanism file could not be read or written. The message names the file and, when the
  * problem has a place in it, the line and column, so that a user can open the file there.
- * Control characters echoed from the file are shown as escapes, so the message is one line.
+ * Control characters echoed from the file are shown as escapes, so the message is one line
+ * (the form of every user error, {@link UserInputException}).
  */
-public final class MechanismFileException extends Exception {
+public final class MechanismFileException extends UserInputException {
 
     private static final long serialVersionUID = 1L;
 
     private final transient Path file;
-    private final int line;
-    private final int column;
-    private final String problem;
 
     /**
      * Creates the exception.
@@ -28,11 +26,8 @@ public final class MechanismFileException extends Exception {
      * @param cause   the underlying exception, or null
      */
     public MechanismFileException(Path file, int line, int column, String problem, Throwable cause) {
-        super(format(file, line, column, LoadProblem.printable(problem)), cause);
+        super(String.valueOf(file), line, column, null, problem, null, cause);
         this.file = file;
-        this.line = Math.max(0, line);
-        this.column = Math.max(0, column);
-        this.problem = LoadProblem.printable(problem);
     }
 
     /**
@@ -42,43 +37,5 @@ public final class MechanismFileException extends Exception {
      */
     public Path file() {
         return file;
-    }
-
-    /**
-     * The 1-based line of the problem.
-     *
-     * @return the line, or 0 when the problem has no place in the file
-     */
-    public int line() {
-        return line;
-    }
-
-    /**
-     * The 1-based column of the problem.
-     *
-     * @return the column, or 0 when unknown
-     */
-    public int column() {
-        return column;
-    }
-
-    /**
-     * What is wrong, without the file and position.
-     *
-     * @return the problem text (control characters escaped)
-     */
-    public String problem() {
-        return problem;
-    }
-
-    private static String format(Path file, int line, int column, String problem) {
-        final StringBuilder b = new StringBuilder(String.valueOf(file));
-        if (line > 0) {
-            b.append(':').append(line);
-            if (column > 0) {
-                b.append(':').append(column);
-            }
-        }
-        return b.append(": ").append(problem).toString();
     }
 }

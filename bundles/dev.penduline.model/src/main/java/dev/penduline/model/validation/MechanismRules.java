@@ -10,6 +10,7 @@ import dev.penduline.model.PendulinePackage.Literals;
 import dev.penduline.model.TestSession;
 import dev.penduline.model.adapt.MechanismAdapter;
 import dev.penduline.physics.inertia.PivotInertia;
+import dev.penduline.physics.InvalidValueException;
 
 /** The rules of the mechanism as a whole: gravity, axis, identifiers, and the inertia engine's checks. */
 final class MechanismRules {
@@ -29,7 +30,7 @@ final class MechanismRules {
         boolean axisUsable = true;
         try {
             MechanismAdapter.gravityDirection(m);
-        } catch (IllegalArgumentException e) {
+        } catch (InvalidValueException e) {
             axisUsable = false;
             out.error(MechanismRule.AXIS, m, Literals.MECHANISM__AXIS_DIRECTION_X, who + ": " + e.getMessage());
         }
@@ -58,7 +59,7 @@ final class MechanismRules {
         try {
             parts = MechanismAdapter.parts(m);
             engine = MechanismAdapter.pivotInertia(m);
-        } catch (IllegalArgumentException e) {
+        } catch (InvalidValueException e) {
             return;
         }
         if (parts.isEmpty()) {

@@ -12,6 +12,7 @@ import dev.penduline.model.TensorReference;
 import dev.penduline.model.adapt.MechanismAdapter;
 import dev.penduline.physics.inertia.GivenTensor;
 import dev.penduline.physics.inertia.TensorCheck;
+import dev.penduline.physics.InvalidValueException;
 
 /** The rules of one part. */
 final class PartRules {
@@ -117,7 +118,7 @@ final class PartRules {
                             + " centroid " + v + " (are the mass and centroid those of this tensor?)");
                 }
             }
-        } catch (IllegalArgumentException e) {
+        } catch (InvalidValueException e) {
             // Reported by the other rules of this part.
         }
     }

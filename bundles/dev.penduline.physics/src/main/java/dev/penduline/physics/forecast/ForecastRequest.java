@@ -1,5 +1,7 @@
 package dev.penduline.physics.forecast;
 
+import dev.penduline.physics.InvalidValueException;
+
 /**
  * What to forecast: the release and the questions asked about the swing that follows.
  *
@@ -20,19 +22,19 @@ public record ForecastRequest(double releaseAngle, double releaseVelocity, doubl
      */
     public ForecastRequest {
         if (!Double.isFinite(releaseAngle)) {
-            throw new IllegalArgumentException("releaseAngle must be finite, got " + releaseAngle);
+            throw new InvalidValueException("releaseAngle must be finite, got " + releaseAngle);
         }
         if (!Double.isFinite(releaseVelocity)) {
-            throw new IllegalArgumentException("releaseVelocity must be finite, got " + releaseVelocity);
+            throw new InvalidValueException("releaseVelocity must be finite, got " + releaseVelocity);
         }
         if (!(band > 0) || Double.isInfinite(band)) {
-            throw new IllegalArgumentException("band must be a finite angle > 0 rad, got " + band);
+            throw new InvalidValueException("band must be a finite angle > 0 rad, got " + band);
         }
         if (Double.isInfinite(passAngle)) {
-            throw new IllegalArgumentException("passAngle must be finite or NaN, got " + passAngle);
+            throw new InvalidValueException("passAngle must be finite or NaN, got " + passAngle);
         }
         if (!Double.isNaN(radius) && (!(radius >= 0) || Double.isInfinite(radius))) {
-            throw new IllegalArgumentException("radius must be a finite distance >= 0 m or NaN, got " + radius);
+            throw new InvalidValueException("radius must be a finite distance >= 0 m or NaN, got " + radius);
         }
     }
 

@@ -10,6 +10,7 @@ import dev.penduline.physics.MechanismProperties;
 import dev.penduline.physics.motion.SwingRun;
 import dev.penduline.physics.motion.SwingSimulator;
 import dev.penduline.physics.motion.TurningPoint;
+import dev.penduline.physics.InvalidValueException;
 
 /**
  * Forecasts the swing after a release by simulating it: first for {@link #FIRST_PERIODS}
@@ -46,7 +47,7 @@ public final class Forecaster {
     public Forecaster(SwingSimulator simulator) {
         this.simulator = simulator;
         if (!(simulator.mechanism().gravityStiffness() > 0)) {
-            throw new IllegalArgumentException("the centroid lies on the pivot axis (or gravity acts along it): "
+            throw new InvalidValueException("the centroid lies on the pivot axis (or gravity acts along it): "
                     + "there is no restoring torque and no swing to forecast");
         }
     }

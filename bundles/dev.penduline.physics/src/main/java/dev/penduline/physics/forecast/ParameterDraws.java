@@ -1,10 +1,13 @@
 package dev.penduline.physics.forecast;
 
+import org.hipparchus.exception.MathIllegalArgumentException;
 import org.hipparchus.linear.Array2DRowRealMatrix;
 import org.hipparchus.linear.RealMatrix;
 import org.hipparchus.random.CorrelatedRandomVectorGenerator;
 import org.hipparchus.random.GaussianRandomGenerator;
 import org.hipparchus.random.Well19937c;
+
+import dev.penduline.physics.InvalidValueException;
 
 /**
  * Parameter sets drawn from a multivariate normal distribution with given means, standard
@@ -44,7 +47,7 @@ public final class ParameterDraws {
         double largest = 0;
         for (int i = 0; i < k; i++) {
             if (!(sigma[i] >= 0) || Double.isInfinite(sigma[i]) || !Double.isFinite(mean[i])) {
-                throw new IllegalArgumentException("parameter " + i + ": mean " + mean[i] + ", sigma " + sigma[i]
+                throw new InvalidValueException("parameter " + i + ": mean " + mean[i] + ", sigma " + sigma[i]
                         + " (finite values and sigma >= 0 needed)");
             }
             if (correlation[i].length != k) {
@@ -54,7 +57,7 @@ public final class ParameterDraws {
             for (int j = 0; j < k; j++) {
                 final double r = i == j ? 1 : correlation[i][j];
                 if (!(Math.abs(r) <= 1 + CORRELATION_SLACK) || Math.abs(r - correlation[j][i]) > CORRELATION_SLACK) {
-                    throw new IllegalArgumentException("correlation[" + i + "][" + j + "] = " + r
+                    throw new InvalidValueException("correlation[" + i + "][" + j + "] = " + r
                             + ": a correlation matrix is symmetric with entries in [-1, 1]");
                 }
                 cov[i][j] = Math.max(-1, Math.min(1, r)) * sigma[i] * sigma[j];
@@ -69,8 +72,14 @@ public final class ParameterDraws {
             return out;
         }
         final RealMatrix covariance = new Array2DRowRealMatrix(cov, false);
-        final CorrelatedRandomVectorGenerator generator = new CorrelatedRandomVectorGenerator(mean, covariance,
-                RANK_THRESHOLD * largest, new GaussianRandomGenerator(new Well19937c(seed)));
+        final CorrelatedRandomVectorGenerator generator;
+        try {
+            generator = new CorrelatedRandomVectorGenerator(mean, covariance, RANK_THRESHOLD * largest,
+                    new GaussianRandomGenerator(new Well19937c(seed)));
+        } catch (MathIllegalArgumentException e) {
+            throw new InvalidValueException("the correlations are not those of any set of parameters (the table is not"
+                    + " positive semi-definite)", e);
+        }
         for (int n = 0; n < count; n++) {
             out[n] = generator.nextVector();
         }

@@ -1,6 +1,7 @@
 package dev.penduline.physics.forecast;
 
 import dev.penduline.physics.MechanismProperties;
+import dev.penduline.physics.InvalidValueException;
 
 /**
  * The angles at which a body can stay at rest: where the gravity torque does not exceed the
@@ -23,7 +24,7 @@ public record RestBand(double lower, double upper, boolean anywhere) {
      */
     public static RestBand of(MechanismProperties mechanism, double staticTorque, boolean linearGravity) {
         if (!(staticTorque >= 0) || Double.isInfinite(staticTorque)) {
-            throw new IllegalArgumentException("staticTorque must be a finite torque >= 0 N·m, got " + staticTorque);
+            throw new InvalidValueException("staticTorque must be a finite torque >= 0 N·m, got " + staticTorque);
         }
         final double k = mechanism.gravityStiffness();
         if (linearGravity) {

@@ -1,5 +1,7 @@
 package dev.penduline.physics.identify;
 
+import dev.penduline.physics.InvalidValueException;
+
 /**
  * The numerical settings of a fit, all plain values so that they can be stored beside the
  * result. Start from {@link #defaults()} and change what you need with the {@code withX}
@@ -59,7 +61,7 @@ public record FitSettings(int maxIterations, int maxEvaluations, double costTole
 
     private static void require(boolean ok, String name, double value, String range) {
         if (!ok) {
-            throw new IllegalArgumentException(name + " must be " + range + ", got " + value);
+            throw new InvalidValueException(name + " must be " + range + ", got " + value);
         }
     }
 

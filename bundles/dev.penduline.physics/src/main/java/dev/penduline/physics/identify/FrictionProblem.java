@@ -9,6 +9,7 @@ import java.util.Set;
 
 import dev.penduline.physics.MechanismProperties;
 import dev.penduline.physics.motion.FrictionTorques;
+import dev.penduline.physics.InvalidValueException;
 
 /**
  * What to identify: the mechanism as calculated, one or more recorded releases, the friction
@@ -38,19 +39,19 @@ public record FrictionProblem(MechanismProperties mechanism, List<ReleaseSession
         Objects.requireNonNull(terms, "terms");
         Objects.requireNonNull(start, "start");
         if (sessions.isEmpty()) {
-            throw new IllegalArgumentException("at least one session is needed");
+            throw new InvalidValueException("at least one session is needed");
         }
         final Set<String> names = new HashSet<>();
         for (ReleaseSession s : sessions) {
             if (!names.add(Objects.requireNonNull(s, "session").name())) {
-                throw new IllegalArgumentException("two sessions are named '" + s.name() + "'");
+                throw new InvalidValueException("two sessions are named '" + s.name() + "'");
             }
         }
         if (terms.isEmpty()) {
-            throw new IllegalArgumentException("at least one friction term must be fitted");
+            throw new InvalidValueException("at least one friction term must be fitted");
         }
         if (!(mechanism.gravityStiffness() > 0)) {
-            throw new IllegalArgumentException("the mechanism has no gravity stiffness (m g cos α Lc = "
+            throw new InvalidValueException("the mechanism has no gravity stiffness (m g cos α Lc = "
                     + mechanism.gravityStiffness() + " N·m/rad): a balanced body does not swing");
         }
         sessions = List.copyOf(sessions);

@@ -3,6 +3,8 @@ package dev.penduline.physics.identify;
 import java.util.Arrays;
 import java.util.Objects;
 
+import dev.penduline.physics.InvalidValueException;
+
 /**
  * One recorded release of the mechanism: the measured angle against time, and starting values
  * for the release angle, release instant and sensor offset.
@@ -32,7 +34,7 @@ public record ReleaseSession(String name, double[] times, double[] angles, Sessi
         Objects.requireNonNull(angles, "angles of session " + name);
         Objects.requireNonNull(guess, "guess of session " + name);
         if (name.isBlank()) {
-            throw new IllegalArgumentException("session name must not be blank");
+            throw new InvalidValueException("session name must not be blank");
         }
         times = times.clone();
         angles = angles.clone();
@@ -41,21 +43,21 @@ public record ReleaseSession(String name, double[] times, double[] angles, Sessi
                     + angles.length + " angles");
         }
         if (times.length < MIN_SAMPLES) {
-            throw new IllegalArgumentException("session " + name + ": " + times.length
+            throw new InvalidValueException("session " + name + ": " + times.length
                     + " samples, at least " + MIN_SAMPLES + " are needed");
         }
         for (int i = 0; i < times.length; i++) {
             if (!Double.isFinite(times[i]) || (i > 0 && !(times[i] > times[i - 1]))) {
-                throw new IllegalArgumentException("session " + name + ": times[" + i + "] = " + times[i]
+                throw new InvalidValueException("session " + name + ": times[" + i + "] = " + times[i]
                         + " s; times must be finite and strictly increasing");
             }
             if (!Double.isFinite(angles[i])) {
-                throw new IllegalArgumentException("session " + name + ": angles[" + i + "] = " + angles[i]
+                throw new InvalidValueException("session " + name + ": angles[" + i + "] = " + angles[i]
                         + " rad is not a finite number");
             }
         }
         if (!(guess.releaseTime() < times[times.length - 1])) {
-            throw new IllegalArgumentException("session " + name + ": releaseTime guess " + guess.releaseTime()
+            throw new InvalidValueException("session " + name + ": releaseTime guess " + guess.releaseTime()
                     + " s is not before the last sample at " + times[times.length - 1] + " s");
         }
     }

@@ -1,5 +1,7 @@
 package dev.penduline.physics.identify;
 
+import dev.penduline.physics.InvalidValueException;
+
 /**
  * Starting values for the nuisance parameters of one release, usually from the release
  * detector and the zero-offset estimate of the swing analysis.
@@ -18,14 +20,14 @@ public record SessionGuess(double releaseAngle, double releaseTime, double offse
      */
     public SessionGuess {
         if (!Double.isFinite(releaseAngle) || releaseAngle == 0 || Math.abs(releaseAngle) >= Math.PI) {
-            throw new IllegalArgumentException("releaseAngle must be finite, non-zero and within ±π rad, got "
+            throw new InvalidValueException("releaseAngle must be finite, non-zero and within ±π rad, got "
                     + releaseAngle + " rad");
         }
         if (!Double.isFinite(releaseTime)) {
-            throw new IllegalArgumentException("releaseTime must be a finite number of seconds, got " + releaseTime);
+            throw new InvalidValueException("releaseTime must be a finite number of seconds, got " + releaseTime);
         }
         if (!Double.isFinite(offset)) {
-            throw new IllegalArgumentException("offset must be a finite number of radians, got " + offset);
+            throw new InvalidValueException("offset must be a finite number of radians, got " + offset);
         }
     }
 }

@@ -4,6 +4,8 @@ import java.util.Locale;
 
 import org.hipparchus.geometry.euclidean.threed.Vector3D;
 
+import dev.penduline.physics.InvalidValueException;
+
 /** One of the three axes of a shape's own frame, for shapes with a long or symmetry axis. */
 public enum Axis {
     /** The x axis. */
@@ -50,7 +52,7 @@ public enum Axis {
             case "x" -> X;
             case "y" -> Y;
             case "z" -> Z;
-            default -> throw new IllegalArgumentException("'" + text + "' is not an axis: use x, y or z");
+            default -> throw new InvalidValueException("'" + text + "' is not an axis: use x, y or z");
         };
     }
 }

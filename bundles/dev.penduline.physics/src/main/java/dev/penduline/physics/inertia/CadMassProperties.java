@@ -3,6 +3,8 @@ package dev.penduline.physics.inertia;
 import org.hipparchus.geometry.euclidean.threed.Rotation;
 import org.hipparchus.geometry.euclidean.threed.Vector3D;
 
+import dev.penduline.physics.InvalidValueException;
+
 /**
  * A mass-property report as CAD programs export it: mass, centroid and a full inertia tensor,
  * all in the report's output frame, the tensor taken either about the centroid or about the
@@ -26,10 +28,10 @@ public record CadMassProperties(double mass, Vector3D centroid, InertiaTensor te
      */
     public CadMassProperties {
         if (!(mass > 0) || !Double.isFinite(mass)) {
-            throw new IllegalArgumentException("mass must be positive, got " + mass + " kg");
+            throw new InvalidValueException("mass must be positive, got " + mass + " kg");
         }
         if (centroid == null || centroid.isNaN() || centroid.isInfinite()) {
-            throw new IllegalArgumentException("centroid must be a finite position, got " + centroid);
+            throw new InvalidValueException("centroid must be a finite position, got " + centroid);
         }
         if (tensor == null || reference == null) {
             throw new IllegalArgumentException("tensor and its reference point are required");

@@ -2,6 +2,8 @@ package dev.penduline.physics.inertia;
 
 import java.util.OptionalDouble;
 
+import dev.penduline.physics.InvalidValueException;
+
 /**
  * A solid cylinder ({@code innerRadius = 0}) or a thick-walled tube. About its axis
  * {@code m(ro² + ri²)/2}; about a diameter through its centroid {@code m(3(ro² + ri²) + h²)/12}.
@@ -24,7 +26,7 @@ public record Cylinder(double radius, double innerRadius, double length, Axis ax
         PartShape.requireDimension("cylinder inner radius", innerRadius);
         PartShape.requireDimension("cylinder length", length);
         if (innerRadius > 0 && innerRadius >= radius) {
-            throw new IllegalArgumentException("cylinder inner radius " + innerRadius
+            throw new InvalidValueException("cylinder inner radius " + innerRadius
                     + " m must be less than its radius " + radius + " m");
         }
         if (axis == null) {

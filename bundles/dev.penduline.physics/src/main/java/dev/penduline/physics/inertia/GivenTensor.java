@@ -2,6 +2,8 @@ package dev.penduline.physics.inertia;
 
 import java.util.OptionalDouble;
 
+import dev.penduline.physics.InvalidValueException;
+
 /**
  * A shape known only by its centroidal inertia tensor, as a CAD mass-property report gives it.
  *
@@ -24,7 +26,7 @@ public record GivenTensor(InertiaTensor tensor, double referenceMass) implements
             throw new IllegalArgumentException("inertia tensor is missing");
         }
         if (!(referenceMass > 0) || !Double.isFinite(referenceMass)) {
-            throw new IllegalArgumentException("tensor's reference mass must be positive, got " + referenceMass + " kg");
+            throw new InvalidValueException("tensor's reference mass must be positive, got " + referenceMass + " kg");
         }
     }
 

@@ -5,6 +5,7 @@ import java.util.List;
 import org.hipparchus.geometry.euclidean.threed.Vector3D;
 
 import dev.penduline.physics.MechanismProperties;
+import dev.penduline.physics.InvalidValueException;
 
 /**
  * The inertia engine's result for a parts list about one pivot axis.
@@ -43,7 +44,7 @@ public record InertiaSummary(double totalMass, Vector3D centroid, double centroi
      */
     public MechanismProperties toMechanismProperties() {
         if (Double.isNaN(equilibriumAngle)) {
-            throw new IllegalArgumentException("the pivot axis is parallel to gravity (tilt "
+            throw new InvalidValueException("the pivot axis is parallel to gravity (tilt "
                     + Math.toDegrees(axisTilt) + "°): gravity exerts no restoring torque about it");
         }
         return new MechanismProperties(totalMass, centroidDistance, pivotInertia, equilibriumAngle, gravity, axisTilt);

@@ -6,6 +6,8 @@ import org.hipparchus.linear.EigenDecompositionSymmetric;
 import org.hipparchus.linear.MatrixUtils;
 import org.hipparchus.linear.RealMatrix;
 
+import dev.penduline.physics.InvalidValueException;
+
 /**
  * A symmetric 3×3 mass-moment-of-inertia tensor (kg·m²), immutable.
  *
@@ -41,7 +43,7 @@ public record InertiaTensor(double xx, double yy, double zz, double xy, double x
         final String[] n = {"xx", "yy", "zz", "xy", "xz", "yz"};
         for (int i = 0; i < v.length; i++) {
             if (!Double.isFinite(v[i])) {
-                throw new IllegalArgumentException("inertia tensor component I" + n[i] + " must be finite, got " + v[i]);
+                throw new InvalidValueException("inertia tensor component I" + n[i] + " must be finite, got " + v[i]);
             }
         }
     }
@@ -112,7 +114,7 @@ public record InertiaTensor(double xx, double yy, double zz, double xy, double x
         final double slack = SYMMETRY_SLACK * scale;
         if (Math.abs(m[0][1] - m[1][0]) > slack || Math.abs(m[0][2] - m[2][0]) > slack
                 || Math.abs(m[1][2] - m[2][1]) > slack) {
-            throw new IllegalArgumentException("inertia tensor is not symmetric");
+            throw new InvalidValueException("inertia tensor is not symmetric");
         }
         return new InertiaTensor(m[0][0], m[1][1], m[2][2],
                 0.5 * (m[0][1] + m[1][0]), 0.5 * (m[0][2] + m[2][0]), 0.5 * (m[1][2] + m[2][1]));

@@ -5,6 +5,8 @@ import java.util.Objects;
 import org.hipparchus.geometry.euclidean.threed.Rotation;
 import org.hipparchus.geometry.euclidean.threed.Vector3D;
 
+import dev.penduline.physics.InvalidValueException;
+
 /**
  * One line of a parts list: a shape of a given mass placed in the mechanism frame.
  *
@@ -37,17 +39,17 @@ public record Part(String name, PartShape shape, double mass, Vector3D centroid,
             throw new IllegalArgumentException("part '" + name + "': shape is missing");
         }
         if (!(mass > 0) || !Double.isFinite(mass)) {
-            throw new IllegalArgumentException("part '" + name + "': mass must be positive and finite, got "
+            throw new InvalidValueException("part '" + name + "': mass must be positive and finite, got "
                     + mass + " kg (mark a hole as a cut-out instead of giving it negative mass)");
         }
         if (centroid == null || centroid.isNaN() || centroid.isInfinite()) {
-            throw new IllegalArgumentException("part '" + name + "': centroid must be a finite position, got " + centroid);
+            throw new InvalidValueException("part '" + name + "': centroid must be a finite position, got " + centroid);
         }
         if (orientation == null) {
             throw new IllegalArgumentException("part '" + name + "': orientation is missing");
         }
         if (quantity < 1) {
-            throw new IllegalArgumentException("part '" + name + "': quantity must be at least 1, got " + quantity);
+            throw new InvalidValueException("part '" + name + "': quantity must be at least 1, got " + quantity);
         }
         if (tolerance == null) {
             throw new IllegalArgumentException("part '" + name + "': tolerance is missing (use PartTolerance.NONE)");
@@ -79,9 +81,9 @@ public record Part(String name, PartShape shape, double mass, Vector3D centroid,
      */
     public static Part ofDensity(String name, PartShape shape, double density, Vector3D centroid) {
         if (!(density > 0) || !Double.isFinite(density)) {
-            throw new IllegalArgumentException("part '" + name + "': density must be positive, got " + density + " kg/m³");
+            throw new InvalidValueException("part '" + name + "': density must be positive, got " + density + " kg/m³");
         }
-        final double volume = shape.volume().orElseThrow(() -> new IllegalArgumentException("part '" + name
+        final double volume = shape.volume().orElseThrow(() -> new InvalidValueException("part '" + name
                 + "': a " + shape.kind() + " has no volume, so its mass cannot come from a density; give the mass"));
         return of(name, shape, density * volume, centroid);
     }

@@ -2,6 +2,8 @@ package dev.penduline.physics.inertia;
 
 import java.util.OptionalDouble;
 
+import dev.penduline.physics.InvalidValueException;
+
 /**
  * The geometry of a part, as far as its inertia goes: a standard handbook body or a tensor
  * exported by CAD. Dimensions are in metres, in the part's own frame (which the part's
@@ -43,7 +45,7 @@ public sealed interface PartShape permits PointMass, SlenderRod, Box, Cylinder, 
      */
     static void requireDimension(String name, double value) {
         if (!Double.isFinite(value) || value < 0) {
-            throw new IllegalArgumentException(name + " must be a finite length ≥ 0 m, got " + value);
+            throw new InvalidValueException(name + " must be a finite length ≥ 0 m, got " + value);
         }
     }
 }

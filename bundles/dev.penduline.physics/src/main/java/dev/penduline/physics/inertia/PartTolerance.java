@@ -1,5 +1,7 @@
 package dev.penduline.physics.inertia;
 
+import dev.penduline.physics.InvalidValueException;
+
 /**
  * Symmetric (±) tolerances of a part, carried as data for a later uncertainty estimate; the
  * inertia engine itself uses the nominal values.
@@ -19,10 +21,10 @@ public record PartTolerance(double mass, double dimension) {
      */
     public PartTolerance {
         if (!Double.isFinite(mass) || mass < 0) {
-            throw new IllegalArgumentException("mass tolerance must be a finite value ≥ 0 kg, got " + mass);
+            throw new InvalidValueException("mass tolerance must be a finite value ≥ 0 kg, got " + mass);
         }
         if (!Double.isFinite(dimension) || dimension < 0) {
-            throw new IllegalArgumentException("dimension tolerance must be a finite value ≥ 0 m, got " + dimension);
+            throw new InvalidValueException("dimension tolerance must be a finite value ≥ 0 m, got " + dimension);
         }
     }
 

@@ -2,6 +2,8 @@ package dev.penduline.physics.inertia;
 
 import org.hipparchus.geometry.euclidean.threed.Vector3D;
 
+import dev.penduline.physics.InvalidValueException;
+
 /**
  * The axis a mechanism turns about: a point on it and its direction, in the mechanism frame.
  *
@@ -21,10 +23,10 @@ public record PivotAxis(Vector3D point, Vector3D direction) {
      */
     public PivotAxis {
         if (point == null || point.isNaN() || point.isInfinite()) {
-            throw new IllegalArgumentException("pivot axis point must be a finite position, got " + point);
+            throw new InvalidValueException("pivot axis point must be a finite position, got " + point);
         }
         if (direction == null || direction.isNaN() || direction.isInfinite() || !(direction.getNorm() > 0)) {
-            throw new IllegalArgumentException("pivot axis direction must be a non-zero finite vector, got " + direction);
+            throw new InvalidValueException("pivot axis direction must be a non-zero finite vector, got " + direction);
         }
         direction = direction.normalize();
     }

@@ -8,6 +8,7 @@ import java.util.Optional;
 import org.hipparchus.geometry.euclidean.threed.Vector3D;
 
 import dev.penduline.physics.MechanismProperties;
+import dev.penduline.physics.InvalidValueException;
 
 /**
  * The inertia engine: reduces a parts list to mass, centroid and moment of inertia about a pivot
@@ -42,11 +43,11 @@ public record PivotInertia(PivotAxis axis, Vector3D gravityDirection, double gra
         }
         if (gravityDirection == null || gravityDirection.isNaN() || gravityDirection.isInfinite()
                 || !(gravityDirection.getNorm() > 0)) {
-            throw new IllegalArgumentException("gravity direction must be a non-zero vector, got " + gravityDirection);
+            throw new InvalidValueException("gravity direction must be a non-zero vector, got " + gravityDirection);
         }
         gravityDirection = gravityDirection.normalize();
         if (!(gravity > 0) || !Double.isFinite(gravity)) {
-            throw new IllegalArgumentException("gravity must be positive, got " + gravity + " m/s²");
+            throw new InvalidValueException("gravity must be positive, got " + gravity + " m/s²");
         }
     }
 
@@ -92,7 +93,7 @@ public record PivotInertia(PivotAxis axis, Vector3D gravityDirection, double gra
         final Totals t = totals(parts);
         final String fatal = fatalProblem(parts, t);
         if (fatal != null) {
-            throw new IllegalArgumentException(fatal);
+            throw new InvalidValueException(fatal);
         }
         return summary(parts, t);
     }

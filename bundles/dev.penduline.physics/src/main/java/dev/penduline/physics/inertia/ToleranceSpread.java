@@ -9,6 +9,8 @@ import org.hipparchus.random.RandomGenerator;
 import org.hipparchus.random.Well19937c;
 import org.hipparchus.stat.descriptive.rank.Percentile;
 
+import dev.penduline.physics.InvalidValueException;
+
 /**
  * How far the mechanism's mass, centroid distance, pivot inertia and small-angle period can move
  * within the parts' ± tolerances, by two methods side by side:
@@ -93,7 +95,7 @@ public final class ToleranceSpread {
      */
     public static Result of(PivotInertia engine, List<Part> parts, int samples, long seed) {
         if (samples < 2) {
-            throw new IllegalArgumentException("samples must be at least 2, got " + samples);
+            throw new InvalidValueException("samples must be at least 2, got " + samples);
         }
         final List<Input> inputs = inputs(parts);
         final double[] nominal = figures(engine, parts);
@@ -121,7 +123,7 @@ public final class ToleranceSpread {
             }
             try {
                 drawn.add(figures(engine, apply(parts, inputs, delta)));
-            } catch (IllegalArgumentException e) {
+            } catch (InvalidValueException e) {
                 failed++;
             }
         }

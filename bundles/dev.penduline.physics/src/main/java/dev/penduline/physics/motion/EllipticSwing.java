@@ -6,6 +6,7 @@ import org.hipparchus.special.elliptic.jacobi.JacobiEllipticBuilder;
 import org.hipparchus.special.elliptic.legendre.LegendreEllipticIntegral;
 
 import dev.penduline.physics.MechanismProperties;
+import dev.penduline.physics.InvalidValueException;
 
 /**
  * Closed-form undamped swing of any amplitude below π, released from rest.
@@ -37,11 +38,11 @@ public final class EllipticSwing {
      */
     public EllipticSwing(MechanismProperties mechanism, double theta0) {
         if (!(mechanism.gravityStiffness() > 0)) {
-            throw new IllegalArgumentException("the mechanism has no restoring torque: it does not swing");
+            throw new InvalidValueException("the mechanism has no restoring torque: it does not swing");
         }
         final double amplitude = Math.abs(theta0 - mechanism.equilibriumAngle());
         if (!(amplitude < Math.PI)) {
-            throw new IllegalArgumentException("amplitude |θ0 − θeq| must be below π rad, got "
+            throw new InvalidValueException("amplitude |θ0 − θeq| must be below π rad, got "
                     + amplitude + " rad: at π the body balances upside down and never returns");
         }
         this.equilibrium = mechanism.equilibriumAngle();

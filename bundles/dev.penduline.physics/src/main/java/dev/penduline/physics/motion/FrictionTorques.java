@@ -1,6 +1,7 @@
 package dev.penduline.physics.motion;
 
 import dev.penduline.physics.units.Unit;
+import dev.penduline.physics.InvalidValueException;
 
 /**
  * The friction and damping torques that oppose a swing, in SI units.
@@ -34,7 +35,7 @@ public record FrictionTorques(double viscous, double coulomb, double stiction, d
         requireNonNegative("stiction", stiction, Unit.NEWTON_METRE.symbol());
         requireNonNegative("drag", drag, Unit.N_M_S2_PER_RAD2.symbol());
         if (stiction != 0 && stiction < coulomb) {
-            throw new IllegalArgumentException("stiction " + stiction
+            throw new InvalidValueException("stiction " + stiction
                     + " N·m is below coulomb " + coulomb
                     + " N·m: use 0 for 'same as coulomb', or a value ≥ coulomb");
         }
@@ -130,7 +131,7 @@ public record FrictionTorques(double viscous, double coulomb, double stiction, d
 
     private static void requireNonNegative(String name, double value, String unit) {
         if (!Double.isFinite(value) || value < 0) {
-            throw new IllegalArgumentException(
+            throw new InvalidValueException(
                     name + " must be a finite number ≥ 0 " + unit + ", got " + value);
         }
     }

@@ -4,6 +4,7 @@ import java.util.ArrayList;
 import java.util.List;
 
 import dev.penduline.physics.MechanismProperties;
+import dev.penduline.physics.InvalidValueException;
 
 /**
  * Closed-form small-angle swing with Coulomb friction only, released from rest.
@@ -32,7 +33,7 @@ public final class LinearCoulombDecay {
     public LinearCoulombDecay(MechanismProperties mechanism, double coulomb, double stiction) {
         final double k = mechanism.gravityStiffness();
         if (!(k > 0)) {
-            throw new IllegalArgumentException("the mechanism has no restoring torque (m g cos α Lc = "
+            throw new InvalidValueException("the mechanism has no restoring torque (m g cos α Lc = "
                     + k + " N·m/rad): no oscillation to decay");
         }
         final FrictionTorques friction = new FrictionTorques(0, coulomb, stiction, 0);

@@ -1,6 +1,7 @@
 package dev.penduline.physics.motion;
 
 import dev.penduline.physics.MechanismProperties;
+import dev.penduline.physics.InvalidValueException;
 
 /**
  * Closed-form small-angle swing with viscous damping only:
@@ -28,11 +29,11 @@ public final class LinearViscousDecay {
     public LinearViscousDecay(MechanismProperties mechanism, double viscous) {
         final double k = mechanism.gravityStiffness();
         if (!(k > 0)) {
-            throw new IllegalArgumentException("the mechanism has no restoring torque (m g cos α Lc = "
+            throw new InvalidValueException("the mechanism has no restoring torque (m g cos α Lc = "
                     + k + " N·m/rad): no oscillation to decay");
         }
         if (!(viscous >= 0) || Double.isInfinite(viscous)) {
-            throw new IllegalArgumentException("viscous must be a finite number ≥ 0 N·m·s/rad, got " + viscous);
+            throw new InvalidValueException("viscous must be a finite number ≥ 0 N·m·s/rad, got " + viscous);
         }
         this.equilibrium = mechanism.equilibriumAngle();
         this.naturalFrequency = mechanism.naturalFrequency();

@@ -15,6 +15,8 @@ import org.hipparchus.ode.events.ODEEventHandler;
 import org.hipparchus.ode.nonstiff.DormandPrince853Integrator;
 import org.hipparchus.ode.sampling.ODEStepHandler;
 
+import dev.penduline.physics.InvalidValueException;
+
 /**
  * The event-driven integration of one swing: the single code path by which the simulator and
  * the identification's sensitivity integration obtain θ(t) and ω(t).
@@ -136,7 +138,7 @@ public final class SwingIntegration {
                 y[1] = 0;
                 turn(t, t - segmentStart, y[0], s);
                 if (++segments > MAX_SEGMENTS) {
-                    throw new IllegalStateException("more than " + MAX_SEGMENTS
+                    throw new InvalidValueException("more than " + MAX_SEGMENTS
                             + " reversals before t = " + t + " s: the applied torque makes the body chatter");
                 }
             }

@@ -1,6 +1,7 @@
 package dev.penduline.physics.motion;
 
 import dev.penduline.physics.MechanismProperties;
+import dev.penduline.physics.InvalidValueException;
 
 /**
  * The torques of the equation of motion, reduced once per configuration to the few numbers the
@@ -38,7 +39,7 @@ final class SwingModel {
     SwingModel(double inertia, double stiffness, double equilibrium, double viscous, double coulomb,
             double stiction, double drag, AppliedTorque applied, double smoothingScale, boolean linearGravity) {
         if (!(inertia > 0)) {
-            throw new IllegalArgumentException(
+            throw new InvalidValueException(
                     "pivotInertia must be positive to simulate a swing, got " + inertia + " kg·m²");
         }
         this.inertia = inertia;

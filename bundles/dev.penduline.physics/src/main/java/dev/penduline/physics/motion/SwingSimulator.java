@@ -4,6 +4,7 @@ import java.util.Objects;
 import java.util.function.DoubleUnaryOperator;
 
 import dev.penduline.physics.MechanismProperties;
+import dev.penduline.physics.InvalidValueException;
 
 /**
  * Simulates the swing of a pivoted body with any mix of viscous, Coulomb, stiction and
@@ -197,14 +198,14 @@ public final class SwingSimulator {
      */
     public SwingRun simulate(double theta0, double omega0, double duration, double sampleRate) {
         if (!(duration > 0) || Double.isInfinite(duration)) {
-            throw new IllegalArgumentException("duration must be a finite number > 0 s, got " + duration);
+            throw new InvalidValueException("duration must be a finite number > 0 s, got " + duration);
         }
         if (!(sampleRate > 0) || Double.isInfinite(sampleRate)) {
-            throw new IllegalArgumentException("sampleRate must be a finite number > 0 Hz, got " + sampleRate);
+            throw new InvalidValueException("sampleRate must be a finite number > 0 Hz, got " + sampleRate);
         }
         final double count = Math.floor(duration * sampleRate * (1 + 1e-12));
         if (count >= Integer.MAX_VALUE - 1) {
-            throw new IllegalArgumentException("duration × sampleRate = " + count + " samples is too many");
+            throw new InvalidValueException("duration × sampleRate = " + count + " samples is too many");
         }
         final double[] times = new double[(int) count + 1];
         for (int i = 0; i < times.length; i++) {
@@ -224,13 +225,13 @@ public final class SwingSimulator {
     public SwingRun simulate(double theta0, double omega0, double[] sampleTimes) {
         Objects.requireNonNull(sampleTimes, "sampleTimes");
         if (sampleTimes.length == 0) {
-            throw new IllegalArgumentException("sampleTimes must not be empty");
+            throw new InvalidValueException("sampleTimes must not be empty");
         }
         double previous = 0;
         for (int i = 0; i < sampleTimes.length; i++) {
             final double t = sampleTimes[i];
             if (!Double.isFinite(t) || t < previous) {
-                throw new IllegalArgumentException("sampleTimes[" + i + "] = " + t
+                throw new InvalidValueException("sampleTimes[" + i + "] = " + t
                         + " s: times must be finite, ≥ 0 and non-decreasing");
             }
             previous = t;
@@ -240,10 +241,10 @@ public final class SwingSimulator {
 
     private SwingRun run(double theta0, double omega0, double[] times) {
         if (!Double.isFinite(theta0)) {
-            throw new IllegalArgumentException("theta0 must be a finite number, got " + theta0 + " rad");
+            throw new InvalidValueException("theta0 must be a finite number, got " + theta0 + " rad");
         }
         if (!Double.isFinite(omega0)) {
-            throw new IllegalArgumentException("omega0 must be a finite number, got " + omega0 + " rad/s");
+            throw new InvalidValueException("omega0 must be a finite number, got " + omega0 + " rad/s");
         }
         final SwingSampler sampler = new SwingSampler(times.length);
         sampler.start(times, 0, times.length);

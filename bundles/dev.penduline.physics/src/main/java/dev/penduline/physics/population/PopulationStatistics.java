@@ -7,6 +7,8 @@ import org.hipparchus.stat.descriptive.moment.Mean;
 import org.hipparchus.stat.descriptive.rank.Percentile;
 import org.hipparchus.stat.descriptive.rank.Percentile.EstimationType;
 
+import dev.penduline.physics.InvalidValueException;
+
 /**
  * The statistics of one quantity over a population of units, taken in the units' order.
  *
@@ -69,11 +71,11 @@ public record PopulationStatistics(int count, double median, double mad, double 
      */
     public static PopulationStatistics of(double[] values) {
         if (values.length == 0) {
-            throw new IllegalArgumentException("no values");
+            throw new InvalidValueException("no values");
         }
         for (double v : values) {
             if (!Double.isFinite(v)) {
-                throw new IllegalArgumentException("a value is not finite: " + v);
+                throw new InvalidValueException("a value is not finite: " + v);
             }
         }
         double median = percentile(values, 50);

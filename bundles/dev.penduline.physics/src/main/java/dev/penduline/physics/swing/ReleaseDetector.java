@@ -1,5 +1,7 @@
 package dev.penduline.physics.swing;
 
+import dev.penduline.physics.InvalidValueException;
+
 /**
  * Finds the instant a body held at rest is let go.
  *
@@ -67,7 +69,7 @@ public final class ReleaseDetector {
      */
     public Release detect(double[] t, double[] theta) {
         if (t.length != theta.length || t.length < 10) {
-            throw new IllegalArgumentException("need at least 10 samples with one time each, got "
+            throw new InvalidValueException("need at least 10 samples with one time each, got "
                     + t.length + " times and " + theta.length + " angles");
         }
         final int n = t.length;
@@ -91,7 +93,7 @@ public final class ReleaseDetector {
                 departure = firstDeparture(theta, level, threshold * sigma + q);
             }
             if (departure < 0 || range == 0) {
-                throw new IllegalArgumentException("the angle never leaves its starting level by more than "
+                throw new InvalidValueException("the angle never leaves its starting level by more than "
                         + RobustStatistics.degrees(threshold * sigma + q) + ": the record shows no release");
             }
             if (departure < 3) {

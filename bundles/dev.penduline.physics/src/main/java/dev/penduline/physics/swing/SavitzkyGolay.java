@@ -1,5 +1,7 @@
 package dev.penduline.physics.swing;
 
+import dev.penduline.physics.InvalidValueException;
+
 /**
  * Savitzky–Golay smoothing and differentiation: at each sample a polynomial of low order is
  * fitted by least squares to the samples of a window around it, and its value or slope there is
@@ -120,7 +122,7 @@ public record SavitzkyGolay(int halfWidth, int order) {
         final int n = t.length;
         final int width = 2 * halfWidth + 1;
         if (n < width) {
-            throw new IllegalArgumentException("the record has " + n + " samples, fewer than the window of " + width);
+            throw new InvalidValueException("the record has " + n + " samples, fewer than the window of " + width);
         }
         final double step = RobustStatistics.medianStep(t);
         final double scale = step * halfWidth;

@@ -10,6 +10,7 @@ import org.hipparchus.special.elliptic.legendre.LegendreEllipticIntegral;
 
 import dev.penduline.physics.MechanismProperties;
 import dev.penduline.physics.motion.EllipticSwing;
+import dev.penduline.physics.InvalidValueException;
 
 /**
  * Turns a free-release record (times and angles in SI) into a prepared swing and its decay
@@ -83,7 +84,7 @@ public final class SwingAnalyzer {
         final double[] tt = Arrays.copyOfRange(t, release.index(), t.length);
         final double[] th = Arrays.copyOfRange(theta, release.index(), theta.length);
         if (tt.length < 10) {
-            throw new IllegalArgumentException("only " + tt.length + " samples after the release at "
+            throw new InvalidValueException("only " + tt.length + " samples after the release at "
                     + release.time() + " s: too short to analyse");
         }
         final SwingOutline outline = TurningPointFinder.find(tt, th, release);
@@ -263,7 +264,7 @@ public final class SwingAnalyzer {
         final double first = points.get(0).amplitude();
         final double last = points.get(points.size() - 1).amplitude();
         if (Double.isFinite(first) && Double.isFinite(last) && last > 1.25 * first && last - first > 8 * noise) {
-            throw new IllegalArgumentException("the swing grows instead of decaying (amplitude " + RobustStatistics.degrees(first)
+            throw new InvalidValueException("the swing grows instead of decaying (amplitude " + RobustStatistics.degrees(first)
                     + " at the first turning point, " + RobustStatistics.degrees(last) + " at the last): a free swing only loses "
                     + "energy, so this is not a free release (a driven body?) or the angle column is not the angle");
         }
@@ -278,18 +279,18 @@ public final class SwingAnalyzer {
         double max = Double.NEGATIVE_INFINITY;
         for (int i = 0; i < t.length; i++) {
             if (!Double.isFinite(t[i]) || !Double.isFinite(theta[i])) {
-                throw new IllegalArgumentException("sample " + i + " is not finite: t = " + t[i] + " s, θ = "
+                throw new InvalidValueException("sample " + i + " is not finite: t = " + t[i] + " s, θ = "
                         + theta[i] + " rad");
             }
             min = Math.min(min, theta[i]);
             max = Math.max(max, theta[i]);
             if (i > 0 && !(t[i] > t[i - 1])) {
-                throw new IllegalArgumentException("times must increase: sample " + i + " at " + t[i]
+                throw new InvalidValueException("times must increase: sample " + i + " at " + t[i]
                         + " s follows " + t[i - 1] + " s");
             }
         }
         if (max - min > 2 * Math.PI) {
-            throw new IllegalArgumentException("the angles span " + RobustStatistics.degrees(max - min) + ", more than a full turn: "
+            throw new InvalidValueException("the angles span " + RobustStatistics.degrees(max - min) + ", more than a full turn: "
                     + "a free swing spans less than 360° (twice its release angle at most); check the angle unit (degrees, "
                     + "radians or counts) and the counts per revolution");
         }

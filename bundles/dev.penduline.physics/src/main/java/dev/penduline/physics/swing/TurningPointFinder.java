@@ -4,6 +4,7 @@ import java.util.ArrayList;
 import java.util.List;
 
 import dev.penduline.physics.swing.MeasuredTurningPoint.Kind;
+import dev.penduline.physics.InvalidValueException;
 
 /**
  * Finds the turning points of a trimmed record, one per half-swing.
@@ -32,7 +33,7 @@ final class TurningPointFinder {
         double hysteresis = 1.5 * band + 0.002 * Math.abs(start - centre);
         List<Integer> crossings = crossings(theta, centre, hysteresis, start);
         if (crossings.isEmpty()) {
-            throw new IllegalArgumentException("the angle never swings through its centre (" + RobustStatistics.degrees(centre)
+            throw new InvalidValueException("the angle never swings through its centre (" + RobustStatistics.degrees(centre)
                     + ") by more than the noise band " + RobustStatistics.degrees(hysteresis) + ": no swing to analyse");
         }
         double period = period(t, crossings);

@@ -3,6 +3,8 @@ package dev.penduline.physics.swing;
 import java.util.Arrays;
 import java.util.List;
 
+import dev.penduline.physics.InvalidValueException;
+
 /**
  * Estimates the equilibrium reading from the turning points and, failing those, from a settled
  * tail.
@@ -59,7 +61,7 @@ final class ZeroOffsetEstimator {
                     "midpoint of the only half-swing, biased by half its decrement (the half-swing spans "
                             + RobustStatistics.degrees(2 * bias) + ")");
         }
-        throw new IllegalArgumentException("a single turning point and no settled tail: the equilibrium cannot"
+        throw new InvalidValueException("a single turning point and no settled tail: the equilibrium cannot"
                 + " be estimated from this record");
     }
 

@@ -5,6 +5,8 @@ import java.util.List;
 import java.util.Locale;
 import java.util.Optional;
 
+import dev.penduline.physics.InvalidValueException;
+
 /**
  * A unit of measurement: its display symbol, the suffix it carries in column names, the quantity
  * it measures and how many SI units one of it makes. The one place in Penduline where values
@@ -123,7 +125,7 @@ public record Unit(String symbol, String suffix, Quantity quantity, double siPer
      */
     public static Unit encoderCounts(double countsPerRevolution) {
         if (!(countsPerRevolution > 0) || !Double.isFinite(countsPerRevolution)) {
-            throw new IllegalArgumentException("counts per revolution must be positive, got " + countsPerRevolution);
+            throw new InvalidValueException("counts per revolution must be positive, got " + countsPerRevolution);
         }
         return new Unit("counts", "counts", Quantity.ANGLE, 2 * Math.PI / countsPerRevolution);
     }
@@ -190,7 +192,7 @@ public record Unit(String symbol, String suffix, Quantity quantity, double siPer
      */
     public static double convert(double value, Unit from, Unit to) {
         if (from.quantity != to.quantity) {
-            throw new IllegalArgumentException("cannot convert " + from.quantity.readableName() + " (" + from.symbol
+            throw new InvalidValueException("cannot convert " + from.quantity.readableName() + " (" + from.symbol
                     + ") to " + to.quantity.readableName() + " (" + to.symbol + ")");
         }
         return to.fromSi(from.toSi(value));

@@ -24,6 +24,8 @@ import dev.penduline.physics.inertia.TensorCheck;
 import dev.penduline.physics.inertia.ThinRing;
 import dev.penduline.records.PlainText;
 import dev.penduline.records.RecordFormatException;
+import dev.penduline.physics.InputMessage;
+import dev.penduline.physics.InvalidValueException;
 
 /** Turns one data line of a parts list into a {@link Part}. */
 final class PartLine {
@@ -43,16 +45,16 @@ final class PartLine {
     static Part toPart(PartsRow row, List<String> warnings) throws RecordFormatException {
         if (row.hasExtraCells()) {
             throw new RecordFormatException(row.file(), row.line(), null,
-                    "the line has more fields than the header; quote fields that contain commas");
+                    InputMessage.MORE_FIELDS_THAN_HEADER.format());
         }
         final String name = row.text(PartsColumn.NAME)
-                .orElseThrow(() -> row.error(PartsColumn.NAME, "empty: every part needs a name"));
+                .orElseThrow(() -> row.error(PartsColumn.NAME, InputMessage.EMPTY_PART_NAME.format()));
         final Optional<String> bad = PlainText.nameProblem(name);
         if (bad.isPresent()) {
             throw row.error(PartsColumn.NAME, bad.get());
         }
         final String typed = row.text(PartsColumn.SHAPE)
-                .orElseThrow(() -> row.error(PartsColumn.SHAPE, "empty: use one of " + String.join(", ", SHAPES)));
+                .orElseThrow(() -> row.error(PartsColumn.SHAPE, InputMessage.EMPTY_SHAPE.format(String.join(", ", SHAPES))));
         final String kind = typed.toLowerCase(Locale.ROOT);
         final String why = "by a " + kind;
         final Set<PartsColumn> used = EnumSet.noneOf(PartsColumn.class);
@@ -64,8 +66,8 @@ final class PartLine {
             case "sphere" -> new Sphere(positive(row, PartsColumn.RADIUS, why, used));
             case "ring" -> new ThinRing(positive(row, PartsColumn.RADIUS, why, used), axis(row, why, used));
             case "tensor" -> null;
-            default -> throw row.error(PartsColumn.SHAPE, "'" + typed + "' is not a shape: use one of "
-                    + String.join(", ", SHAPES));
+            default -> throw row.error(PartsColumn.SHAPE, InputMessage.NOT_A_SHAPE.format(typed,
+                    String.join(", ", SHAPES)));
         };
         for (PartsColumn c : GEOMETRY) {
             if (!used.contains(c) && row.isFilled(c) && !(shape == null && TENSOR.contains(c))) {
@@ -100,10 +102,10 @@ final class PartLine {
     private static Axis axis(PartsRow row, String why, Set<PartsColumn> used) throws RecordFormatException {
         used.add(PartsColumn.AXIS);
         final String t = row.text(PartsColumn.AXIS)
-                .orElseThrow(() -> row.error(PartsColumn.AXIS, "empty, but it is needed " + why + " (x, y or z)"));
+                .orElseThrow(() -> row.error(PartsColumn.AXIS, InputMessage.EMPTY_AXIS.format(why)));
         try {
             return Axis.parse(t);
-        } catch (IllegalArgumentException e) {
+        } catch (InvalidValueException e) {
             throw row.error(PartsColumn.AXIS, e.getMessage());
         }
     }
@@ -120,8 +122,8 @@ final class PartLine {
         used.add(PartsColumn.INNER_RADIUS);
         final double ri = row.nonNegative(PartsColumn.INNER_RADIUS);
         if (ri >= r) {
-            throw row.error(PartsColumn.INNER_RADIUS, "inner radius '" + row.text(PartsColumn.INNER_RADIUS).orElse("")
-                    + "' must be less than the radius '" + row.text(PartsColumn.RADIUS).orElse("") + "'");
+            throw row.error(PartsColumn.INNER_RADIUS, InputMessage.INNER_RADIUS_TOO_LARGE.format(
+                    row.text(PartsColumn.INNER_RADIUS).orElse(""), row.text(PartsColumn.RADIUS).orElse("")));
         }
         return new Cylinder(r, ri, length(row, why, used), axis(row, why, used));
     }
@@ -135,7 +137,7 @@ final class PartLine {
         final List<String> problems = TensorCheck.violations(t);
         if (!problems.isEmpty()) {
             throw new RecordFormatException(row.file(), row.line(), null,
-                    "the inertia tensor is not physical: " + String.join("; ", problems));
+                    InputMessage.TENSOR_NOT_PHYSICAL.format(String.join("; ", problems)));
         }
         return t;
     }
@@ -144,20 +146,20 @@ final class PartLine {
         final OptionalDouble mass = row.number(PartsColumn.MASS);
         final OptionalDouble density = row.number(PartsColumn.DENSITY);
         if (mass.isPresent() && density.isPresent()) {
-            throw row.error(PartsColumn.MASS, "give either the mass or the density ('"
-                    + row.headerName(PartsColumn.DENSITY) + "'), not both");
+            throw row.error(PartsColumn.MASS, InputMessage.MASS_AND_DENSITY.format(
+                    row.headerName(PartsColumn.DENSITY)));
         }
         if (mass.isPresent()) {
             row.requirePositive(PartsColumn.MASS, mass.getAsDouble());
             return mass.getAsDouble();
         }
         if (density.isEmpty()) {
-            throw row.error(PartsColumn.MASS, "empty: give the part's mass (or its density)");
+            throw row.error(PartsColumn.MASS, InputMessage.EMPTY_MASS.format());
         }
         row.requirePositive(PartsColumn.DENSITY, density.getAsDouble());
         if (shape == null || shape.volume().isEmpty()) {
-            throw row.error(PartsColumn.DENSITY, "a " + kind + " has no volume, so its mass cannot come from a"
-                    + " density; give '" + row.headerName(PartsColumn.MASS) + "' instead");
+            throw row.error(PartsColumn.DENSITY, InputMessage.NO_VOLUME_FOR_DENSITY.format(kind,
+                    row.headerName(PartsColumn.MASS)));
         }
         return density.getAsDouble() * shape.volume().getAsDouble();
     }
@@ -167,7 +169,7 @@ final class PartLine {
         return switch (t.toLowerCase(Locale.ROOT)) {
             case "true" -> true;
             case "false" -> false;
-            default -> throw row.error(PartsColumn.CUTOUT, "'" + t + "' is not true or false");
+            default -> throw row.error(PartsColumn.CUTOUT, InputMessage.NOT_TRUE_OR_FALSE.format(t));
         };
     }
 
@@ -181,6 +183,6 @@ final class PartLine {
         } catch (NumberFormatException e) {
             // reported below with the file, line and column
         }
-        throw row.error(PartsColumn.QUANTITY, "'" + t + "' is not a whole number from 1 to " + MAX_QUANTITY);
+        throw row.error(PartsColumn.QUANTITY, InputMessage.NOT_A_QUANTITY.format(t, MAX_QUANTITY));
     }
 }

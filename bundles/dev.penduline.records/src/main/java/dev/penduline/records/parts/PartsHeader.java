@@ -11,6 +11,7 @@ import dev.penduline.physics.units.SuffixedName;
 import dev.penduline.physics.units.Unit;
 import dev.penduline.records.PlainText;
 import dev.penduline.records.RecordFormatException;
+import dev.penduline.physics.InputMessage;
 
 /**
  * The header row of a parts list: which known column sits where, in which unit. Unknown columns
@@ -53,7 +54,7 @@ final class PartsHeader {
             final Slot previous = slots.put(column, slot);
             if (previous != null) {
                 throw new RecordFormatException(file, line, header,
-                        "gives the same value as column '" + previous.header() + "'; keep only one of them");
+                        InputMessage.SAME_VALUE_AS_COLUMN.format(previous.header()));
             }
         }
         requireColumns(slots, file, line);
@@ -89,7 +90,7 @@ final class PartsHeader {
             return new Slot(index, header, null);
         }
         if (bare != null) {
-            throw new RecordFormatException(file, line, header, "needs a unit suffix, e.g. '" + bare.canonicalName() + "'");
+            throw new RecordFormatException(file, line, header, InputMessage.NEEDS_UNIT_SUFFIX.format(bare.canonicalName()));
         }
         final Optional<SuffixedName> split = SuffixedName.parse(h);
         if (split.isPresent()) {
@@ -97,9 +98,9 @@ final class PartsHeader {
             final Unit unit = split.get().unit();
             if (c != null && !c.isText()) {
                 if (c.quantity() != unit.quantity()) {
-                    throw new RecordFormatException(file, line, header, unit.symbol() + " is a unit of "
-                            + unit.quantity().readableName() + " but " + c.base() + " is a "
-                            + c.quantity().readableName() + "; write e.g. '" + c.canonicalName() + "'");
+                    throw new RecordFormatException(file, line, header, InputMessage.UNIT_OF_OTHER_QUANTITY.format(
+                            unit.symbol(), unit.quantity().readableName(), c.base(), c.quantity().readableName(),
+                            c.canonicalName()));
                 }
                 return new Slot(index, header, unit);
             }
@@ -127,7 +128,7 @@ final class PartsHeader {
 
     private static RecordFormatException typo(String file, int line, String header, String intended) {
         return new RecordFormatException(file, line, header,
-                "is not a parts-list column; did you mean '" + intended + "'?");
+                InputMessage.NOT_A_PARTS_COLUMN.format(intended));
     }
 
     /**
@@ -173,8 +174,8 @@ final class PartsHeader {
             missing.add("'" + PartsColumn.MASS.canonicalName() + "' (or '" + PartsColumn.DENSITY.canonicalName() + "')");
         }
         if (!missing.isEmpty()) {
-            throw new RecordFormatException(file, line, null, "missing required column"
-                    + (missing.size() > 1 ? "s " : " ") + String.join(", ", missing));
+            throw new RecordFormatException(file, line, null, InputMessage.MISSING_COLUMNS.format(
+                    missing.size() > 1 ? "s" : "", String.join(", ", missing)));
         }
     }
 }

@@ -15,6 +15,7 @@ import dev.penduline.records.InputFiles;
 import dev.penduline.records.InputLimits;
 import dev.penduline.records.RecordFormatException;
 import dev.penduline.records.Utf8Text;
+import dev.penduline.physics.InputMessage;
 
 /**
  * Reads a parts list from a comma-separated file into {@link Part}s for the inertia engine.
@@ -121,15 +122,14 @@ public final class PartsListReader {
                 continue;
             }
             if (parts.size() >= InputLimits.MAX_PARTS) {
-                throw new RecordFormatException(fileName, lineNumber, null, "the list has more than " + InputLimits.MAX_PARTS
-                        + " parts, the most a parts list may have (README, \"Limits\"); give identical parts one line with a"
-                        + " quantity, or lump small parts into one");
+                throw new RecordFormatException(fileName, lineNumber, null, InputMessage.TOO_MANY_PARTS.format(
+                        InputLimits.MAX_PARTS));
             }
             final PartsRow row = new PartsRow(header, cells, fileName, lineNumber);
             parts.add(PartLine.toPart(row, warnings));
         }
         if (header == null) {
-            throw new RecordFormatException(fileName, 0, null, "the file has no header row (and no parts)");
+            throw new RecordFormatException(fileName, 0, null, InputMessage.NO_HEADER_ROW.format());
         }
         return new PartsList(fileName, parts, warnings);
     }

@@ -7,6 +7,7 @@ import java.util.OptionalDouble;
 import java.util.regex.Pattern;
 
 import dev.penduline.records.RecordFormatException;
+import dev.penduline.physics.InputMessage;
 
 /** One data line of a parts list, with its cells read through the header and converted to SI. */
 final class PartsRow {
@@ -67,13 +68,12 @@ final class PartsRow {
             return OptionalDouble.empty();
         }
         if (!NUMBER.matcher(t.get()).matches()) {
-            throw error(column, "'" + t.get() + "' is not a number");
+            throw error(column, InputMessage.CELL_NOT_A_NUMBER.format(t.get()));
         }
         final double v = header.slot(column).orElseThrow().unit().toSi(Double.parseDouble(t.get()));
         if (!Double.isFinite(v) || Math.abs(v) > column.maxMagnitude()) {
             String limit = String.format(Locale.ROOT, "%.0e", column.maxMagnitude()).replace("e+0", "e");
-            throw error(column, "'" + t.get() + "' is out of range: at most " + limit + " " + column.quantity().siSymbol()
-                    + " in size (is the unit right?)");
+            throw error(column, InputMessage.CELL_TOO_LARGE.format(t.get(), limit, column.quantity().siSymbol()));
         }
         return OptionalDouble.of(v);
     }
@@ -81,12 +81,12 @@ final class PartsRow {
     /** A number the shape needs. */
     double required(PartsColumn column, String why) throws RecordFormatException {
         if (header.slot(column).isEmpty()) {
-            throw new RecordFormatException(file, line, null, "column '" + column.canonicalName()
-                    + "' is needed " + why + ", but the file has no such column");
+            throw new RecordFormatException(file, line, null, InputMessage.COLUMN_NEEDED.format(
+                    column.canonicalName(), why));
         }
         final OptionalDouble v = number(column);
         if (v.isEmpty()) {
-            throw error(column, "empty, but it is needed " + why);
+            throw error(column, InputMessage.EMPTY_BUT_NEEDED.format(why));
         }
         return v.getAsDouble();
     }
@@ -100,7 +100,7 @@ final class PartsRow {
 
     void requirePositive(PartsColumn column, double si) throws RecordFormatException {
         if (!(si > 0)) {
-            throw error(column, "'" + text(column).orElse("") + "' must be greater than zero");
+            throw error(column, InputMessage.CELL_NOT_POSITIVE.format(text(column).orElse("")));
         }
     }
 
@@ -108,7 +108,7 @@ final class PartsRow {
     double nonNegative(PartsColumn column) throws RecordFormatException {
         final double v = number(column).orElse(0);
         if (v < 0) {
-            throw error(column, "'" + text(column).orElse("") + "' must not be negative");
+            throw error(column, InputMessage.CELL_NEGATIVE.format(text(column).orElse("")));
         }
         return v;
     }

@@ -1,5 +1,7 @@
 package dev.penduline.records.swing;
 
+import dev.penduline.physics.InvalidValueException;
+
 /**
  * A column of a delimited record, by its header name, by its 1-based position, or (once
  * resolved) by both.
@@ -17,11 +19,11 @@ public record ColumnChoice(String name, int index) {
      */
     public ColumnChoice {
         if ((name == null || name.isBlank()) && index < 1) {
-            throw new IllegalArgumentException("a column is chosen by a header name or a 1-based position ≥ 1, got "
+            throw new InvalidValueException("a column is chosen by a header name or a 1-based position ≥ 1, got "
                     + (name == null ? "no name" : "'" + name + "'") + " and position " + index);
         }
         if (index < 0) {
-            throw new IllegalArgumentException("column position must be ≥ 1 (1-based), got " + index);
+            throw new InvalidValueException("column position must be ≥ 1 (1-based), got " + index);
         }
     }
 
@@ -43,7 +45,7 @@ public record ColumnChoice(String name, int index) {
      */
     public static ColumnChoice byIndex(int oneBasedIndex) {
         if (oneBasedIndex < 1) {
-            throw new IllegalArgumentException("column position must be ≥ 1 (1-based), got " + oneBasedIndex);
+            throw new InvalidValueException("column position must be ≥ 1 (1-based), got " + oneBasedIndex);
         }
         return new ColumnChoice(null, oneBasedIndex);
     }

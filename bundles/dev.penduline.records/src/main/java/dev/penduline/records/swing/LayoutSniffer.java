@@ -13,6 +13,7 @@ import dev.penduline.physics.units.Unit;
 import dev.penduline.records.DelimitedLine;
 import dev.penduline.records.PlainText;
 import dev.penduline.records.RecordFormatException;
+import dev.penduline.physics.InputMessage;
 
 /**
  * Decides, from the first lines of a record, what the user did not say: delimiter, decimal
@@ -32,8 +33,7 @@ final class LayoutSniffer {
     private static final Pattern BRACKETED = Pattern.compile("(.*?)\\s*[\\(\\[]\\s*([^\\)\\]]+?)\\s*[\\)\\]]\\s*");
 
     /** Why a comma cannot be both the delimiter and the decimal separator. */
-    static final String DECIMAL_IS_DELIMITER = "the decimal separator ',' cannot also be the delimiter: a file with"
-            + " decimal commas separates its fields by semicolons or tabs (delimiter semicolon or tab)";
+    static final String DECIMAL_IS_DELIMITER = InputMessage.DECIMAL_IS_DELIMITER.format();
 
     private LayoutSniffer() {
     }
@@ -41,7 +41,7 @@ final class LayoutSniffer {
     static SwingRecordMapping decide(List<SampleLine> lines, SwingImportOptions o, String file, List<String> assumptions)
             throws RecordFormatException {
         if (lines.isEmpty()) {
-            throw new RecordFormatException(file, 0, null, "the file holds no data lines");
+            throw new RecordFormatException(file, 0, null, InputMessage.NO_DATA_LINES.format());
         }
         final char delimiter = o.delimiter() != null ? o.delimiter() : delimiter(lines, file, assumptions);
         final List<String> first = DelimitedLine.split(lines.get(0).text(), delimiter, file, lines.get(0).number());
@@ -67,13 +67,13 @@ final class LayoutSniffer {
         final ColumnChoice angle = column(o.angleColumn(), header ? first : null, ANGLE_NAMES, COUNT_NAMES, 2,
                 time.index(), "angle", file, headerLine, assumptions);
         if (time.index() == angle.index()) {
-            throw new RecordFormatException(file, headerLine, time.label(), "chosen as both the time and the angle column");
+            throw new RecordFormatException(file, headerLine, time.label(), InputMessage.BOTH_TIME_AND_ANGLE.format());
         }
         for (ColumnChoice c : List.of(time, angle)) {
             final Optional<String> bad = c.name() == null ? Optional.empty() : PlainText.nameProblem(c.name());
             if (bad.isPresent()) {
-                throw new RecordFormatException(file, headerLine, null, "the name of column " + c.index() + " " + bad.get()
-                        + ": fix the header in a copy of the record, or choose the columns by position");
+                throw new RecordFormatException(file, headerLine, null, InputMessage.BAD_COLUMN_NAME.format(c.index(),
+                        bad.get()));
             }
         }
         final Unit timeUnit = unit(o.timeUnit(), time, Quantity.TIME, Unit.SECOND, file, headerLine, assumptions);
@@ -94,8 +94,7 @@ final class LayoutSniffer {
         double cpr = Double.NaN;
         if (angleUnit.suffix().equals(Unit.ENCODER_COUNT.suffix())) {
             if (Double.isNaN(o.countsPerRevolution())) {
-                throw new RecordFormatException(file, headerLine, angle.label(), "the angle is in encoder counts: give"
-                        + " the counts per revolution (after quadrature decoding, e.g. 4096)");
+                throw new RecordFormatException(file, headerLine, angle.label(), InputMessage.COUNTS_NEED_CPR.format());
             }
             cpr = o.countsPerRevolution();
             angleUnit = Unit.encoderCounts(cpr);
@@ -123,8 +122,7 @@ final class LayoutSniffer {
                 return c;
             }
         }
-        throw new RecordFormatException(file, lines.get(0).number(), null, "cannot tell the delimiter: no comma,"
-                + " semicolon or tab appears the same number of times on each of the first lines; set the delimiter");
+        throw new RecordFormatException(file, lines.get(0).number(), null, InputMessage.UNKNOWN_DELIMITER.format());
     }
 
     private static char decimal(List<SampleLine> lines, char delimiter, List<String> assumptions) {
@@ -157,9 +155,8 @@ final class LayoutSniffer {
             String name = header.get(i).strip();
             for (int j = i + 1; j < header.size() && !name.isEmpty(); j++) {
                 if (header.get(j).strip().equalsIgnoreCase(name)) {
-                    throw new RecordFormatException(file, line, header.get(j).strip(), "columns " + (i + 1) + " and " + (j + 1)
-                            + " have the same name: rename one in a copy of the record, or choose the columns by "
-                            + "position (--time-column N, --angle-column N)");
+                    throw new RecordFormatException(file, line, header.get(j).strip(), InputMessage.SAME_COLUMN_NAME.format(i + 1,
+                            j + 1));
                 }
             }
         }
@@ -170,22 +167,22 @@ final class LayoutSniffer {
             throws RecordFormatException {
         if (given != null && given.name() != null) {
             if (header == null) {
-                throw new RecordFormatException(file, line, null, "the " + what + " column is chosen by the name '"
-                        + given.name() + "', but the file has no header row: choose it by position");
+                throw new RecordFormatException(file, line, null, InputMessage.COLUMN_BY_NAME_NO_HEADER.format(what,
+                        given.name()));
             }
             for (int i = 0; i < header.size(); i++) {
                 if (header.get(i).strip().equalsIgnoreCase(given.name().strip())) {
                     return new ColumnChoice(header.get(i), i + 1);
                 }
             }
-            throw new RecordFormatException(file, line, null, "no column named '" + given.name()
-                    + "'; the header has: " + String.join(", ", header));
+            throw new RecordFormatException(file, line, null, InputMessage.NO_COLUMN_NAMED.format(given.name(),
+                    String.join(", ", header)));
         }
         if (given != null) {
             final int width = header != null ? header.size() : Integer.MAX_VALUE;
             if (given.index() > width) {
-                throw new RecordFormatException(file, line, null, "the " + what + " column is number " + given.index()
-                        + ", but the header has only " + width + " columns");
+                throw new RecordFormatException(file, line, null, InputMessage.COLUMN_NUMBER_TOO_HIGH.format(what,
+                        given.index(), width));
             }
             return new ColumnChoice(header != null ? header.get(given.index() - 1) : null, given.index());
         }
@@ -215,8 +212,8 @@ final class LayoutSniffer {
         final Optional<Unit> named = headerUnit(column);
         if (named.isPresent()) {
             if (named.get().quantity() != quantity) {
-                throw new RecordFormatException(file, line, column.label(), "its unit '" + named.get().symbol()
-                        + "' is not a unit of " + quantity.readableName());
+                throw new RecordFormatException(file, line, column.label(), InputMessage.NOT_A_UNIT_OF.format(
+                        named.get().symbol(), quantity.readableName()));
             }
             assumptions.add(quantity.readableName() + " in " + named.get().symbol() + " (from the header '"
                     + column.label() + "')");

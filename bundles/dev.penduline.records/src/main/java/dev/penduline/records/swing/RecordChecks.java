@@ -5,6 +5,7 @@ import java.util.List;
 
 import dev.penduline.physics.units.Unit;
 import dev.penduline.records.RecordFormatException;
+import dev.penduline.physics.InputMessage;
 
 /** Whole-record checks after the streaming pass: size, motion, gaps, plausibility of the step. */
 final class RecordChecks {
@@ -20,8 +21,8 @@ final class RecordChecks {
             List<String> assumptions, List<String> warnings) throws RecordFormatException {
         final int n = s.size();
         if (n < o.minimumSamples()) {
-            throw new RecordFormatException(file, 0, null, "only " + n + " sample" + (n == 1 ? "" : "s")
-                    + "; a swing record needs at least " + o.minimumSamples());
+            throw new RecordFormatException(file, 0, null, InputMessage.TOO_FEW_SAMPLES.format(n, n == 1 ? "" : "s",
+                    o.minimumSamples()));
         }
         final double[] angles = s.angles();
         double min = angles[0];
@@ -31,9 +32,8 @@ final class RecordChecks {
             max = Math.max(max, a);
         }
         if (max - min < o.minimumMotion()) {
-            throw new RecordFormatException(file, 0, mapping.angleColumn().name(), "the angle never moves: it stays"
-                    + " within " + SwingRecordReader.format(mapping.angleUnit().fromSi(max - min)) + " "
-                    + mapping.angleUnit().symbol() + " over all " + n + " samples (is it the right column?)");
+            throw new RecordFormatException(file, 0, mapping.angleColumn().name(), InputMessage.ANGLE_NEVER_MOVES.format(
+                    SwingRecordReader.format(mapping.angleUnit().fromSi(max - min)), mapping.angleUnit().symbol(), n));
         }
         final double[] steps = new double[n - 1];
         for (int i = 1; i < n; i++) {
@@ -58,9 +58,8 @@ final class RecordChecks {
             warnings.add(file + ": " + (gaps - MAX_GAP_WARNINGS) + " more gaps not listed");
         }
         if (!(median >= MIN_STEP_S)) {
-            throw new RecordFormatException(file, 0, mapping.timeColumn().name(), "the median time step is "
-                    + SwingRecordReader.format(median) + " s, faster than any swing-test sampling (1 MHz at most, common "
-                    + "practice): check the time unit (--time-unit s, ms or us)");
+            throw new RecordFormatException(file, 0, mapping.timeColumn().name(), InputMessage.TIME_STEP_TOO_SHORT.format(
+                    SwingRecordReader.format(median)));
         }
         if (median > 0.5 && mapping.timeUnit().equals(Unit.SECOND)) {
             warnings.add(file + ": the median step is " + SwingRecordReader.format(median)

@@ -6,6 +6,7 @@ import dev.penduline.physics.units.Unit;
 import dev.penduline.records.DelimitedLine;
 import dev.penduline.records.InputLimits;
 import dev.penduline.records.RecordFormatException;
+import dev.penduline.physics.InputMessage;
 
 /** Reads the time and angle of one data line, converts them to SI and checks the time order. */
 final class RowParser {
@@ -55,40 +56,36 @@ final class RowParser {
         final double theta = angleUnit.toSi(rawAngle);
         if (!Double.isFinite(t) || !Double.isFinite(theta)) {
             throw new RecordFormatException(file, number, Double.isFinite(t) ? angleLabel : timeLabel,
-                    "the value is out of range");
+                    InputMessage.VALUE_OUT_OF_RANGE.format());
         }
         if (out.size() > 0) {
             final double previous = out.lastTime();
             if (t == previous) {
-                throw new RecordFormatException(file, number, timeLabel, "duplicate timestamp: the same time as line "
-                        + out.lastLine() + " (" + SwingRecordReader.format(rawTime) + " " + timeUnit.symbol()
-                        + "); remove the repeated sample");
+                throw new RecordFormatException(file, number, timeLabel, InputMessage.DUPLICATE_TIMESTAMP.format(
+                        out.lastLine(), SwingRecordReader.format(rawTime), timeUnit.symbol()));
             }
             if (t < previous) {
-                throw new RecordFormatException(file, number, timeLabel, "time goes backwards: "
-                        + SwingRecordReader.format(rawTime) + " " + timeUnit.symbol() + " comes after "
-                        + SwingRecordReader.format(timeUnit.fromSi(previous)) + " " + timeUnit.symbol() + " on line "
-                        + out.lastLine() + "; samples must be in time order");
+                throw new RecordFormatException(file, number, timeLabel, InputMessage.TIME_GOES_BACKWARDS.format(
+                        SwingRecordReader.format(rawTime), timeUnit.symbol(), SwingRecordReader.format(timeUnit.fromSi(previous)),
+                        timeUnit.symbol(), out.lastLine()));
             }
         }
         if (out.size() >= InputLimits.MAX_RECORD_SAMPLES) {
-            throw new RecordFormatException(file, number, null, "the record has more than " + InputLimits.MAX_RECORD_SAMPLES
-                    + " samples, the most a record may have (README, \"Limits\"); it was not read further. Split it into"
-                    + " several records, or record at a lower rate");
+            throw new RecordFormatException(file, number, null, InputMessage.TOO_MANY_SAMPLES.format(
+                    InputLimits.MAX_RECORD_SAMPLES));
         }
         out.add(t, theta, number);
     }
 
     private void requireWidth(int fields, int number) throws RecordFormatException {
         if (headerWidth > 0 && fields > headerWidth) {
-            throw new RecordFormatException(file, number, null, "the line has " + fields + " fields but the header has "
-                    + headerWidth + (decimal == '.' && delimiter == ',' ? " (a decimal comma in a comma-separated file?)"
-                            : ""));
+            throw new RecordFormatException(file, number, null, InputMessage.FIELD_COUNT_MISMATCH.format(fields,
+                    headerWidth, decimal == '.' && delimiter == ',' ? " (a decimal comma in a comma-separated file?)" : ""));
         }
         if (fields < needed) {
             final String missing = timeField >= fields ? timeLabel : angleLabel;
-            throw new RecordFormatException(file, number, missing, "missing: the line has only " + fields
-                    + " field" + (fields == 1 ? "" : "s") + (fields == 1 ? " (is the delimiter right?)" : ""));
+            throw new RecordFormatException(file, number, missing, InputMessage.FIELDS_MISSING.format(fields,
+                    fields == 1 ? "" : "s", fields == 1 ? " (is the delimiter right?)" : ""));
         }
     }
 
@@ -99,15 +96,14 @@ final class RowParser {
         }
         final String text = line.substring(from, to);
         if (text.isBlank()) {
-            throw new RecordFormatException(file, number, label, "empty: every data line needs a time and an angle");
+            throw new RecordFormatException(file, number, label, InputMessage.EMPTY_SAMPLE.format());
         }
         if (NumberCell.namesNonFinite(text)) {
-            throw new RecordFormatException(file, number, label, "'" + text + "' is not a finite number;"
-                    + " remove the line or fill in the sample");
+            throw new RecordFormatException(file, number, label, InputMessage.NOT_A_FINITE_NUMBER.format(text));
         }
         final char other = decimal == '.' ? ',' : '.';
         final String hint = text.indexOf(other) >= 0 ? " (the decimal separator is '" + decimal + "')" : "";
-        throw new RecordFormatException(file, number, label, "'" + text + "' is not a number" + hint);
+        throw new RecordFormatException(file, number, label, InputMessage.SAMPLE_NOT_A_NUMBER.format(text, hint));
     }
 
     private static String label(ColumnChoice c) {

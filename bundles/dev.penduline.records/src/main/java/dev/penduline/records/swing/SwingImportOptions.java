@@ -2,6 +2,7 @@ package dev.penduline.records.swing;
 
 import dev.penduline.physics.units.Quantity;
 import dev.penduline.physics.units.Unit;
+import dev.penduline.physics.InvalidValueException;
 
 /**
  * What the user told the swing-record reader; every null (or NaN) setting is detected from the
@@ -30,31 +31,31 @@ public record SwingImportOptions(Character delimiter, Character decimalSeparator
      */
     public SwingImportOptions {
         if (delimiter != null && delimiter != ',' && delimiter != ';' && delimiter != '\t') {
-            throw new IllegalArgumentException("delimiter must be ',', ';' or tab, got '" + delimiter + "'");
+            throw new InvalidValueException("delimiter must be ',', ';' or tab, got '" + delimiter + "'");
         }
         if (decimalSeparator != null && decimalSeparator != '.' && decimalSeparator != ',') {
-            throw new IllegalArgumentException("decimal separator must be '.' or ',', got '" + decimalSeparator + "'");
+            throw new InvalidValueException("decimal separator must be '.' or ',', got '" + decimalSeparator + "'");
         }
         if (delimiter != null && delimiter == ',' && decimalSeparator != null && decimalSeparator == ',') {
-            throw new IllegalArgumentException(LayoutSniffer.DECIMAL_IS_DELIMITER);
+            throw new InvalidValueException(LayoutSniffer.DECIMAL_IS_DELIMITER);
         }
         if (timeUnit != null && timeUnit.quantity() != Quantity.TIME) {
-            throw new IllegalArgumentException("time unit '" + timeUnit.symbol() + "' is not a unit of time");
+            throw new InvalidValueException("time unit '" + timeUnit.symbol() + "' is not a unit of time");
         }
         if (angleUnit != null && angleUnit.quantity() != Quantity.ANGLE) {
-            throw new IllegalArgumentException("angle unit '" + angleUnit.symbol() + "' is not a unit of angle");
+            throw new InvalidValueException("angle unit '" + angleUnit.symbol() + "' is not a unit of angle");
         }
         if (!Double.isNaN(countsPerRevolution) && !(countsPerRevolution > 0 && Double.isFinite(countsPerRevolution))) {
-            throw new IllegalArgumentException("counts per revolution must be positive, got " + countsPerRevolution);
+            throw new InvalidValueException("counts per revolution must be positive, got " + countsPerRevolution);
         }
         if (!(gapFactor > 1) || Double.isInfinite(gapFactor)) {
-            throw new IllegalArgumentException("gap factor must be a finite number > 1, got " + gapFactor);
+            throw new InvalidValueException("gap factor must be a finite number > 1, got " + gapFactor);
         }
         if (minimumSamples < 10) {
-            throw new IllegalArgumentException("minimum samples must be at least 10, got " + minimumSamples);
+            throw new InvalidValueException("minimum samples must be at least 10, got " + minimumSamples);
         }
         if (!(minimumMotion > 0) || Double.isInfinite(minimumMotion)) {
-            throw new IllegalArgumentException("minimum motion must be a finite angle > 0 rad, got " + minimumMotion);
+            throw new InvalidValueException("minimum motion must be a finite angle > 0 rad, got " + minimumMotion);
         }
     }
 

@@ -2,6 +2,7 @@ package dev.penduline.records.swing;
 
 import dev.penduline.physics.units.Quantity;
 import dev.penduline.physics.units.Unit;
+import dev.penduline.physics.InvalidValueException;
 
 /**
  * How a swing record's text was read: everything needed to read the same file the same way
@@ -29,20 +30,20 @@ public record SwingRecordMapping(char delimiter, char decimalSeparator, boolean 
      */
     public SwingRecordMapping {
         if (delimiter == decimalSeparator) {
-            throw new IllegalArgumentException("the delimiter and the decimal separator cannot both be '"
+            throw new InvalidValueException("the delimiter and the decimal separator cannot both be '"
                     + delimiter + "'");
         }
         if (decimalSeparator != '.' && decimalSeparator != ',') {
-            throw new IllegalArgumentException("the decimal separator must be '.' or ',', got '" + decimalSeparator + "'");
+            throw new InvalidValueException("the decimal separator must be '.' or ',', got '" + decimalSeparator + "'");
         }
         if (timeUnit.quantity() != Quantity.TIME) {
-            throw new IllegalArgumentException("time unit '" + timeUnit.symbol() + "' is not a unit of time");
+            throw new InvalidValueException("time unit '" + timeUnit.symbol() + "' is not a unit of time");
         }
         if (angleUnit.quantity() != Quantity.ANGLE) {
-            throw new IllegalArgumentException("angle unit '" + angleUnit.symbol() + "' is not a unit of angle");
+            throw new InvalidValueException("angle unit '" + angleUnit.symbol() + "' is not a unit of angle");
         }
         if (angleUnit.suffix().equals(Unit.ENCODER_COUNT.suffix()) && !(countsPerRevolution > 0)) {
-            throw new IllegalArgumentException("an angle in encoder counts needs the counts per revolution");
+            throw new InvalidValueException("an angle in encoder counts needs the counts per revolution");
         }
         if (timeColumn.index() < 1 || angleColumn.index() < 1) {
             throw new IllegalArgumentException("a mapping holds resolved columns with their 1-based positions");

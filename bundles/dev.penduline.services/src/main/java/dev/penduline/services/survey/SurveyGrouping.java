@@ -1,6 +1,7 @@
 package dev.penduline.services.survey;
 
 import java.io.IOException;
+import java.nio.charset.CharacterCodingException;
 import java.nio.charset.StandardCharsets;
 import java.nio.file.DirectoryStream;
 import java.nio.file.Files;
@@ -150,10 +151,10 @@ public final class SurveyGrouping {
         List<String> lines;
         try {
             lines = Files.readAllLines(manifest, StandardCharsets.UTF_8);
+        } catch (CharacterCodingException e) {
+            throw new InputException(manifest + ": is not UTF-8 text", e);
         } catch (IOException e) {
             throw new InputException(manifest + ": cannot be read (" + AtomicFileWrite.reason(e) + ")", e);
-        } catch (RuntimeException e) {
-            throw new InputException(manifest + ": is not UTF-8 text", e);
         }
         Path folder = manifest.toAbsolutePath().getParent();
         int fileAt = -1;

@@ -31,6 +31,7 @@ import dev.penduline.services.InputException;
 import dev.penduline.services.MechanismSource;
 import dev.penduline.services.SessionRecords;
 import dev.penduline.records.swing.SwingImportOptions;
+import dev.penduline.physics.InvalidValueException;
 
 /**
  * Fits the units of a survey, several at once, each fit on one thread (so that {@code jobs}
@@ -220,7 +221,7 @@ public final class SurveyRun {
             return new Done(row(u, hashes, o), false);
         } catch (InputException e) {
             return new Done(SurveyRow.failed(u, hashes, current, e.getMessage()), false);
-        } catch (IllegalArgumentException e) {
+        } catch (InvalidValueException e) {
             return new Done(SurveyRow.failed(u, hashes, current, current + ": " + e.getMessage()), false);
         } catch (RuntimeException | StackOverflowError e) {
             return new Done(SurveyRow.failed(u, hashes, current, "a Penduline bug, please report it: " + e.getClass().getName()
