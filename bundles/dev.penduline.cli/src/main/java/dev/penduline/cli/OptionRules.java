@@ -2,8 +2,8 @@ package dev.penduline.cli;
 
 import java.util.Map;
 
-import dev.penduline.physics.identify.FrictionTerm;
 import dev.penduline.physics.InputMessage;
+import dev.penduline.physics.identify.FrictionTerm;
 import dev.penduline.services.ValueRange;
 
 /**

@@ -26,8 +26,8 @@ import java.util.zip.GZIPInputStream;
 
 import org.hipparchus.special.Erf;
 import org.junit.jupiter.api.AfterAll;
-import org.junit.jupiter.api.io.TempDir;
 import org.junit.jupiter.api.function.Executable;
+import org.junit.jupiter.api.io.TempDir;
 import org.junit.jupiter.params.ParameterizedTest;
 import org.junit.jupiter.params.provider.MethodSource;
 

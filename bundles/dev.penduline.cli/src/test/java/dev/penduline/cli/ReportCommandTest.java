@@ -19,7 +19,6 @@ import java.util.Locale;
 import java.util.regex.Matcher;
 import java.util.regex.Pattern;
 import java.util.stream.Stream;
-
 import javax.xml.parsers.DocumentBuilderFactory;
 
 import org.jsoup.Jsoup;

@@ -14,6 +14,7 @@ import dev.penduline.model.FitResult;
 import dev.penduline.model.Mechanism;
 import dev.penduline.model.SessionFit;
 import dev.penduline.model.TestSession;
+import dev.penduline.physics.InvalidValueException;
 import dev.penduline.physics.MechanismProperties;
 import dev.penduline.physics.inertia.InertiaSummary;
 import dev.penduline.physics.inertia.PartContribution;
@@ -48,7 +49,6 @@ import dev.penduline.services.StoredFit;
 import dev.penduline.services.StoredFitText;
 import dev.penduline.services.SwingSessionAnalysis;
 import dev.penduline.services.present.Figures;
-import dev.penduline.physics.InvalidValueException;
 
 /**
  * Builds the report of a mechanism file: the mechanism from its parts, each test session with

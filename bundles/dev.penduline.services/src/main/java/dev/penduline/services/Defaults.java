@@ -19,10 +19,10 @@ import java.util.Map;
 import java.util.Optional;
 
 import dev.penduline.model.persistence.AtomicFileWrite;
+import dev.penduline.physics.InvalidValueException;
 import dev.penduline.physics.MechanismProperties;
 import dev.penduline.physics.identify.FitSettings;
 import dev.penduline.records.PlainText;
-import dev.penduline.physics.InvalidValueException;
 
 /**
  * The defaults a user sets once, shared by the workbench and the command line: local gravity,

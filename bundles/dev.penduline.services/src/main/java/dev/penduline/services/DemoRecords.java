@@ -5,13 +5,13 @@ import java.util.Locale;
 import java.util.SplittableRandom;
 import java.util.function.Consumer;
 
+import dev.penduline.physics.InvalidValueException;
 import dev.penduline.physics.MechanismProperties;
 import dev.penduline.physics.motion.FrictionTorques;
 import dev.penduline.physics.motion.SwingRun;
 import dev.penduline.physics.motion.SwingSimulator;
 import dev.penduline.physics.units.Unit;
 import dev.penduline.records.InputLimits;
-import dev.penduline.physics.InvalidValueException;
 
 /**
  * Invented swing records made with our own simulator, with what real records have: a still

@@ -9,6 +9,7 @@ import java.util.Optional;
 import java.util.Set;
 
 import dev.penduline.model.TestSession;
+import dev.penduline.physics.InvalidValueException;
 import dev.penduline.physics.MechanismProperties;
 import dev.penduline.physics.identify.FitControl;
 import dev.penduline.physics.identify.FitDecimation;
@@ -26,7 +27,6 @@ import dev.penduline.physics.swing.PeriodCheck;
 import dev.penduline.physics.swing.SwingAnalysis;
 import dev.penduline.records.swing.SwingImportOptions;
 import dev.penduline.records.swing.SwingRecord;
-import dev.penduline.physics.InvalidValueException;
 
 /**
  * Identifies the friction of a mechanism from one or more release records: the use case behind

@@ -7,6 +7,7 @@ import java.util.Optional;
 import java.util.Random;
 import java.util.function.ToDoubleFunction;
 
+import dev.penduline.physics.InvalidValueException;
 import dev.penduline.physics.MechanismProperties;
 import dev.penduline.physics.forecast.AnglePass;
 import dev.penduline.physics.forecast.FigureBand;
@@ -18,7 +19,6 @@ import dev.penduline.physics.inertia.ToleranceSpread;
 import dev.penduline.physics.motion.FrictionTorques;
 import dev.penduline.physics.motion.SwingRun;
 import dev.penduline.physics.motion.SwingSimulator;
-import dev.penduline.physics.InvalidValueException;
 
 /**
  * What a mechanism will do after a release, with the friction of a stored fit (or given

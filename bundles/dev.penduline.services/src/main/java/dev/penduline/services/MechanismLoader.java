@@ -15,6 +15,7 @@ import dev.penduline.model.persistence.MechanismFileException;
 import dev.penduline.model.persistence.MechanismFiles;
 import dev.penduline.model.persistence.MechanismFormat;
 import dev.penduline.model.validation.MechanismValidation;
+import dev.penduline.physics.InvalidValueException;
 import dev.penduline.physics.MechanismProperties;
 import dev.penduline.physics.inertia.InertiaSummary;
 import dev.penduline.physics.inertia.Part;
@@ -22,7 +23,6 @@ import dev.penduline.physics.inertia.PivotInertia;
 import dev.penduline.records.RecordFormatException;
 import dev.penduline.records.parts.PartsList;
 import dev.penduline.records.parts.PartsListReader;
-import dev.penduline.physics.InvalidValueException;
 
 /**
  * Loads a mechanism from a mechanism file, a parts-list CSV or lumped properties, and computes its inertia

@@ -11,6 +11,7 @@ import java.util.regex.Pattern;
 
 import org.hipparchus.geometry.euclidean.threed.Vector3D;
 
+import dev.penduline.physics.InvalidValueException;
 import dev.penduline.physics.inertia.Box;
 import dev.penduline.physics.inertia.Cylinder;
 import dev.penduline.physics.inertia.Part;
@@ -23,7 +24,6 @@ import dev.penduline.physics.units.Unit;
 import dev.penduline.records.PlainText;
 import dev.penduline.records.RecordFormatException;
 import dev.penduline.records.parts.PartsListReader;
-import dev.penduline.physics.InvalidValueException;
 
 /**
  * What-if changes of a mechanism's parts, without editing its file: {@code PART.FIELD=VALUE}

@@ -22,6 +22,7 @@ import dev.penduline.model.ShapeKind;
 import dev.penduline.model.TensorReference;
 import dev.penduline.model.adapt.MechanismAdapter;
 import dev.penduline.model.naming.NamedElements;
+import dev.penduline.physics.InvalidValueException;
 import dev.penduline.physics.MechanismProperties;
 import dev.penduline.physics.inertia.Axis;
 import dev.penduline.physics.inertia.Box;
@@ -39,7 +40,6 @@ import dev.penduline.records.RecordFormatException;
 import dev.penduline.records.parts.PartsList;
 import dev.penduline.records.parts.PartsListReader;
 import dev.penduline.services.present.Figures;
-import dev.penduline.physics.InvalidValueException;
 
 /**
  * Turns a parts list (a BOM or CAD export read by the parts-list reader) into a mechanism file,

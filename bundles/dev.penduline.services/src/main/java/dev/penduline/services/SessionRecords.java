@@ -22,6 +22,7 @@ import dev.penduline.model.TimeUnit;
 import dev.penduline.model.naming.NamedElements;
 import dev.penduline.model.persistence.AtomicFileWrite;
 import dev.penduline.model.persistence.SaveLock;
+import dev.penduline.physics.InvalidValueException;
 import dev.penduline.physics.units.Unit;
 import dev.penduline.records.PlainText;
 import dev.penduline.records.RecordFormatException;
@@ -30,7 +31,6 @@ import dev.penduline.records.swing.SwingImportOptions;
 import dev.penduline.records.swing.SwingRecord;
 import dev.penduline.records.swing.SwingRecordMapping;
 import dev.penduline.records.swing.SwingRecordReader;
-import dev.penduline.physics.InvalidValueException;
 
 /**
  * Swing-test records and the test sessions of a mechanism file: reading a raw record, adding it

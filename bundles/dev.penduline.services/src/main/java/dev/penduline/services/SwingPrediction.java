@@ -3,12 +3,12 @@ package dev.penduline.services;
 import java.util.Locale;
 import java.util.Optional;
 
+import dev.penduline.physics.InvalidValueException;
 import dev.penduline.physics.MechanismProperties;
 import dev.penduline.physics.motion.FrictionTorques;
 import dev.penduline.physics.motion.SwingRun;
 import dev.penduline.physics.motion.SwingSimulator;
 import dev.penduline.records.InputLimits;
-import dev.penduline.physics.InvalidValueException;
 
 /**
  * Predicts a free swing of a mechanism: the use case behind {@code penduline simulate} and the

@@ -2,11 +2,11 @@ package dev.penduline.services;
 
 import java.util.Optional;
 
+import dev.penduline.physics.InvalidValueException;
 import dev.penduline.physics.MechanismProperties;
 import dev.penduline.physics.swing.SwingAnalysis;
 import dev.penduline.physics.swing.SwingAnalyzer;
 import dev.penduline.records.swing.SwingRecord;
-import dev.penduline.physics.InvalidValueException;
 
 /**
  * Analyses one swing record: release, zero offset, turning points, cycles, decay envelopes,

@@ -11,13 +11,13 @@ import dev.penduline.cli.Arguments;
 import dev.penduline.cli.Command;
 import dev.penduline.cli.ExitCode;
 import dev.penduline.cli.UsageException;
+import dev.penduline.physics.InvalidValueException;
 import dev.penduline.physics.motion.FrictionTorques;
 import dev.penduline.physics.units.Unit;
 import dev.penduline.services.Defaults;
 import dev.penduline.services.DemoRecords;
 import dev.penduline.services.InputException;
 import dev.penduline.services.MechanismSource;
-import dev.penduline.physics.InvalidValueException;
 
 /** {@code penduline demo-record}: an invented swing record from the simulator, with a known truth. */
 public final class DemoRecordCommand implements Command {

@@ -15,6 +15,7 @@ import dev.penduline.cli.Command;
 import dev.penduline.cli.ExitCode;
 import dev.penduline.cli.UsageException;
 import dev.penduline.cli.json.JsonWriter;
+import dev.penduline.physics.InvalidValueException;
 import dev.penduline.physics.identify.FitControl;
 import dev.penduline.physics.identify.FitSettings;
 import dev.penduline.physics.identify.FitStatus;
@@ -26,7 +27,6 @@ import dev.penduline.services.FrictionIdentification.Outcome;
 import dev.penduline.services.FrictionIdentification.SessionInput;
 import dev.penduline.services.InputException;
 import dev.penduline.services.MechanismSource;
-import dev.penduline.physics.InvalidValueException;
 
 /** {@code penduline fit}: identify the friction terms from release records, compare, decide. */
 public final class FitCommand implements Command {

@@ -12,6 +12,7 @@ import dev.penduline.cli.UsageException;
 import dev.penduline.cli.json.JsonWriter;
 import dev.penduline.model.Mechanism;
 import dev.penduline.model.persistence.MechanismFormat;
+import dev.penduline.physics.InvalidValueException;
 import dev.penduline.physics.identify.FrictionTerm;
 import dev.penduline.physics.motion.FrictionTorques;
 import dev.penduline.services.Defaults;
@@ -20,7 +21,6 @@ import dev.penduline.services.MechanismForecast.FrictionSource;
 import dev.penduline.services.MechanismLoader;
 import dev.penduline.services.MechanismSource;
 import dev.penduline.services.StoredFit;
-import dev.penduline.physics.InvalidValueException;
 
 /**
  * Where the friction of a swing comes from, as the commands that simulate or forecast one are

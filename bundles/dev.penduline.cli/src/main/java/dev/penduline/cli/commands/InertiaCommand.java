@@ -13,6 +13,7 @@ import dev.penduline.cli.ExitCode;
 import dev.penduline.cli.UsageException;
 import dev.penduline.cli.json.JsonWriter;
 import dev.penduline.model.persistence.MechanismFormat;
+import dev.penduline.physics.InvalidValueException;
 import dev.penduline.physics.inertia.InertiaSummary;
 import dev.penduline.physics.inertia.PartContribution;
 import dev.penduline.physics.inertia.ToleranceSpread;
@@ -25,7 +26,6 @@ import dev.penduline.services.MechanismLoader;
 import dev.penduline.services.MechanismSource;
 import dev.penduline.services.SessionRecords;
 import dev.penduline.services.present.Figures;
-import dev.penduline.physics.InvalidValueException;
 
 /** {@code penduline inertia FILE}: mass, centroid and inertia about the pivot, part by part. */
 public final class InertiaCommand implements Command {

@@ -16,6 +16,7 @@ import dev.penduline.cli.ExitCode;
 import dev.penduline.cli.OptionRules;
 import dev.penduline.cli.UsageException;
 import dev.penduline.cli.json.JsonWriter;
+import dev.penduline.physics.InvalidValueException;
 import dev.penduline.physics.MechanismProperties;
 import dev.penduline.physics.forecast.AnglePass;
 import dev.penduline.physics.forecast.FigureBand;
@@ -33,7 +34,6 @@ import dev.penduline.services.MechanismSource;
 import dev.penduline.services.PartChanges;
 import dev.penduline.services.SpecDesign;
 import dev.penduline.services.present.Figures;
-import dev.penduline.physics.InvalidValueException;
 
 /** {@code penduline predict}: what a mechanism does after a release, with the friction of its stored fit. */
 public final class PredictCommand implements Command {

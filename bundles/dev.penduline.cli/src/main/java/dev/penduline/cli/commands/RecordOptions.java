@@ -7,10 +7,10 @@ import java.util.Set;
 
 import dev.penduline.cli.Arguments;
 import dev.penduline.cli.UsageException;
+import dev.penduline.physics.InvalidValueException;
 import dev.penduline.physics.units.Unit;
 import dev.penduline.records.swing.ColumnChoice;
 import dev.penduline.records.swing.SwingImportOptions;
-import dev.penduline.physics.InvalidValueException;
 
 /** The options that say how to read a swing record; anything not given is detected. */
 final class RecordOptions {

@@ -11,6 +11,7 @@ import org.hipparchus.geometry.euclidean.threed.Vector3D;
 import dev.penduline.model.Mechanism;
 import dev.penduline.model.ShapeAxis;
 import dev.penduline.model.TensorReference;
+import dev.penduline.physics.InvalidValueException;
 import dev.penduline.physics.MechanismProperties;
 import dev.penduline.physics.inertia.Axis;
 import dev.penduline.physics.inertia.Box;
@@ -27,7 +28,6 @@ import dev.penduline.physics.inertia.PointMass;
 import dev.penduline.physics.inertia.SlenderRod;
 import dev.penduline.physics.inertia.Sphere;
 import dev.penduline.physics.inertia.ThinRing;
-import dev.penduline.physics.InvalidValueException;
 
 /**
  * Turns a mechanism file's model into the inertia engine's inputs: parts, pivot axis, gravity.

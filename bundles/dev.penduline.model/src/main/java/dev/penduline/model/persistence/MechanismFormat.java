@@ -2,7 +2,6 @@ package dev.penduline.model.persistence;
 
 import java.util.HashMap;
 import java.util.Map;
-
 import javax.xml.XMLConstants;
 
 import org.eclipse.emf.ecore.resource.Resource;

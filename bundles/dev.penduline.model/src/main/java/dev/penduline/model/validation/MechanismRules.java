@@ -9,8 +9,8 @@ import dev.penduline.model.Part;
 import dev.penduline.model.PendulinePackage.Literals;
 import dev.penduline.model.TestSession;
 import dev.penduline.model.adapt.MechanismAdapter;
-import dev.penduline.physics.inertia.PivotInertia;
 import dev.penduline.physics.InvalidValueException;
+import dev.penduline.physics.inertia.PivotInertia;
 
 /** The rules of the mechanism as a whole: gravity, axis, identifiers, and the inertia engine's checks. */
 final class MechanismRules {

@@ -10,9 +10,9 @@ import dev.penduline.model.PendulinePackage.Literals;
 import dev.penduline.model.ShapeKind;
 import dev.penduline.model.TensorReference;
 import dev.penduline.model.adapt.MechanismAdapter;
+import dev.penduline.physics.InvalidValueException;
 import dev.penduline.physics.inertia.GivenTensor;
 import dev.penduline.physics.inertia.TensorCheck;
-import dev.penduline.physics.InvalidValueException;
 
 /** The rules of one part. */
 final class PartRules {

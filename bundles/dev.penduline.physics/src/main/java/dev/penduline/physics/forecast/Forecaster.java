@@ -6,11 +6,11 @@ import java.util.Optional;
 
 import org.hipparchus.analysis.solvers.BrentSolver;
 
+import dev.penduline.physics.InvalidValueException;
 import dev.penduline.physics.MechanismProperties;
 import dev.penduline.physics.motion.SwingRun;
 import dev.penduline.physics.motion.SwingSimulator;
 import dev.penduline.physics.motion.TurningPoint;
-import dev.penduline.physics.InvalidValueException;
 
 /**
  * Forecasts the swing after a release by simulating it: first for {@link #FIRST_PERIODS}

@@ -1,7 +1,7 @@
 package dev.penduline.physics.forecast;
 
-import dev.penduline.physics.MechanismProperties;
 import dev.penduline.physics.InvalidValueException;
+import dev.penduline.physics.MechanismProperties;
 
 /**
  * The angles at which a body can stay at rest: where the gravity torque does not exceed the

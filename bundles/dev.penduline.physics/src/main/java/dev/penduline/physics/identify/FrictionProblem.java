@@ -7,9 +7,9 @@ import java.util.List;
 import java.util.Objects;
 import java.util.Set;
 
+import dev.penduline.physics.InvalidValueException;
 import dev.penduline.physics.MechanismProperties;
 import dev.penduline.physics.motion.FrictionTorques;
-import dev.penduline.physics.InvalidValueException;
 
 /**
  * What to identify: the mechanism as calculated, one or more recorded releases, the friction

@@ -4,8 +4,8 @@ import java.util.List;
 
 import org.hipparchus.geometry.euclidean.threed.Vector3D;
 
-import dev.penduline.physics.MechanismProperties;
 import dev.penduline.physics.InvalidValueException;
+import dev.penduline.physics.MechanismProperties;
 
 /**
  * The inertia engine's result for a parts list about one pivot axis.

@@ -7,8 +7,8 @@ import java.util.Optional;
 
 import org.hipparchus.geometry.euclidean.threed.Vector3D;
 
-import dev.penduline.physics.MechanismProperties;
 import dev.penduline.physics.InvalidValueException;
+import dev.penduline.physics.MechanismProperties;
 
 /**
  * The inertia engine: reduces a parts list to mass, centroid and moment of inertia about a pivot

@@ -5,8 +5,8 @@ import org.hipparchus.special.elliptic.jacobi.JacobiElliptic;
 import org.hipparchus.special.elliptic.jacobi.JacobiEllipticBuilder;
 import org.hipparchus.special.elliptic.legendre.LegendreEllipticIntegral;
 
-import dev.penduline.physics.MechanismProperties;
 import dev.penduline.physics.InvalidValueException;
+import dev.penduline.physics.MechanismProperties;
 
 /**
  * Closed-form undamped swing of any amplitude below π, released from rest.

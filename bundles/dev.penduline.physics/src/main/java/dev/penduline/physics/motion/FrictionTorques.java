@@ -1,7 +1,7 @@
 package dev.penduline.physics.motion;
 
-import dev.penduline.physics.units.Unit;
 import dev.penduline.physics.InvalidValueException;
+import dev.penduline.physics.units.Unit;
 
 /**
  * The friction and damping torques that oppose a swing, in SI units.

@@ -3,8 +3,8 @@ package dev.penduline.physics.motion;
 import java.util.ArrayList;
 import java.util.List;
 
-import dev.penduline.physics.MechanismProperties;
 import dev.penduline.physics.InvalidValueException;
+import dev.penduline.physics.MechanismProperties;
 
 /**
  * Closed-form small-angle swing with Coulomb friction only, released from rest.

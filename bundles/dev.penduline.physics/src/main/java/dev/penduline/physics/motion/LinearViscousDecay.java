@@ -1,7 +1,7 @@
 package dev.penduline.physics.motion;
 
-import dev.penduline.physics.MechanismProperties;
 import dev.penduline.physics.InvalidValueException;
+import dev.penduline.physics.MechanismProperties;
 
 /**
  * Closed-form small-angle swing with viscous damping only:

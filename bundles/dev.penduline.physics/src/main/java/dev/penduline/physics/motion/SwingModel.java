@@ -1,7 +1,7 @@
 package dev.penduline.physics.motion;
 
-import dev.penduline.physics.MechanismProperties;
 import dev.penduline.physics.InvalidValueException;
+import dev.penduline.physics.MechanismProperties;
 
 /**
  * The torques of the equation of motion, reduced once per configuration to the few numbers the

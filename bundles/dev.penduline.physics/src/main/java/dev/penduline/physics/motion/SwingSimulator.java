@@ -3,8 +3,8 @@ package dev.penduline.physics.motion;
 import java.util.Objects;
 import java.util.function.DoubleUnaryOperator;
 
-import dev.penduline.physics.MechanismProperties;
 import dev.penduline.physics.InvalidValueException;
+import dev.penduline.physics.MechanismProperties;
 
 /**
  * Simulates the swing of a pivoted body with any mix of viscous, Coulomb, stiction and

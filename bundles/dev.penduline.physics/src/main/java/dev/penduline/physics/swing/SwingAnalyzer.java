@@ -8,9 +8,9 @@ import java.util.Optional;
 
 import org.hipparchus.special.elliptic.legendre.LegendreEllipticIntegral;
 
+import dev.penduline.physics.InvalidValueException;
 import dev.penduline.physics.MechanismProperties;
 import dev.penduline.physics.motion.EllipticSwing;
-import dev.penduline.physics.InvalidValueException;
 
 /**
  * Turns a free-release record (times and angles in SI) into a prepared swing and its decay

@@ -3,8 +3,8 @@ package dev.penduline.physics.swing;
 import java.util.ArrayList;
 import java.util.List;
 
-import dev.penduline.physics.swing.MeasuredTurningPoint.Kind;
 import dev.penduline.physics.InvalidValueException;
+import dev.penduline.physics.swing.MeasuredTurningPoint.Kind;
 
 /**
  * Finds the turning points of a trimmed record, one per half-swing.

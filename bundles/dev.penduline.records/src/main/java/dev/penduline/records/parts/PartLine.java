@@ -10,6 +10,8 @@ import java.util.Set;
 import org.hipparchus.geometry.euclidean.threed.Rotation;
 import org.hipparchus.geometry.euclidean.threed.Vector3D;
 
+import dev.penduline.physics.InputMessage;
+import dev.penduline.physics.InvalidValueException;
 import dev.penduline.physics.inertia.Axis;
 import dev.penduline.physics.inertia.Box;
 import dev.penduline.physics.inertia.Cylinder;
@@ -24,8 +26,6 @@ import dev.penduline.physics.inertia.TensorCheck;
 import dev.penduline.physics.inertia.ThinRing;
 import dev.penduline.records.PlainText;
 import dev.penduline.records.RecordFormatException;
-import dev.penduline.physics.InputMessage;
-import dev.penduline.physics.InvalidValueException;
 
 /** Turns one data line of a parts list into a {@link Part}. */
 final class PartLine {

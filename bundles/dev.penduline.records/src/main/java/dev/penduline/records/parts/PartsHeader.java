@@ -7,11 +7,11 @@ import java.util.Locale;
 import java.util.Map;
 import java.util.Optional;
 
+import dev.penduline.physics.InputMessage;
 import dev.penduline.physics.units.SuffixedName;
 import dev.penduline.physics.units.Unit;
 import dev.penduline.records.PlainText;
 import dev.penduline.records.RecordFormatException;
-import dev.penduline.physics.InputMessage;
 
 /**
  * The header row of a parts list: which known column sits where, in which unit. Unknown columns

@@ -8,6 +8,7 @@ import java.nio.file.Path;
 import java.util.ArrayList;
 import java.util.List;
 
+import dev.penduline.physics.InputMessage;
 import dev.penduline.physics.inertia.Part;
 import dev.penduline.records.BoundedLines;
 import dev.penduline.records.DelimitedLine;
@@ -15,7 +16,6 @@ import dev.penduline.records.InputFiles;
 import dev.penduline.records.InputLimits;
 import dev.penduline.records.RecordFormatException;
 import dev.penduline.records.Utf8Text;
-import dev.penduline.physics.InputMessage;
 
 /**
  * Reads a parts list from a comma-separated file into {@link Part}s for the inertia engine.

@@ -6,8 +6,8 @@ import java.util.Optional;
 import java.util.OptionalDouble;
 import java.util.regex.Pattern;
 
-import dev.penduline.records.RecordFormatException;
 import dev.penduline.physics.InputMessage;
+import dev.penduline.records.RecordFormatException;
 
 /** One data line of a parts list, with its cells read through the header and converted to SI. */
 final class PartsRow {

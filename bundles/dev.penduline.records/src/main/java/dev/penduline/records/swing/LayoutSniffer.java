@@ -7,13 +7,13 @@ import java.util.Set;
 import java.util.regex.Matcher;
 import java.util.regex.Pattern;
 
+import dev.penduline.physics.InputMessage;
 import dev.penduline.physics.units.Quantity;
 import dev.penduline.physics.units.SuffixedName;
 import dev.penduline.physics.units.Unit;
 import dev.penduline.records.DelimitedLine;
 import dev.penduline.records.PlainText;
 import dev.penduline.records.RecordFormatException;
-import dev.penduline.physics.InputMessage;
 
 /**
  * Decides, from the first lines of a record, what the user did not say: delimiter, decimal

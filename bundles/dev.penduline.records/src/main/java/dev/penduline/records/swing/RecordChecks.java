@@ -3,9 +3,9 @@ package dev.penduline.records.swing;
 import java.util.Arrays;
 import java.util.List;
 
+import dev.penduline.physics.InputMessage;
 import dev.penduline.physics.units.Unit;
 import dev.penduline.records.RecordFormatException;
-import dev.penduline.physics.InputMessage;
 
 /** Whole-record checks after the streaming pass: size, motion, gaps, plausibility of the step. */
 final class RecordChecks {

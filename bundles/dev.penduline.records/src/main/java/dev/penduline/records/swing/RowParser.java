@@ -2,11 +2,11 @@ package dev.penduline.records.swing;
 
 import java.util.List;
 
+import dev.penduline.physics.InputMessage;
 import dev.penduline.physics.units.Unit;
 import dev.penduline.records.DelimitedLine;
 import dev.penduline.records.InputLimits;
 import dev.penduline.records.RecordFormatException;
-import dev.penduline.physics.InputMessage;
 
 /** Reads the time and angle of one data line, converts them to SI and checks the time order. */
 final class RowParser {

@@ -1,8 +1,8 @@
 package dev.penduline.records.swing;
 
+import dev.penduline.physics.InvalidValueException;
 import dev.penduline.physics.units.Quantity;
 import dev.penduline.physics.units.Unit;
-import dev.penduline.physics.InvalidValueException;
 
 /**
  * What the user told the swing-record reader; every null (or NaN) setting is detected from the

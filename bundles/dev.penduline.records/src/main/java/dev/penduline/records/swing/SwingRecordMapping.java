@@ -1,8 +1,8 @@
 package dev.penduline.records.swing;
 
+import dev.penduline.physics.InvalidValueException;
 import dev.penduline.physics.units.Quantity;
 import dev.penduline.physics.units.Unit;
-import dev.penduline.physics.InvalidValueException;
 
 /**
  * How a swing record's text was read: everything needed to read the same file the same way

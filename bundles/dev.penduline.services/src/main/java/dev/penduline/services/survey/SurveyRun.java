@@ -15,6 +15,7 @@ import java.util.concurrent.atomic.AtomicInteger;
 import java.util.stream.Collectors;
 
 import dev.penduline.model.persistence.AtomicFileWrite;
+import dev.penduline.physics.InvalidValueException;
 import dev.penduline.physics.identify.FitControl;
 import dev.penduline.physics.identify.FitSettings;
 import dev.penduline.physics.identify.FitWarning;
@@ -23,6 +24,7 @@ import dev.penduline.physics.identify.FrictionTerm;
 import dev.penduline.physics.identify.FrictionVerdict;
 import dev.penduline.physics.identify.Goodness;
 import dev.penduline.physics.identify.ParameterEstimate;
+import dev.penduline.records.swing.SwingImportOptions;
 import dev.penduline.services.FitWording;
 import dev.penduline.services.FrictionIdentification;
 import dev.penduline.services.FrictionIdentification.Outcome;
@@ -30,8 +32,6 @@ import dev.penduline.services.FrictionIdentification.SessionInput;
 import dev.penduline.services.InputException;
 import dev.penduline.services.MechanismSource;
 import dev.penduline.services.SessionRecords;
-import dev.penduline.records.swing.SwingImportOptions;
-import dev.penduline.physics.InvalidValueException;
 
 /**
  * Fits the units of a survey, several at once, each fit on one thread (so that {@code jobs}

@@ -5,6 +5,7 @@ import java.util.Arrays;
 
 import jakarta.annotation.PostConstruct;
 import jakarta.annotation.PreDestroy;
+import jakarta.inject.Inject;
 
 import org.eclipse.core.resources.IFile;
 import org.eclipse.core.resources.IResource;
@@ -32,8 +33,6 @@ import org.eclipse.ui.PlatformUI;
 import org.eclipse.ui.ide.IDE;
 import org.eclipse.ui.model.WorkbenchContentProvider;
 import org.eclipse.ui.model.WorkbenchLabelProvider;
-
-import jakarta.inject.Inject;
 
 import dev.penduline.model.persistence.AtomicFileWrite;
 import dev.penduline.model.persistence.SaveLock;

@@ -35,10 +35,10 @@ import dev.penduline.services.InputException;
 import dev.penduline.services.MechanismLoader;
 import dev.penduline.services.MechanismSource;
 import dev.penduline.ui.internal.MechanismSelection;
-import dev.penduline.ui.internal.preferences.WorkbenchDefaults;
 import dev.penduline.ui.internal.document.MechanismDocument;
 import dev.penduline.ui.internal.document.MechanismDocuments;
 import dev.penduline.ui.internal.editor.MechanismEdits;
+import dev.penduline.ui.internal.preferences.WorkbenchDefaults;
 
 /**
  * The Friction Fit wizard: sets up a fit of a mechanism file's test sessions, runs it with the

@@ -2,10 +2,10 @@ package dev.penduline.ui.internal.friction;
 import java.nio.file.Path;
 
 import org.eclipse.core.resources.IFile;
-import org.eclipse.jface.wizard.WizardDialog;
 import org.eclipse.jface.layout.GridDataFactory;
 import org.eclipse.jface.layout.GridLayoutFactory;
 import org.eclipse.jface.resource.JFaceResources;
+import org.eclipse.jface.wizard.WizardDialog;
 import org.eclipse.swt.SWT;
 import org.eclipse.swt.widgets.Button;
 import org.eclipse.swt.widgets.Composite;
