@@ -30,7 +30,7 @@ public interface Command {
     String usage();
 
     /**
-     * Runs the command.
+     * Runs the command with the built-in defaults.
      *
      * @param args the arguments after the command's name
      * @param out  where results go
@@ -38,7 +38,9 @@ public interface Command {
      * @return the exit code
      * @throws UsageException when the arguments or an input file are wrong
      */
-    ExitCode run(List<String> args, PrintWriter out, PrintWriter err) throws UsageException;
+    default ExitCode run(List<String> args, PrintWriter out, PrintWriter err) throws UsageException {
+        return run(args, Defaults.BUILT_IN, out, err);
+    }
 
     /**
      * Runs the command with the defaults its options fall back to: the built-in ones, or the
@@ -52,7 +54,5 @@ public interface Command {
      * @return the exit code
      * @throws UsageException when the arguments or an input file are wrong
      */
-    default ExitCode run(List<String> args, Defaults defaults, PrintWriter out, PrintWriter err) throws UsageException {
-        return run(args, out, err);
-    }
+    ExitCode run(List<String> args, Defaults defaults, PrintWriter out, PrintWriter err) throws UsageException;
 }

@@ -6,6 +6,7 @@ import java.nio.charset.StandardCharsets;
 import java.util.List;
 
 import dev.penduline.physics.MechanismProperties;
+import dev.penduline.services.Defaults;
 
 /**
  * The child process of {@link ErrorKindsTest}: the real command line with three test-only commands
@@ -59,7 +60,7 @@ final class ErrorKindsChild {
             }
 
             @Override
-            public ExitCode run(List<String> args, PrintWriter out, PrintWriter err) {
+            public ExitCode run(List<String> args, Defaults defaults, PrintWriter out, PrintWriter err) {
                 body.run();
                 return ExitCode.OK;
             }

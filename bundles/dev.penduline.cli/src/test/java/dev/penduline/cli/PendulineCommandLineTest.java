@@ -9,6 +9,8 @@ import java.util.List;
 
 import org.junit.jupiter.api.Test;
 
+import dev.penduline.services.Defaults;
+
 class PendulineCommandLineTest {
 
     private final StringWriter out = new StringWriter();
@@ -45,7 +47,7 @@ class PendulineCommandLineTest {
             }
 
             @Override
-            public ExitCode run(List<String> args, PrintWriter o, PrintWriter e) throws UsageException {
+            public ExitCode run(List<String> args, Defaults defaults, PrintWriter o, PrintWriter e) throws UsageException {
                 if (args.isEmpty()) {
                     throw new UsageException("nothing to echo");
                 }

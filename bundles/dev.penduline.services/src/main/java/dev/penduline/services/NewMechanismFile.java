@@ -1,7 +1,5 @@
 package dev.penduline.services;
 
-import java.io.IOException;
-import java.nio.file.NoSuchFileException;
 import java.nio.file.Path;
 import java.util.Optional;
 
@@ -10,9 +8,7 @@ import dev.penduline.model.naming.NamedElements;
 import dev.penduline.model.naming.StableIds;
 import dev.penduline.model.persistence.MechanismFormat;
 import dev.penduline.physics.MechanismProperties;
-import dev.penduline.records.RecordFormatException;
 import dev.penduline.records.parts.PartsList;
-import dev.penduline.records.parts.PartsListReader;
 
 /**
  * Starts a mechanism file for a new project: empty, or holding the parts of a parts list. The
@@ -35,24 +31,6 @@ public final class NewMechanismFile {
         return StableIds.slug(mechanismName, "mechanism") + "." + MechanismFormat.FILE_EXTENSION;
     }
 
-    /**
-     * Reads a parts-list CSV, to check it before a project is created for it.
-     *
-     * @param partsList the parts-list CSV
-     * @return the parts as read, with warnings (ignored columns and the like)
-     * @throws InputException naming the file, line and column when the list cannot be read
-     */
-    public static PartsList readPartsList(Path partsList) throws InputException {
-        try {
-            return new PartsListReader().read(partsList);
-        } catch (NoSuchFileException e) {
-            throw new InputException(partsList + ": no such file", e);
-        } catch (IOException e) {
-            throw new InputException(partsList + ": cannot be read (" + e.getMessage() + ")", e);
-        } catch (RecordFormatException e) {
-            throw new InputException(e.getMessage(), e);
-        }
-    }
 
     /**
      * Writes a new mechanism file: with the parts of a list when one is given (see

@@ -45,7 +45,7 @@ class NewMechanismFileTest {
                 arm,rod,1.5,0,-0.3,0,0.6,y
                 """);
         Path target = dir.resolve(NewMechanismFile.fileName("Swing arm"));
-        NewMechanismFile.write("Swing arm", Optional.of(NewMechanismFile.readPartsList(csv)), target);
+        NewMechanismFile.write("Swing arm", Optional.of(PartsImport.readPartsList(csv)), target);
         assertEquals(0.18, new MechanismLoader().load(target).properties().pivotInertia(), 1e-12);
     }
 
@@ -55,7 +55,7 @@ class NewMechanismFileTest {
                 name,shape,mass_kg,x_m,y_m,z_m
                 arm,point,heavy,0,-0.3,0
                 """);
-        InputException e = assertThrows(InputException.class, () -> NewMechanismFile.readPartsList(csv));
+        InputException e = assertThrows(InputException.class, () -> PartsImport.readPartsList(csv));
         // file and line (the bad value is on line 2, under the header), then the column and the value
         assertTrue(e.getMessage().contains("bad.csv:2:"), e.getMessage());
         assertTrue(e.getMessage().contains("mass_kg"), e.getMessage());

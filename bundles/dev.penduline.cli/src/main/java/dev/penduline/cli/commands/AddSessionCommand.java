@@ -11,6 +11,7 @@ import dev.penduline.cli.ExitCode;
 import dev.penduline.cli.UsageException;
 import dev.penduline.physics.units.Unit;
 import dev.penduline.records.PlainText;
+import dev.penduline.services.Defaults;
 import dev.penduline.services.InputException;
 import dev.penduline.services.SessionRecords;
 
@@ -48,7 +49,7 @@ public final class AddSessionCommand implements Command {
     }
 
     @Override
-    public ExitCode run(List<String> args, PrintWriter out, PrintWriter err) throws UsageException {
+    public ExitCode run(List<String> args, Defaults defaults, PrintWriter out, PrintWriter err) throws UsageException {
         Arguments a = Arguments.parse(args, OPTIONS, Set.of());
         if (a.positional().size() != 2) {
             throw new UsageException("give the mechanism file and the record file. " + usage());

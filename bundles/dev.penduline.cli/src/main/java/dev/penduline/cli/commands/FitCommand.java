@@ -86,11 +86,6 @@ public final class FitCommand implements Command {
     }
 
     @Override
-    public ExitCode run(List<String> args, PrintWriter out, PrintWriter err) throws UsageException {
-        return run(args, Defaults.BUILT_IN, out, err);
-    }
-
-    @Override
     public ExitCode run(List<String> args, Defaults defaults, PrintWriter out, PrintWriter err) throws UsageException {
         Arguments a = Arguments.parse(args, OPTIONS, Set.of("json", "fix-inertia", "no-save", ACCEPT_CHANGED));
         if (a.positional().size() > 1) {

@@ -47,11 +47,6 @@ public final class ImportPartsCommand implements Command {
     }
 
     @Override
-    public ExitCode run(List<String> args, PrintWriter out, PrintWriter err) throws UsageException {
-        return run(args, Defaults.BUILT_IN, out, err);
-    }
-
-    @Override
     public ExitCode run(List<String> args, Defaults defaults, PrintWriter out, PrintWriter err) throws UsageException {
         Arguments a = Arguments.parse(args, Set.of("to", "into", "name"), Set.of());
         if (a.positional().size() != 1 || a.has("to") == a.has("into")) {

@@ -64,11 +64,6 @@ public final class InertiaCommand implements Command {
     }
 
     @Override
-    public ExitCode run(List<String> args, PrintWriter out, PrintWriter err) throws UsageException {
-        return run(args, Defaults.BUILT_IN, out, err);
-    }
-
-    @Override
     public ExitCode run(List<String> args, Defaults defaults, PrintWriter out, PrintWriter err) throws UsageException {
         Arguments a = Arguments.parse(args, Set.of("gravity", "draws", "seed"), Set.of("json"));
         if (a.positional().size() != 1) {

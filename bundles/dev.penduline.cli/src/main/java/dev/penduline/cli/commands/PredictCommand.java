@@ -90,11 +90,6 @@ public final class PredictCommand implements Command {
     }
 
     @Override
-    public ExitCode run(List<String> args, PrintWriter out, PrintWriter err) throws UsageException {
-        return run(args, Defaults.BUILT_IN, out, err);
-    }
-
-    @Override
     public ExitCode run(List<String> args, Defaults defaults, PrintWriter out, PrintWriter err) throws UsageException {
         Prediction p = compute(args, defaults, err);
         if (p.args().flag("json")) {

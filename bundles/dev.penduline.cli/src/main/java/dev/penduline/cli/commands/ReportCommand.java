@@ -88,11 +88,6 @@ public final class ReportCommand implements Command {
     }
 
     @Override
-    public ExitCode run(List<String> args, PrintWriter out, PrintWriter err) throws UsageException {
-        return run(args, Defaults.BUILT_IN, out, err);
-    }
-
-    @Override
     public ExitCode run(List<String> args, Defaults defaults, PrintWriter out, PrintWriter err) throws UsageException {
         int split = args.indexOf(PREDICT);
         List<String> own = split < 0 ? args : args.subList(0, split);

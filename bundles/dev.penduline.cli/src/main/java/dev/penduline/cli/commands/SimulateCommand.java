@@ -79,11 +79,6 @@ public final class SimulateCommand implements Command {
     static final double NEAR_UPRIGHT_DEG = 179.9;
 
     @Override
-    public ExitCode run(List<String> args, PrintWriter out, PrintWriter err) throws UsageException {
-        return run(args, Defaults.BUILT_IN, out, err);
-    }
-
-    @Override
     public ExitCode run(List<String> args, Defaults defaults, PrintWriter out, PrintWriter err) throws UsageException {
         Arguments a = Arguments.parse(args, OPTIONS, Set.of("json", "force", "no-fit"));
         MechanismSource given = FrictionOptions.mechanism(a, defaults, err);

@@ -24,6 +24,11 @@ final class CommandHarness {
         return err.toString();
     }
 
+    /** Forgets what was printed to the output so far (the warnings stay). */
+    void clearOut() {
+        out.getBuffer().setLength(0);
+    }
+
     /** Forgets what was printed so far. */
     void clear() {
         out.getBuffer().setLength(0);

@@ -8,8 +8,6 @@ import static org.junit.jupiter.api.Assertions.assertEquals;
 import static org.junit.jupiter.api.Assertions.assertFalse;
 import static org.junit.jupiter.api.Assertions.assertTrue;
 
-import java.io.PrintWriter;
-import java.io.StringWriter;
 import java.math.BigDecimal;
 import java.nio.file.Files;
 import java.nio.file.Path;
@@ -22,7 +20,6 @@ import org.junit.jupiter.api.io.TempDir;
 
 import dev.penduline.cli.ExitCode;
 import dev.penduline.cli.JsonTree;
-import dev.penduline.cli.PendulineCommandLine;
 import dev.penduline.model.Mechanism;
 import dev.penduline.model.persistence.MechanismFiles;
 
@@ -37,17 +34,15 @@ class FitCommandTest {
     @TempDir
     Path dir;
 
-    private StringWriter out;
-    private StringWriter err;
+    private final CommandHarness cli = new CommandHarness();
 
     @BeforeEach
     void clear() {
-        out = new StringWriter();
-        err = new StringWriter();
+        cli.clear();
     }
 
     private ExitCode run(String... args) {
-        return new PendulineCommandLine().run(args, new PrintWriter(out, true), new PrintWriter(err, true));
+        return cli.run(args);
     }
 
     /** A project: a rod-and-bob arm (parts list imported) with two releases at different angles. */
@@ -58,14 +53,14 @@ class FitCommandTest {
                 bob,sphere,1.5,0,-0.6,0,,0.05,
                 """);
         Path mechanism = dir.resolve("arm.penduline");
-        assertEquals(ExitCode.OK, run("import-parts", parts.toString(), "--to", mechanism.toString()), err.toString());
+        assertEquals(ExitCode.OK, run("import-parts", parts.toString(), "--to", mechanism.toString()), cli.err());
         for (String angle : new String[] {"12", "40"}) {
             Path record = dir.resolve("release-" + angle + ".csv");
             assertEquals(ExitCode.OK, run("demo-record", mechanism.toString(), "--theta0-deg", angle, "--viscous",
                     "0.01", "--coulomb", "0.04", "--duration", "15", "--rate", "200", "--counts-per-rev", "0",
                     "--noise-deg", "0.02", "--offset-deg", "-1.2", "--seed", angle, "--out", record.toString()),
-                    err.toString());
-            assertEquals(ExitCode.OK, run("add-session", mechanism.toString(), record.toString()), err.toString());
+                    cli.err());
+            assertEquals(ExitCode.OK, run("add-session", mechanism.toString(), record.toString()), cli.err());
         }
         return mechanism;
     }
@@ -73,9 +68,9 @@ class FitCommandTest {
     @Test
     void automaticFitFindsViscousPlusCoulombAndStoresTheResult() throws Exception {
         Path mechanism = project();
-        out = new StringWriter();
-        assertEquals(ExitCode.OK, run("fit", mechanism.toString(), "--resamples", "8", "--json"), err.toString());
-        String text = out.toString();
+        cli.clearOut();
+        assertEquals(ExitCode.OK, run("fit", mechanism.toString(), "--resamples", "8", "--json"), cli.err());
+        String text = cli.out();
         Object json = JsonTree.parse(text);
         assertEquals("converged", at(json, "status"), text);
         assertEquals(0.01, number(json, "terms", "viscous", "value"), 0.0005, "viscous b");
@@ -99,13 +94,13 @@ class FitCommandTest {
     void aFitThatCannotConvergeSaysSoWithExitCodeOneAndStoresNothing() throws Exception {
         Path mechanism = project();
         byte[] before = Files.readAllBytes(mechanism);
-        out = new StringWriter();
+        cli.clearOut();
         assertEquals(ExitCode.COMPUTATION_FAILED, run("fit", mechanism.toString(), "--terms", "viscous,coulomb",
                 "--max-iterations", "1", "--resamples", "0"));
-        assertTrue(out.toString().contains("DID NOT CONVERGE"), out.toString());
+        assertTrue(cli.out().contains("DID NOT CONVERGE"), cli.out());
         // GUM §7.2.6: the standard error to two significant digits, the estimate to the same decimal place
-        Matcher b = Pattern.compile("b  = \\(?(-?[0-9.]+) ± ([0-9.]+)\\)?(e-?[0-9]+)? N·m·s/rad").matcher(out.toString());
-        assertTrue(b.find(), out.toString());
+        Matcher b = Pattern.compile("b  = \\(?(-?[0-9.]+) ± ([0-9.]+)\\)?(e-?[0-9]+)? N·m·s/rad").matcher(cli.out());
+        assertTrue(b.find(), cli.out());
         assertEquals(2, new BigDecimal(b.group(2)).precision(), b.group());
         assertEquals(new BigDecimal(b.group(2)).scale(), new BigDecimal(b.group(1)).scale(), b.group());
         assertArrayEquals(before, Files.readAllBytes(mechanism));
@@ -115,9 +110,9 @@ class FitCommandTest {
     void unknownTermsAndMissingRecordsAreUsageErrors() throws Exception {
         assertEquals(ExitCode.USAGE_OR_INPUT, run("fit", "--mass", "1", "--centroid-distance", "0.5",
                 "--pivot-inertia", "0.3", "--session", "x.csv", "--terms", "viscous,magnetic"));
-        assertTrue(err.toString().contains("'magnetic' is not one of"), err.toString());
+        assertTrue(cli.err().contains("'magnetic' is not one of"), cli.err());
         assertEquals(ExitCode.USAGE_OR_INPUT, run("fit", "--mass", "1", "--centroid-distance", "0.5",
                 "--pivot-inertia", "0.3"));
-        assertTrue(err.toString().contains("which records?"), err.toString());
+        assertTrue(cli.err().contains("which records?"), cli.err());
     }
 }

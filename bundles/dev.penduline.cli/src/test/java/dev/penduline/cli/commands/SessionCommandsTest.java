@@ -8,8 +8,6 @@ import static org.junit.jupiter.api.Assertions.assertEquals;
 import static org.junit.jupiter.api.Assertions.assertFalse;
 import static org.junit.jupiter.api.Assertions.assertTrue;
 
-import java.io.PrintWriter;
-import java.io.StringWriter;
 import java.nio.file.Files;
 import java.nio.file.Path;
 import java.nio.file.StandardOpenOption;
@@ -23,7 +21,6 @@ import org.junit.jupiter.api.io.TempDir;
 
 import dev.penduline.cli.ExitCode;
 import dev.penduline.cli.JsonTree;
-import dev.penduline.cli.PendulineCommandLine;
 import dev.penduline.physics.swing.LossVerdict;
 
 /**
@@ -37,8 +34,7 @@ class SessionCommandsTest {
     @TempDir
     Path dir;
 
-    private StringWriter out;
-    private StringWriter err;
+    private final CommandHarness cli = new CommandHarness();
 
     private static final String[] ROD = {"--mass", "2", "--centroid-distance", "0.4", "--pivot-inertia", "0.48"};
 
@@ -53,12 +49,11 @@ class SessionCommandsTest {
 
     @BeforeEach
     void clear() {
-        out = new StringWriter();
-        err = new StringWriter();
+        cli.clear();
     }
 
     private ExitCode run(String... args) {
-        return new PendulineCommandLine().run(args, new PrintWriter(out, true), new PrintWriter(err, true));
+        return cli.run(args);
     }
 
     private static String[] concat(String[] a, String... b) {
@@ -72,7 +67,7 @@ class SessionCommandsTest {
         Path file = dir.resolve(name);
         String[] args = concat(concat(new String[] {"demo-record"}, ROD), "--theta0-deg", theta0, "--offset-deg",
                 "1.5", "--duration", "30", "--rate", "200", "--still-s", "1", "--out", file.toString());
-        assertEquals(ExitCode.OK, run(concat(args, friction)), err.toString());
+        assertEquals(ExitCode.OK, run(concat(args, friction)), cli.err());
         return file;
     }
 
@@ -80,10 +75,10 @@ class SessionCommandsTest {
     void analyzeRecoversReleaseOffsetAndTheDryFrictionVerdict() throws Exception {
         // Truth: released at 1 s + 0.37 sample = 1.00185 s, offset 1.5°, pure Coulomb friction.
         Path record = demo("dry.csv", "20", "--coulomb", "0.05");
-        out = new StringWriter();
+        cli.clearOut();
         assertEquals(ExitCode.OK, run(concat(concat(new String[] {"analyze", record.toString(), "--counts-per-rev",
-                "4096", "--json"}, ROD))), err.toString());
-        Object json = JsonTree.parse(out.toString());
+                "4096", "--json"}, ROD))), cli.err());
+        Object json = JsonTree.parse(cli.out());
         // the release within 2 of its own standard uncertainties (a 95 % coverage factor, JCGM
         // 100:2008 §6.3) and within one 5 ms sample step
         assertEquals(1.00185, number(json, "release_time_s"), 2 * number(json, "release_time_uncertainty_s"));
@@ -91,7 +86,7 @@ class SessionCommandsTest {
         assertEquals(1.5, number(json, "offset_deg"), 0.02);
         assertEquals(20, number(json, "theta0_deg"), 0.1);
         assertEquals(200, number(json, "sample_rate_hz"), 1e-6);
-        assertEquals("coulomb", at(json, "dominant"), out.toString());
+        assertEquals("coulomb", at(json, "dominant"), cli.out());
         // Linear Coulomb decay, Den Hartog: 4 Tc/(m g Lc) per cycle = 4·0.05/(2·9.80665·0.4) rad = 1.4608°
         // at small angles; gravity's K sin x instead of K x makes a swing of amplitude A lose
         // A/sin A times that (energy balance, cos A2 − cos A1 = 2 sin Ā sin(ΔA/2)), 1.021 at 20°:
@@ -111,9 +106,9 @@ class SessionCommandsTest {
         Path parts = Files.writeString(project.resolve("parts.csv"),
                 "name,shape,mass_kg,x_m,y_m,z_m,length_m,axis\narm,rod,2,0,-0.4,0,0.8,y\n");
         Path mechanism = project.resolve("arm.penduline");
-        assertEquals(ExitCode.OK, run("import-parts", parts.toString(), "--to", mechanism.toString()), err.toString());
+        assertEquals(ExitCode.OK, run("import-parts", parts.toString(), "--to", mechanism.toString()), cli.err());
         assertEquals(ExitCode.OK, run("add-session", mechanism.toString(), record.toString(), "--counts-per-rev",
-                "4096", "--name", "First release"), err.toString());
+                "4096", "--name", "First release"), cli.err());
         assertArrayEquals(bytes, Files.readAllBytes(record));
         assertEquals(modified, Files.getLastModifiedTime(record));
         assertArrayEquals(bytes, Files.readAllBytes(project.resolve("records/release.csv")));
@@ -121,10 +116,10 @@ class SessionCommandsTest {
         assertTrue(file.contains("<recordPath>records/release.csv</recordPath>"), file);
         assertTrue(file.contains("<countsPerRevolution>4096</countsPerRevolution>"), file);
         // The stored mapping reads the record again without any option.
-        out = new StringWriter();
+        cli.clearOut();
         assertEquals(ExitCode.OK, run("analyze", project.resolve("records/release.csv").toString(), "--mechanism",
-                mechanism.toString(), "--json"), err.toString());
-        assertEquals("viscous", at(JsonTree.parse(out.toString()), "dominant"), out.toString());
+                mechanism.toString(), "--json"), cli.err());
+        assertEquals("viscous", at(JsonTree.parse(cli.out()), "dominant"), cli.out());
 
         // A different file of the same name is refused and nothing changes.
         Path other = Files.createDirectories(dir.resolve("other"));
@@ -132,7 +127,7 @@ class SessionCommandsTest {
         byte[] before = Files.readAllBytes(mechanism);
         assertEquals(ExitCode.USAGE_OR_INPUT, run("add-session", mechanism.toString(), clash.toString(),
                 "--counts-per-rev", "4096"));
-        assertTrue(err.toString().contains("already in the project"), err.toString());
+        assertTrue(cli.err().contains("already in the project"), cli.err());
         assertArrayEquals(before, Files.readAllBytes(mechanism));
         assertTrue(Files.exists(other));
     }
@@ -144,28 +139,28 @@ class SessionCommandsTest {
         Path parts = Files.writeString(project.resolve("parts.csv"),
                 "name,shape,mass_kg,x_m,y_m,z_m,length_m,axis\narm,rod,2,0,-0.4,0,0.8,y\n");
         Path mechanism = project.resolve("arm.penduline");
-        assertEquals(ExitCode.OK, run("import-parts", parts.toString(), "--to", mechanism.toString()), err.toString());
+        assertEquals(ExitCode.OK, run("import-parts", parts.toString(), "--to", mechanism.toString()), cli.err());
         assertEquals(ExitCode.OK, run("add-session", mechanism.toString(), record.toString(), "--counts-per-rev", "4096"),
-                err.toString());
+                cli.err());
         String added = Files.readString(mechanism);
         Path copy = project.resolve("records/release.csv");
         Files.writeString(copy, "# edited by hand\n", StandardOpenOption.APPEND);
 
         clear();
         assertEquals(ExitCode.USAGE_OR_INPUT, run("fit", mechanism.toString(), "--terms", "viscous", "--resamples", "0"));
-        assertTrue(err.toString().contains("session 'release': records/release.csv has changed since it was added")
-                && err.toString().contains("--accept-changed-records"), err.toString());
-        assertEquals("", out.toString(), "no result before the refusal");
+        assertTrue(cli.err().contains("session 'release': records/release.csv has changed since it was added")
+                && cli.err().contains("--accept-changed-records"), cli.err());
+        assertEquals("", cli.out(), "no result before the refusal");
         assertEquals(added, Files.readString(mechanism));
 
         clear();
-        assertEquals(ExitCode.OK, run("analyze", copy.toString(), "--mechanism", mechanism.toString()), err.toString());
-        assertTrue(err.toString().startsWith("warning: session 'release': records/release.csv has changed"), err.toString());
+        assertEquals(ExitCode.OK, run("analyze", copy.toString(), "--mechanism", mechanism.toString()), cli.err());
+        assertTrue(cli.err().startsWith("warning: session 'release': records/release.csv has changed"), cli.err());
 
         clear();
         assertEquals(ExitCode.OK, run("fit", mechanism.toString(), "--terms", "viscous", "--resamples", "0",
-                "--accept-changed-records"), err.toString());
-        assertTrue(err.toString().startsWith("note: session 'release': records/release.csv has changed"), err.toString());
+                "--accept-changed-records"), cli.err());
+        assertTrue(cli.err().startsWith("note: session 'release': records/release.csv has changed"), cli.err());
         String sha = HexFormat.of().formatHex(MessageDigest.getInstance("SHA-256").digest(Files.readAllBytes(copy)));
         String stored = Files.readString(mechanism);
         assertTrue(stored.contains("<contentHash>" + sha + "</contentHash>"), stored);
@@ -173,15 +168,15 @@ class SessionCommandsTest {
 
         clear();
         assertEquals(ExitCode.OK, run("fit", mechanism.toString(), "--terms", "viscous", "--resamples", "0", "--no-save"),
-                err.toString());
-        assertFalse(err.toString().contains("changed"), "the accepted content is the session's now: " + err);
+                cli.err());
+        assertFalse(cli.err().contains("changed"), "the accepted content is the session's now: " + cli.err());
     }
 
     @Test
     void aBadCellNamesFileLineAndColumn() throws Exception {
         Path record = Files.writeString(dir.resolve("bad.csv"), "time_s,angle_deg\n0,1\n0.01,1\n0.02,x\n");
         assertEquals(ExitCode.USAGE_OR_INPUT, run("analyze", record.toString()));
-        assertTrue(err.toString().contains("bad.csv:4") && err.toString().contains("angle_deg"), err.toString());
+        assertTrue(cli.err().contains("bad.csv:4") && cli.err().contains("angle_deg"), cli.err());
     }
 
     /** The truth.csv row of a record, split at the commas. */
@@ -194,9 +189,9 @@ class SessionCommandsTest {
     void jsonGivesTheStopAndBothEndsOfTheStictionBand() throws Exception {
         String[] truth = truth("lid-250hz");
         assertEquals(ExitCode.OK, run("analyze", STOP_RECORDS.resolve("lid-250hz.csv").toString(), "--mass", truth[1],
-                "--centroid-distance", truth[2], "--pivot-inertia", truth[3], "--json"), err.toString());
-        Object stop = at(JsonTree.parse(out.toString()), "stop");
-        assertEquals(Boolean.TRUE, at(stop, "stopped"), out.toString());
+                "--centroid-distance", truth[2], "--pivot-inertia", truth[3], "--json"), cli.err());
+        Object stop = at(JsonTree.parse(cli.out()), "stop");
+        assertEquals(Boolean.TRUE, at(stop, "stopped"), cli.out());
         double period = Double.parseDouble(truth[15]);
         double stiction = Double.parseDouble(truth[6]);
         double k = Double.parseDouble(truth[1]) * 9.80665 * Double.parseDouble(truth[2]);
@@ -214,8 +209,8 @@ class SessionCommandsTest {
         // release-10deg.csv comes to rest 0.015° from the equilibrium (the simulator's truth), a sixth of an
         // encoder count: the stop cannot show stiction there
         assertEquals(ExitCode.OK, run("analyze", HATCH.resolve("records/release-10deg.csv").toString(), "--mechanism",
-                HATCH.resolve("hatch.penduline").toString()), err.toString());
-        String report = out.toString();
+                HATCH.resolve("hatch.penduline").toString()), cli.err());
+        String report = cli.out();
         assertTrue(report.startsWith("Swing record"), report);
         assertTrue(report.contains("\n" + LossVerdict.HEADING + ": "), report);
         assertFalse(report.contains("Verdict"), report);
@@ -227,9 +222,9 @@ class SessionCommandsTest {
     @Test
     void jsonGivesNullNotZeroForALowerEndTheStopCannotShow() {
         assertEquals(ExitCode.OK, run("analyze", HATCH.resolve("records/release-10deg.csv").toString(), "--mechanism",
-                HATCH.resolve("hatch.penduline").toString(), "--json"), err.toString());
-        Object stop = at(JsonTree.parse(out.toString()), "stop");
-        assertTrue(has(stop, "stiction_lower_bound_n_m") && at(stop, "stiction_lower_bound_n_m") == null, out.toString());
+                HATCH.resolve("hatch.penduline").toString(), "--json"), cli.err());
+        Object stop = at(JsonTree.parse(cli.out()), "stop");
+        assertTrue(has(stop, "stiction_lower_bound_n_m") && at(stop, "stiction_lower_bound_n_m") == null, cli.out());
         assertTrue(number(stop, "stiction_upper_bound_n_m") > 0, String.valueOf(stop));
         assertTrue(number(stop, "stiction_resolution_n_m") > 0, String.valueOf(stop));
     }

@@ -5,8 +5,6 @@ import static dev.penduline.cli.JsonTree.number;
 import static org.junit.jupiter.api.Assertions.assertEquals;
 import static org.junit.jupiter.api.Assertions.assertTrue;
 
-import java.io.PrintWriter;
-import java.io.StringWriter;
 import java.nio.file.Files;
 import java.nio.file.Path;
 import java.util.Arrays;
@@ -19,18 +17,16 @@ import org.junit.jupiter.api.io.TempDir;
 
 import dev.penduline.cli.ExitCode;
 import dev.penduline.cli.JsonTree;
-import dev.penduline.cli.PendulineCommandLine;
 
 class SimulateCommandTest {
 
     @TempDir
     Path dir;
 
-    private final StringWriter out = new StringWriter();
-    private final StringWriter err = new StringWriter();
+    private final CommandHarness cli = new CommandHarness();
 
     private ExitCode run(String... args) {
-        return new PendulineCommandLine().run(args, new PrintWriter(out, true), new PrintWriter(err, true));
+        return cli.run(args);
     }
 
     @Test
@@ -41,10 +37,10 @@ class SimulateCommandTest {
         Path csv = dir.resolve("swing.csv");
         assertEquals(ExitCode.OK, run("simulate", "--mass", "1", "--centroid-distance", "1", "--pivot-inertia", "1",
                 "--theta0-deg", "2", "--duration", "5", "--rate", "100", "--out", csv.toString(), "--json"),
-                err.toString());
-        Object json = JsonTree.parse(out.toString());
-        assertEquals(2.006562, number(json, "periods_s", 0), 2e-6, out.toString());
-        assertEquals(Boolean.FALSE, at(json, "stopped"), out.toString());
+                cli.err());
+        Object json = JsonTree.parse(cli.out());
+        assertEquals(2.006562, number(json, "periods_s", 0), 2e-6, cli.out());
+        assertEquals(Boolean.FALSE, at(json, "stopped"), cli.out());
         List<String> lines = Files.readAllLines(csv);
         assertEquals("time_s,angle_deg,velocity_deg_s", lines.get(0));
         assertEquals(501 + 1, lines.size());
@@ -66,15 +62,15 @@ class SimulateCommandTest {
         assertTrue(Math.sin(Math.abs(x2)) < 0.05, "at rest inside the static band");
         String[] args = {"simulate", "--mass", "1", "--centroid-distance", "1", "--pivot-inertia", "1",
             "--theta0-deg", "10", "--coulomb", String.valueOf(0.05 * mgl), "--duration", "5"};
-        assertEquals(ExitCode.OK, run(args), err.toString());
-        String text = out.toString();
+        assertEquals(ExitCode.OK, run(args), cli.err());
+        String text = cli.out();
         assertTrue(text.contains(String.format(Locale.ROOT, ", %.3f° from the hanging equilibrium", Math.toDegrees(x2))),
                 "the rest angle by the energy balance, " + Math.toDegrees(x2) + "°: " + text);
         assertTrue(text.contains("Caution"), text);
-        out.getBuffer().setLength(0);
-        assertEquals(ExitCode.OK, run(append(args, "--json")), err.toString());
-        Object json = JsonTree.parse(out.toString());
-        assertEquals(Boolean.TRUE, at(json, "stopped"), out.toString());
+        cli.clearOut();
+        assertEquals(ExitCode.OK, run(append(args, "--json")), cli.err());
+        Object json = JsonTree.parse(cli.out());
+        assertEquals(Boolean.TRUE, at(json, "stopped"), cli.out());
         assertEquals(Math.toDegrees(x2), number(json, "rest_angle_deg"), 1e-6);
         // two half-swings, each within the large-amplitude correction θ0²/16 of half the
         // small-angle period 2π sqrt(J0/(m g Lc)) (Halliday, Resnick & Walker, as above)
@@ -112,28 +108,28 @@ class SimulateCommandTest {
     @Test
     void badFrictionAndMissingMechanismAreUsageErrors() {
         assertEquals(ExitCode.USAGE_OR_INPUT, run("simulate", "--theta0-deg", "10"));
-        assertTrue(err.toString().contains("which mechanism?"), err.toString());
+        assertTrue(cli.err().contains("which mechanism?"), cli.err());
         assertEquals(ExitCode.USAGE_OR_INPUT, run("simulate", "--mass", "1", "--centroid-distance", "1",
                 "--pivot-inertia", "1", "--theta0-deg", "10", "--coulomb", "0.5", "--stiction", "0.1"));
-        assertTrue(err.toString().contains("stiction"), err.toString());
+        assertTrue(cli.err().contains("stiction"), cli.err());
         assertEquals(ExitCode.USAGE_OR_INPUT, run("simulate", "--mass", "1", "--centroid-distance", "1",
                 "--pivot-inertia", "0.5", "--theta0-deg", "10"));
-        assertTrue(err.toString().contains("pivotInertia"), err.toString());
+        assertTrue(cli.err().contains("pivotInertia"), cli.err());
     }
 
     @Test
     void aMechanismFileIsSimulatedWithItsStoredFitUnlessToldOtherwise() {
         Path hatch = Path.of("..", "..", "samples", "inspection-hatch", "hatch.penduline");
-        assertEquals(ExitCode.OK, run("simulate", hatch.toString(), "--theta0-deg", "20", "--json"), err.toString());
-        String withFit = out.toString();
+        assertEquals(ExitCode.OK, run("simulate", hatch.toString(), "--theta0-deg", "20", "--json"), cli.err());
+        String withFit = cli.out();
         Object fitted = JsonTree.parse(withFit);
         assertTrue(at(fitted, "fit") instanceof String id && id.startsWith("fit-"), withFit);
         double viscous = number(fitted, "friction", "viscous_N_m_s_rad");
         assertTrue(viscous > 0 && viscous < 1, "the stored fit's viscous term is used: " + withFit);
-        out.getBuffer().setLength(0);
+        cli.clearOut();
         assertEquals(ExitCode.OK, run("simulate", hatch.toString(), "--theta0-deg", "20", "--no-fit", "--json"),
-                err.toString());
-        String without = out.toString();
+                cli.err());
+        String without = cli.out();
         Object unfitted = JsonTree.parse(without);
         assertEquals("none", at(unfitted, "fit"), without);
         assertEquals(0.0, number(unfitted, "friction", "viscous_N_m_s_rad"), without);

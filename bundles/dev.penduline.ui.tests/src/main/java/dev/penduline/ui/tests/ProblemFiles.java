@@ -14,6 +14,7 @@ import dev.penduline.records.swing.SwingImportOptions;
 import dev.penduline.services.DemoRecords;
 import dev.penduline.services.MechanismLoader;
 import dev.penduline.services.NewMechanismFile;
+import dev.penduline.services.PartsImport;
 import dev.penduline.services.SessionRecords;
 
 /**
@@ -53,14 +54,14 @@ final class ProblemFiles {
         Path csv = Files.writeString(scratch.resolve("marker-arm-parts.csv"), TestMechanisms.ROD_AND_DISC,
                 StandardCharsets.UTF_8);
         valid = folder.resolve("valid.penduline");
-        NewMechanismFile.write("Valid arm (invented)", Optional.of(NewMechanismFile.readPartsList(csv)), valid);
+        NewMechanismFile.write("Valid arm (invented)", Optional.of(PartsImport.readPartsList(csv)), valid);
         String text = Files.readString(valid);
         assertTrue(text.contains(ARM_MASS), "the arm's mass as written: " + text);
 
         badPart = Files.writeString(folder.resolve("bad-part.penduline"), text.replace(ARM_MASS, "<mass>-2.0</mass>"));
 
         sessions = folder.resolve("sessions.penduline");
-        NewMechanismFile.write("Tested arm (invented)", Optional.of(NewMechanismFile.readPartsList(csv)), sessions);
+        NewMechanismFile.write("Tested arm (invented)", Optional.of(PartsImport.readPartsList(csv)), sessions);
         // INVENTED records: viscous 0.01 N·m·s/rad, Coulomb 0.04 N·m; 4 s at 100 Hz in degrees
         FrictionTorques truth = new FrictionTorques(0.01, 0.04, 0, 0);
         int seed = 5;

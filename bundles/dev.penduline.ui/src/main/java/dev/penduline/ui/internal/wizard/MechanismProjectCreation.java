@@ -15,6 +15,7 @@ import org.eclipse.core.runtime.SubMonitor;
 import dev.penduline.records.parts.PartsList;
 import dev.penduline.services.InputException;
 import dev.penduline.services.NewMechanismFile;
+import dev.penduline.services.PartsImport;
 import dev.penduline.ui.internal.preferences.WorkbenchDefaults;
 
 /**
@@ -51,7 +52,7 @@ public final class MechanismProjectCreation {
             IProgressMonitor monitor) throws InputException, CoreException {
         SubMonitor progress = SubMonitor.convert(monitor, "Creating the project " + projectName, 4);
         Optional<PartsList> parts = partsList.isPresent()
-                ? Optional.of(NewMechanismFile.readPartsList(partsList.get()))
+                ? Optional.of(PartsImport.readPartsList(partsList.get()))
                 : Optional.empty();
         progress.worked(1);
         IProject project = ResourcesPlugin.getWorkspace().getRoot().getProject(projectName);
