@@ -83,4 +83,19 @@ public final class JsonTree {
         Object[] parent = Arrays.copyOf(steps, steps.length - 1);
         return at(tree, parent) instanceof Map<?, ?> m && m.containsKey(steps[steps.length - 1]);
     }
+
+    /**
+     * The number at a path of a JSON text, failing the test when it is missing.
+     *
+     * @param json  the text, e.g. a command's {@code --json} output
+     * @param steps the path of keys and indices
+     * @return the number
+     */
+    public static double requiredNumber(String json, Object... steps) {
+        final double v = number(parse(json), steps);
+        if (Double.isNaN(v)) {
+            throw new AssertionError(Arrays.toString(steps) + " missing in " + json);
+        }
+        return v;
+    }
 }

@@ -1,13 +1,11 @@
 package dev.penduline.cli.commands;
 
 import static org.junit.jupiter.api.Assertions.assertEquals;
-import static org.junit.jupiter.api.Assertions.assertFalse;
 import static org.junit.jupiter.api.Assertions.assertTrue;
 
 import java.io.IOException;
 import java.nio.file.Files;
 import java.nio.file.Path;
-import java.util.Arrays;
 import java.util.Map;
 
 import org.junit.jupiter.api.Test;
@@ -27,13 +25,6 @@ class InertiaCommandTest {
         return cli.run(args);
     }
 
-    /** A number of the {@code --json} output at a path of keys and indices. */
-    private static double number(String json, Object... path) {
-        double v = JsonTree.number(JsonTree.parse(json), path);
-        assertFalse(Double.isNaN(v), Arrays.toString(path) + " missing in " + json);
-        return v;
-    }
-
     @Test
     void slenderRodHungFromItsEndGivesTheHandbookInertia() throws IOException {
         // Slender rod about its end: J0 = m L²/3 (Meriam & Kraige, Dynamics, Table D/4);
@@ -42,11 +33,11 @@ class InertiaCommandTest {
                 "name,shape,mass_kg,x_m,y_m,z_m,length_m,axis\narm,rod,3,0,-0.6,0,1.2,y\n");
         assertEquals(ExitCode.OK, run("inertia", csv.toString(), "--json"), cli.err());
         String json = cli.out();
-        assertEquals(3.0, number(json, "mass_kg"), 1e-12);
-        assertEquals(1.44, number(json, "pivot_inertia_kg_m2"), 1e-12);
-        assertEquals(0.6, number(json, "centroid_distance_m"), 1e-12);
-        assertEquals(0.8, number(json, "equivalent_length_m"), 1e-12);
-        assertEquals(1.0, number(json, "parts", 0, "share"), 1e-12);
+        assertEquals(3.0, JsonTree.requiredNumber(json, "mass_kg"), 1e-12);
+        assertEquals(1.44, JsonTree.requiredNumber(json, "pivot_inertia_kg_m2"), 1e-12);
+        assertEquals(0.6, JsonTree.requiredNumber(json, "centroid_distance_m"), 1e-12);
+        assertEquals(0.8, JsonTree.requiredNumber(json, "equivalent_length_m"), 1e-12);
+        assertEquals(1.0, JsonTree.requiredNumber(json, "parts", 0, "share"), 1e-12);
     }
 
     @Test
@@ -62,9 +53,9 @@ class InertiaCommandTest {
         double ur = 0.005 / Math.sqrt(3);
         double uj = Math.sqrt(Math.pow(1 * um, 2) + Math.pow(2 * 2 * 1 * ur, 2));
         // Monte Carlo standard deviations of 10 000 draws: within 3 % (standard error ≈ 0.7 %)
-        assertEquals(um, number(json, "mass_kg_sigma"), 0.03 * um);
-        assertEquals(ur, number(json, "centroid_distance_m_sigma"), 0.03 * ur);
-        assertEquals(uj, number(json, "pivot_inertia_kg_m2_sigma"), 0.03 * uj);
+        assertEquals(um, JsonTree.requiredNumber(json, "mass_kg_sigma"), 0.03 * um);
+        assertEquals(ur, JsonTree.requiredNumber(json, "centroid_distance_m_sigma"), 0.03 * ur);
+        assertEquals(uj, JsonTree.requiredNumber(json, "pivot_inertia_kg_m2_sigma"), 0.03 * uj);
         assertTrue(JsonTree.at(JsonTree.parse(json), "tolerance_spread") instanceof Map, json);
         cli.clearOut();
         assertEquals(ExitCode.OK, run("inertia", csv.toString()), cli.err());

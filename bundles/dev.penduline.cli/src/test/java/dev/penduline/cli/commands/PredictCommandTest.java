@@ -2,7 +2,6 @@ package dev.penduline.cli.commands;
 
 import static dev.penduline.cli.JsonTree.at;
 import static org.junit.jupiter.api.Assertions.assertEquals;
-import static org.junit.jupiter.api.Assertions.assertFalse;
 import static org.junit.jupiter.api.Assertions.assertTrue;
 
 import java.nio.file.Path;
@@ -24,13 +23,6 @@ class PredictCommandTest {
         return cli.run(args);
     }
 
-    /** A number of the {@code --json} output at a path of keys and indices. */
-    private static double number(String json, Object... path) {
-        double v = JsonTree.number(JsonTree.parse(json), path);
-        assertFalse(Double.isNaN(v), Arrays.toString(path) + " missing in " + json);
-        return v;
-    }
-
     @Test
     void undampedPassageSpeedFollowsTheEnergyBalance() {
         // point mass on 1 m in standard gravity, no friction, released at 60°: passing the bottom,
@@ -41,9 +33,9 @@ class PredictCommandTest {
         String json = cli.out();
         Object tree = JsonTree.parse(json);
         assertEquals("options", at(tree, "fit"), json);
-        assertEquals(-Math.sqrt(9.80665), number(json, "at_angle", "angular_velocity_rad_s", "value"), 1e-6);
-        assertEquals(Math.sqrt(9.80665), number(json, "at_angle", "tip_speed_m_s", "value"), 1e-4);
-        assertEquals(0.5 * 9.80665, number(json, "at_angle", "kinetic_energy_J", "value"), 1e-3);
+        assertEquals(-Math.sqrt(9.80665), JsonTree.requiredNumber(json, "at_angle", "angular_velocity_rad_s", "value"), 1e-6);
+        assertEquals(Math.sqrt(9.80665), JsonTree.requiredNumber(json, "at_angle", "tip_speed_m_s", "value"), 1e-4);
+        assertEquals(0.5 * 9.80665, JsonTree.requiredNumber(json, "at_angle", "kinetic_energy_J", "value"), 1e-3);
         assertEquals(Boolean.FALSE, at(tree, "settled"), json);
     }
 
@@ -56,9 +48,9 @@ class PredictCommandTest {
         assertTrue(at(tree, "fit") instanceof String id && id.startsWith("fit-"), json);
         for (String[] key : new String[][] {{"settle_time_s"}, {"half_swings"}, {"peak_angular_velocity_rad_s"},
             {"peak_time_s"}, {"max_overshoot_deg"}, {"at_angle", "kinetic_energy_J"}}) {
-            double value = number(json, (Object[]) concat(key, new String[] {"value"}));
-            double low = number(json, (Object[]) concat(key, new String[] {"low"}));
-            double high = number(json, (Object[]) concat(key, new String[] {"high"}));
+            double value = JsonTree.requiredNumber(json, (Object[]) concat(key, new String[] {"value"}));
+            double low = JsonTree.requiredNumber(json, (Object[]) concat(key, new String[] {"low"}));
+            double high = JsonTree.requiredNumber(json, (Object[]) concat(key, new String[] {"high"}));
             assertTrue(low <= high, Arrays.toString(key) + ": " + low + " > " + high);
             assertTrue(Double.isFinite(value), Arrays.toString(key));
         }
@@ -104,13 +96,13 @@ class PredictCommandTest {
         assertEquals(ExitCode.OK, run(args), cli.err());
         String json = cli.out();
         assertEquals(Boolean.TRUE, at(JsonTree.parse(json), "design", "meets"), json);
-        double total = number(json, "design", "total");
+        double total = JsonTree.requiredNumber(json, "design", "total");
         assertTrue(total > 0.01, json);
         cli.clear();
         // the simulate command, told the found damping, settles inside ±0.5° within the 8 s asked for
         assertEquals(ExitCode.OK, run(concat(concat(new String[] {"simulate"}, arm), new String[] {"--viscous",
             Double.toString(total), "--theta0-deg", "17", "--band-deg", "0.5", "--duration", "20", "--json"})), cli.err());
-        double settle = number(cli.out(), "settle_time_s");
+        double settle = JsonTree.requiredNumber(cli.out(), "settle_time_s");
         // (to the root finder's accuracy: the answer is the smallest damping that meets the spec)
         assertTrue(settle <= 8 + 1e-6 && settle > 7, "settles after " + settle);
     }
@@ -131,9 +123,9 @@ class PredictCommandTest {
                 "--set", "bob.y=-500mm", "--json"), cli.err());
         String json = cli.out();
         double g = 9.80665;
-        assertEquals(2 * Math.PI * Math.sqrt(1 / g), number(json, "what_if", "baseline", "small_angle_period_s"), 1e-9);
-        assertEquals(2 * Math.PI * Math.sqrt(0.5 / g), number(json, "what_if", "changed", "small_angle_period_s"), 1e-9);
-        assertEquals(2 * 0.25, number(json, "what_if", "changed", "pivot_inertia_kg_m2"), 1e-12);
+        assertEquals(2 * Math.PI * Math.sqrt(1 / g), JsonTree.requiredNumber(json, "what_if", "baseline", "small_angle_period_s"), 1e-9);
+        assertEquals(2 * Math.PI * Math.sqrt(0.5 / g), JsonTree.requiredNumber(json, "what_if", "changed", "small_angle_period_s"), 1e-9);
+        assertEquals(2 * 0.25, JsonTree.requiredNumber(json, "what_if", "changed", "pivot_inertia_kg_m2"), 1e-12);
         cli.clear();
         assertEquals(ExitCode.OK, run("predict", parts.toString(), "--viscous", "0.05", "--theta0-deg", "5",
                 "--set", "bob.y=-500mm"), cli.err());
